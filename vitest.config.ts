@@ -1,0 +1,28 @@
+import { defineConfig } from 'vitest/config';
+
+// Two projects: `unit` needs nothing running; `app` needs the database, mail sink and built server
+// that scripts/test.mjs starts and describes through environment variables (see DEVELOPERS.md).
+export default defineConfig({
+  test: {
+    projects: [
+      {
+        test: {
+          name: 'unit',
+          include: ['shared/**/*.test.ts', 'src/**/*.test.ts', 'db/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts'],
+          environment: 'node',
+          testTimeout: 60_000,
+        },
+      },
+      {
+        test: {
+          name: 'app',
+          include: ['tests/api/**/*.test.ts', 'tests/browser/**/*.test.ts'],
+          environment: 'node',
+          testTimeout: 120_000,
+          hookTimeout: 120_000,
+          fileParallelism: false,
+        },
+      },
+    ],
+  },
+});

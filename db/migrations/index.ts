@@ -1,0 +1,11 @@
+import type { Migration, MigrationProvider } from 'kysely';
+import * as createAccounts from './2026_12_02_1400_create_accounts.ts';
+
+/** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
+export const migrations: Record<string, Migration> = {
+  '2026_12_02_1400_create_accounts': createAccounts,
+};
+
+export const migrationProvider: MigrationProvider = {
+  getMigrations: async () => migrations,
+};

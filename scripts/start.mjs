@@ -1,0 +1,75 @@
+// `npm start`: set up whatever is missing, then serve Threadway on http://127.0.0.1:4321.
+// Reuses the cluster in .data/pg (or a folder under /var/tmp when root's postgres user cannot reach .data),
+// migrates, seeds the demo (idempotent), runs the local fake mail server and serves the built app.
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { ROOT, ensureNodeModules, ensurePostgres, log } from './lib/system.mjs';
+import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
+import { findFreePort, waitForHttp } from './lib/ports.mjs';
+import { buildApp, runTs, serveApp } from './lib/app.mjs';
+import { startMailSink } from './lib/mailSink.mjs';
+import { clusterLocation } from './lib/cluster.mjs';
+
+ensureNodeModules();
+const pgBin = ensurePostgres();
+const { dir: pgDir, portFile } = clusterLocation();
+const port = existsSync(portFile) ? Number(readFileSync(portFile, 'utf8')) : await findFreePort(54329);
+if (initCluster(pgBin, pgDir, port)) {
+  writeFileSync(portFile, String(port));
+  log(`created a PostgreSQL cluster in ${pgDir} (port ${port}).`);
+}
+startCluster(pgBin, pgDir);
+ensureDatabase(pgBin, port, 'threadway');
+const env = {
+  DATABASE_URL: databaseUrl(port, 'threadway'),
+  DEV_TOOLS: 'true',
+  MAIL_CAPTURE_DIR: path.join(ROOT, '.data', 'mail'),
+};
+runTs('db/migrate.ts', env);
+runTs('db/seed/index.ts', env);
+mkdirSync(env.MAIL_CAPTURE_DIR, { recursive: true });
+const mail = await startMailSink({ dir: env.MAIL_CAPTURE_DIR, port: await findFreePort(2525) });
+buildApp();
+
+const appPort = Number(process.env.PORT ?? (await findFreePort(4321)));
+const origin = `http://127.0.0.1:${appPort}`;
+const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: origin } });
+await waitForHttp(origin);
+
+console.log(`
+  Threadway is running at ${origin}
+  (also ${origin.replace('127.0.0.1', 'localhost')})
+
+  Demo sign-ins (password for all: ${readDemoPassword()}):
+${readDemoAccounts().map((a) => `    ${a.role.padEnd(8)} ${a.email.padEnd(36)} ${a.displayName}`).join('\n')}
+
+  Captured e-mail (fake mail server on 127.0.0.1:${mail.port}): ${origin}/dev/mail
+  Stop with Ctrl-C (the database stops too; or later: npm run db:stop).
+`);
+
+let stopping = false;
+async function shutdown() {
+  if (stopping) return;
+  stopping = true;
+  log('stopping…');
+  server.kill('SIGTERM');
+  await mail.close();
+  stopCluster(pgBin, pgDir);
+  log('stopped.');
+  process.exit(0);
+}
+process.on('SIGINT', shutdown);
+process.on('SIGTERM', shutdown);
+server.on('exit', (code) => {
+  if (!stopping) {
+    log(`the app exited (code ${code}).`);
+    shutdown();
+  }
+});
+
+function readDemoAccounts() {
+  return JSON.parse(readFileSync(path.join(ROOT, 'db', 'seed', 'demo-accounts.json'), 'utf8')).accounts;
+}
+function readDemoPassword() {
+  return JSON.parse(readFileSync(path.join(ROOT, 'db', 'seed', 'demo-accounts.json'), 'utf8')).password;
+}

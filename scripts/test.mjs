@@ -1,0 +1,79 @@
+// `npm test`: the same bootstrap as `npm start`, on a throwaway cluster (temporary folder, free port,
+// fsync off), then every test (unit, API against the real database, browser). Torn down even on failure.
+// Extra arguments go to vitest, e.g. `npm test -- tests/api/auth.test.ts`.
+import { mkdtempSync, mkdirSync, readFileSync, rmSync, existsSync, chmodSync } from 'node:fs';
+import { spawn } from 'node:child_process';
+import path from 'node:path';
+import { ROOT, ensureDebianPackages, ensureNodeModules, ensurePostgres, log } from './lib/system.mjs';
+import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
+import { findFreePort, waitForHttp } from './lib/ports.mjs';
+import { buildApp, runTs, serveApp } from './lib/app.mjs';
+import { startMailSink } from './lib/mailSink.mjs';
+
+ensureNodeModules();
+const pgBin = ensurePostgres();
+// Browser tests drive Debian's chromium; reference tests use Debian's networkx and shapely.
+ensureDebianPackages(['chromium', 'fonts-liberation', 'python3-networkx', 'python3-shapely']);
+
+const scratch = mkdtempSync('/tmp/threadway-test-');
+chmodSync(scratch, 0o755);
+const pgDir = path.join(scratch, 'pg');
+const cleanups = [];
+let exitCode = 1;
+try {
+  const pgPort = await findFreePort();
+  initCluster(pgBin, pgDir, pgPort, { fast: true });
+  startCluster(pgBin, pgDir);
+  cleanups.push(() => stopCluster(pgBin, pgDir, 'immediate'));
+  ensureDatabase(pgBin, pgPort, 'threadway');
+  const mailDir = path.join(scratch, 'mail');
+  mkdirSync(mailDir);
+  const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), DEV_TOOLS: 'true', MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1' };
+  runTs('db/migrate.ts', env);
+  runTs('db/seed/index.ts', env);
+  const mail = await startMailSink({ dir: mailDir });
+  cleanups.push(() => mail.close());
+  buildApp({ force: process.env.CI === 'true' });
+  const appPort = await findFreePort();
+  const appUrl = `http://127.0.0.1:${appPort}`;
+  const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: appUrl }, quiet: true });
+  cleanups.push(() => server.kill('SIGTERM'));
+  await waitForHttp(appUrl);
+  log(`app under test at ${appUrl}; database ${env.DATABASE_URL}`);
+
+  const outputDir = path.join(ROOT, 'test-output');
+  rmSync(outputDir, { recursive: true, force: true });
+  mkdirSync(outputDir, { recursive: true });
+  const vitestEnv = {
+    ...process.env,
+    ...env,
+    SMTP_PORT: String(mail.port),
+    APP_URL: appUrl,
+    TEST_OUTPUT_DIR: outputDir,
+    CHROMIUM_PATH: '/usr/bin/chromium',
+    PG_BIN: pgBin,
+  };
+  const jsonReport = path.join(outputDir, 'vitest.json');
+  const args = [path.join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${jsonReport}`, ...process.argv.slice(2)];
+  exitCode = await new Promise((resolve) => {
+    const child = spawn(process.execPath, args, { cwd: ROOT, env: vitestEnv, stdio: 'inherit' });
+    child.on('exit', (code, signal) => resolve(code ?? (signal ? 1 : 0)));
+  });
+  if (existsSync(jsonReport)) {
+    const report = JSON.parse(readFileSync(jsonReport, 'utf8'));
+    console.log(`\n${report.numPassedTests} passed, ${report.numFailedTests} failed, ${report.numPendingTests + report.numTodoTests} skipped`);
+  }
+} catch (error) {
+  console.error(error);
+  exitCode = 1;
+} finally {
+  for (const cleanup of cleanups.reverse()) {
+    try {
+      await cleanup();
+    } catch (error) {
+      console.error('cleanup failed:', error);
+    }
+  }
+  rmSync(scratch, { recursive: true, force: true });
+}
+process.exit(exitCode);

@@ -38,7 +38,6 @@ await waitForHttp(origin);
 
 console.log(`
   Threadway is running at ${origin}
-  (also ${origin.replace('127.0.0.1', 'localhost')})
 
   Demo sign-ins (password for all: ${readDemoPassword()}):
 ${readDemoAccounts().map((a) => `    ${a.role.padEnd(8)} ${a.email.padEnd(36)} ${a.displayName}`).join('\n')}

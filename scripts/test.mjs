@@ -20,6 +20,25 @@ chmodSync(scratch, 0o755);
 const pgDir = path.join(scratch, 'pg');
 const cleanups = [];
 let exitCode = 1;
+let tornDown = false;
+async function tearDown() {
+  if (tornDown) return;
+  tornDown = true;
+  for (const cleanup of cleanups.reverse()) {
+    try {
+      await cleanup();
+    } catch (error) {
+      console.error('cleanup failed:', error);
+    }
+  }
+  rmSync(scratch, { recursive: true, force: true });
+}
+for (const signal of ['SIGINT', 'SIGTERM']) {
+  process.on(signal, async () => {
+    await tearDown();
+    process.exit(130);
+  });
+}
 try {
   const pgPort = await findFreePort();
   initCluster(pgBin, pgDir, pgPort, { fast: true });
@@ -67,13 +86,6 @@ try {
   console.error(error);
   exitCode = 1;
 } finally {
-  for (const cleanup of cleanups.reverse()) {
-    try {
-      await cleanup();
-    } catch (error) {
-      console.error('cleanup failed:', error);
-    }
-  }
-  rmSync(scratch, { recursive: true, force: true });
+  await tearDown();
 }
 process.exit(exitCode);

@@ -31,6 +31,16 @@ export default defineConfig({
       DEV_TOOLS: envField.boolean({ context: 'server', access: 'secret', default: false }),
       PUBLIC_ORIGIN: envField.string({ context: 'server', access: 'secret', optional: true }),
       RATE_LIMIT_SCALE: envField.number({ context: 'server', access: 'secret', default: 1 }),
+      // Photo storage (S3 API). npm start / npm test point these at the local s3rver fake on loopback.
+      S3_ENDPOINT: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_BUCKET: envField.string({ context: 'server', access: 'secret', default: 'uploads' }),
+      S3_REGION: envField.string({ context: 'server', access: 'secret', default: 'us-east-1' }),
+      S3_ACCESS_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      S3_SECRET_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // HMAC key for class invitation links; when unset, one is generated once and kept in the database.
+      INVITE_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
+      // Seconds between lesson-release sweeps (e-mails to students when a lesson opens).
+      RELEASE_SWEEP_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
     },
   },
 });

@@ -7,6 +7,15 @@ export interface Database {
   password_reset: PasswordResetTable;
   email_message: EmailMessageTable;
   rate_limit: RateLimitTable;
+  template: TemplateTable;
+  template_version: TemplateVersionTable;
+  class: ClassTable;
+  lesson: LessonTable;
+  enrollment: EnrollmentTable;
+  class_invitation: ClassInvitationTable;
+  lesson_progress: LessonProgressTable;
+  lesson_photo: LessonPhotoTable;
+  server_secret: ServerSecretTable;
 }
 
 export type Role = 'quilter' | 'teacher' | 'admin';
@@ -65,4 +74,110 @@ export interface RateLimitTable {
   key: string;
   hits: number;
   window_ends_at: Date;
+}
+
+// ── Teaching (migration 2026_12_02_1600_create_teaching) ──
+
+export type TemplateVisibility = 'public' | 'class' | 'unlisted';
+export type Difficulty = 'beginner' | 'intermediate' | 'advanced';
+
+export interface TemplateTable {
+  id: Generated<string>;
+  owner_id: string;
+  link_token: string;
+  visibility: TemplateVisibility;
+  latest_version: ColumnType<number, number | undefined, number>;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+
+/** Immutable once inserted (a database trigger refuses UPDATE). jsonb columns are parsed with zod when read. */
+export interface TemplateVersionTable {
+  id: Generated<string>;
+  template_id: string;
+  version: number;
+  title: string;
+  description: string;
+  difficulty: Difficulty;
+  motifs: string[];
+  units: UnitsPreference;
+  width: number;
+  height: number;
+  design: ColumnType<unknown, string, never>;
+  route: ColumnType<unknown, string, never>;
+  figures: ColumnType<unknown, string, never>;
+  source_design_id: string | null;
+  published_at: CreatedAt;
+}
+
+export interface ClassTable {
+  id: Generated<string>;
+  teacher_id: string;
+  title: string;
+  description: string;
+  /** A calendar date. pg reads `date` as a local-midnight Date: select it with to_char(…, 'YYYY-MM-DD'). */
+  starts_on: ColumnType<Date, string, string>;
+  price_cents: number | null;
+  currency: string | null;
+  join_code: string;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+
+export interface LessonTable {
+  id: Generated<string>;
+  class_id: string;
+  title: string;
+  release_at: ColumnType<Date, Date, Date>;
+  notes_md: string;
+  template_version_id: string;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+
+export interface EnrollmentTable {
+  class_id: string;
+  student_id: string;
+  joined_via: 'invitation' | 'join-code';
+  joined_at: CreatedAt;
+}
+
+export interface ClassInvitationTable {
+  id: Generated<string>;
+  class_id: string;
+  email: string;
+  token_hash: string;
+  expires_at: ColumnType<Date, Date, Date>;
+  used_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  used_by: ColumnType<string | null, string | null | undefined, string | null>;
+  revoked_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  created_at: CreatedAt;
+}
+
+export interface LessonProgressTable {
+  lesson_id: string;
+  student_id: string;
+  step_index: number;
+  total_steps: number;
+  finished_at: Date | null;
+  last_active_at: ColumnType<Date, Date | undefined, Date>;
+}
+
+export interface LessonPhotoTable {
+  id: string;
+  lesson_id: string;
+  student_id: string;
+  side: 'front' | 'back';
+  object_key: string;
+  thumb_key: string;
+  width: number;
+  height: number;
+  bytes: number;
+  created_at: CreatedAt;
+}
+
+export interface ServerSecretTable {
+  name: string;
+  value: string;
+  created_at: CreatedAt;
 }

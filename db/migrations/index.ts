@@ -1,9 +1,11 @@
 import type { Migration, MigrationProvider } from 'kysely';
 import * as createAccounts from './2026_12_02_1400_create_accounts.ts';
+import * as createTeaching from './2026_12_02_1600_create_teaching.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
   '2026_12_02_1400_create_accounts': createAccounts,
+  '2026_12_02_1600_create_teaching': createTeaching,
 };
 
 export const migrationProvider: MigrationProvider = {

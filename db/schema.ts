@@ -16,6 +16,9 @@ export interface Database {
   lesson_progress: LessonProgressTable;
   lesson_photo: LessonPhotoTable;
   server_secret: ServerSecretTable;
+  design: DesignTable;
+  design_version: DesignVersionTable;
+  design_route: DesignRouteTable;
 }
 
 export type Role = 'quilter' | 'teacher' | 'admin';
@@ -181,3 +184,45 @@ export interface ServerSecretTable {
   value: string;
   created_at: CreatedAt;
 }
+
+// Designs (src/server/designs/). jsonb columns are `unknown` on the way out: the repository parses them
+// with the shared schemas before anything else sees them. Kysely sends jsonb as a JSON string.
+type Jsonb = ColumnType<unknown, string, string>;
+
+export interface DesignTable {
+  id: Generated<string>;
+  owner_id: string;
+  title: string;
+  notes: ColumnType<string, string | undefined, string>;
+  data: Jsonb;
+  thumbnail_svg: string;
+  version: ColumnType<number, number | undefined, number>;
+  summary: ColumnType<unknown, string | null, string | null>;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+  deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+}
+export type DesignRow = Selectable<DesignTable>;
+
+export interface DesignVersionTable {
+  design_id: string;
+  version: number;
+  title: string;
+  notes: string;
+  data: Jsonb;
+  saved_at: CreatedAt;
+}
+export type DesignVersionRow = Selectable<DesignVersionTable>;
+
+export type DesignRouteKind = 'planned' | 'own';
+
+export interface DesignRouteTable {
+  design_id: string;
+  kind: DesignRouteKind;
+  strokes: Jsonb;
+  summary: Jsonb;
+  design_version: number;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+export type DesignRouteRow = Selectable<DesignRouteTable>;

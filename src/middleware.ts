@@ -1,0 +1,51 @@
+// Every request passes: catchErrors (outermost, so it also sees failures of the steps after it),
+// originCheck (cross-site JSON API writes → 403), authenticate (session cookie → locals.user).
+import { defineMiddleware, sequence } from 'astro:middleware';
+import { db } from './server/db.ts';
+import { problem } from './server/http.ts';
+import { isForeignApiRequest } from './server/originCheck.ts';
+import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from './server/auth/session.ts';
+
+const isApi = (url: URL) => url.pathname === '/api' || url.pathname.startsWith('/api/');
+
+const catchErrors = defineMiddleware(async (context, next) => {
+  try {
+    const response = await next();
+    // Unknown /api paths fall through to the HTML 404 page; API clients get the JSON shape instead.
+    if (isApi(context.url) && response.status === 404 && !response.headers.get('content-type')?.includes('json')) {
+      return problem(404, 'not_found', 'Not found.');
+    }
+    return response;
+  } catch (error) {
+    console.error(`[server] ${context.request.method} ${context.url.pathname} failed:`, error);
+    if (isApi(context.url)) return problem(500, 'internal', 'Something went wrong on our side. Please try again.');
+    // An empty 500 makes Astro render src/pages/500.astro.
+    return new Response(null, { status: 500 });
+  }
+});
+
+const originCheck = defineMiddleware((context, next) => {
+  if (isForeignApiRequest(context.request, context.url)) {
+    return problem(403, 'forbidden_origin', 'This request did not come from Threadway itself (Origin check failed).');
+  }
+  return next();
+});
+
+const authenticate = defineMiddleware(async (context, next) => {
+  context.locals.user = null;
+  context.locals.session = null;
+  const token = context.cookies.get(SESSION_COOKIE)?.value;
+  if (token) {
+    const result = await validateSessionToken(db, token);
+    if (result.session) {
+      context.locals.user = result.user;
+      context.locals.session = result.session;
+      if (result.refreshed) setSessionCookie(context.cookies, context.url, token, result.session.expiresAt);
+    } else {
+      deleteSessionCookie(context.cookies, context.url);
+    }
+  }
+  return next();
+});
+
+export const onRequest = sequence(catchErrors, originCheck, authenticate);

@@ -1,0 +1,17 @@
+// PUT /api/account/password — change the password (current one required); other sessions are signed out.
+import type { APIRoute } from 'astro';
+import { db } from '../../../server/db.ts';
+import { json, problem, readJson } from '../../../server/http.ts';
+import { passwordChangeSchema } from '../../../server/accounts/account.schema.ts';
+import { changePassword } from '../../../server/accounts/account.service.ts';
+import { requireUser } from '../../../server/auth/guards.ts';
+
+export const PUT = (async ({ locals, request }) => {
+  const signedIn = requireUser(locals);
+  if (!signedIn.ok) return signedIn.error;
+  const body = await readJson(request, passwordChangeSchema);
+  if (!body.ok) return body.error;
+  const result = await changePassword(db, signedIn.value.user.id, signedIn.value.session.id, body.value);
+  if (!result.ok) return problem(400, 'invalid_credentials', 'The current password is not right.', { currentPassword: 'The current password is not right.' });
+  return json({ message: 'Password changed. Other devices have been signed out.' });
+}) satisfies APIRoute;

@@ -1,0 +1,43 @@
+// Password-reset tokens: 20 random bytes (base32) e-mailed as a link; only the SHA-256 is stored.
+// A token works once and for RESET_VALID_MINUTES; using it revokes every session of the account.
+import type { Kysely } from 'kysely';
+import type { Database } from '../../../db/schema.ts';
+import { err, ok, type Result } from '../../../shared/result.ts';
+import { generateSessionToken, hashToken, invalidateAccountSessions } from './session.ts';
+
+export const RESET_VALID_MINUTES = 60;
+
+export async function createPasswordReset(db: Kysely<Database>, accountId: string, now = new Date()): Promise<string> {
+  const token = generateSessionToken();
+  await db
+    .insertInto('password_reset')
+    .values({ id: hashToken(token), account_id: accountId, expires_at: new Date(now.getTime() + RESET_VALID_MINUTES * 60_000) })
+    .execute();
+  return token;
+}
+
+export type ResetTokenError = 'unknown' | 'expired' | 'used';
+
+/**
+ * Sets the new password hash if the token is valid, marks the token used and signs the account out
+ * everywhere, all in one transaction (the token row is locked so it cannot be used twice at once).
+ */
+export async function consumePasswordReset(
+  db: Kysely<Database>,
+  token: string,
+  passwordHash: string,
+  now = new Date(),
+): Promise<Result<{ accountId: string }, ResetTokenError>> {
+  return db.transaction().execute(async (trx) => {
+    const row = await trx.selectFrom('password_reset').selectAll().where('id', '=', hashToken(token)).forUpdate().executeTakeFirst();
+    if (!row) return err('unknown' as const);
+    if (row.used_at) return err('used' as const);
+    if (row.expires_at.getTime() <= now.getTime()) return err('expired' as const);
+    await trx.updateTable('password_reset').set({ used_at: now }).where('id', '=', row.id).execute();
+    await trx.updateTable('account').set({ password_hash: passwordHash, updated_at: now }).where('id', '=', row.account_id).execute();
+    // Other unused links for this account stop working too: the password they would replace is gone.
+    await trx.updateTable('password_reset').set({ used_at: now }).where('account_id', '=', row.account_id).where('used_at', 'is', null).execute();
+    await invalidateAccountSessions(trx, row.account_id);
+    return ok({ accountId: row.account_id });
+  });
+}

@@ -1,0 +1,90 @@
+// Outgoing e-mail. Every message is first written to `email_message` (the outbox and the log), then
+// handed to the SMTP server; the row records the outcome: pending → sent, or failed with the error and
+// the attempt count. Messages that must go out once only carry a `dedupeKey`.
+import nodemailer from 'nodemailer';
+import { MAIL_FROM, SMTP_HOST, SMTP_PORT } from 'astro:env/server';
+import type { Kysely } from 'kysely';
+import type { Database } from '../../../db/schema.ts';
+
+export interface OutgoingEmail {
+  to: string;
+  subject: string;
+  text: string;
+  html?: string;
+  /** What the message is about, for the log: 'password-reset', 'email-changed', 'lesson-release', … */
+  kind: string;
+  /** Same key twice → the second message is not queued again. */
+  dedupeKey?: string;
+}
+
+export type SendOutcome = { status: 'sent'; id: string } | { status: 'failed'; id: string; error: string } | { status: 'duplicate' };
+
+/** At most this many delivery attempts per message (one on send, the rest through retryFailedEmails). */
+export const MAX_ATTEMPTS = 3;
+
+const transport = nodemailer.createTransport({
+  host: SMTP_HOST,
+  port: SMTP_PORT,
+  secure: false,
+  ignoreTLS: true,
+  connectionTimeout: 10_000,
+  greetingTimeout: 10_000,
+  socketTimeout: 20_000,
+});
+
+/** Queues the message in the outbox and delivers it now. Failures are recorded, not thrown. */
+export async function sendEmail(db: Kysely<Database>, mail: OutgoingEmail): Promise<SendOutcome> {
+  const row = await db
+    .insertInto('email_message')
+    .values({
+      to_address: mail.to,
+      subject: mail.subject,
+      body_text: mail.text,
+      body_html: mail.html ?? null,
+      kind: mail.kind,
+      dedupe_key: mail.dedupeKey ?? null,
+      last_error: null,
+      sent_at: null,
+    })
+    .onConflict((oc) => oc.column('dedupe_key').doNothing())
+    .returning('id')
+    .executeTakeFirst();
+  if (!row) return { status: 'duplicate' };
+  return deliver(db, row.id);
+}
+
+/** Tries again every failed message that has attempts left; returns how many went out. */
+export async function retryFailedEmails(db: Kysely<Database>): Promise<number> {
+  const rows = await db.selectFrom('email_message').select('id').where('status', '=', 'failed').where('attempts', '<', MAX_ATTEMPTS).execute();
+  let sent = 0;
+  for (const r of rows) if ((await deliver(db, r.id)).status === 'sent') sent += 1;
+  return sent;
+}
+
+async function deliver(db: Kysely<Database>, id: string): Promise<SendOutcome> {
+  const msg = await db.selectFrom('email_message').selectAll().where('id', '=', id).executeTakeFirstOrThrow();
+  try {
+    await transport.sendMail({
+      from: MAIL_FROM,
+      to: msg.to_address,
+      subject: msg.subject,
+      text: msg.body_text,
+      ...(msg.body_html !== null && { html: msg.body_html }),
+    });
+    await db
+      .updateTable('email_message')
+      .set((eb) => ({ status: 'sent', attempts: eb('attempts', '+', 1), sent_at: new Date(), last_error: null }))
+      .where('id', '=', id)
+      .execute();
+    return { status: 'sent', id };
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    console.error(`[mail] message ${id} (${msg.kind}) to ${msg.to_address} failed: ${message}`);
+    await db
+      .updateTable('email_message')
+      .set((eb) => ({ status: 'failed', attempts: eb('attempts', '+', 1), last_error: message.slice(0, 1000) }))
+      .where('id', '=', id)
+      .execute();
+    return { status: 'failed', id, error: message };
+  }
+}

@@ -1,0 +1,66 @@
+// Accounts for tests: fresh ones through the real sign-up API (role set in the database when asked),
+// and the seeded demo guild (db/seed/demo-accounts.json).
+import { readFileSync } from 'node:fs';
+import type { Role } from '../../db/schema.ts';
+import { TestClient } from './client.ts';
+import { testDb } from './db.ts';
+
+export const DEFAULT_PASSWORD = 'quilting-is-fun-42';
+
+let counter = 0;
+/** A unique address per call, e.g. "signup-1733150000000-3@guild.test". */
+export function uniqueEmail(prefix = 'quilter'): string {
+  counter += 1;
+  return `${prefix}-${Date.now()}-${counter}-${Math.floor(Math.random() * 1e6)}@guild.test`;
+}
+
+export interface TestAccount {
+  id: string;
+  email: string;
+  password: string;
+  displayName: string;
+  role: Role;
+  /** Signed in as this account (the sign-up session). */
+  client: TestClient;
+}
+
+/** Signs up a new account through POST /api/accounts, then sets its role in the database. */
+export async function createAccount(opts: { role?: Role; email?: string; password?: string; displayName?: string } = {}): Promise<TestAccount> {
+  const role = opts.role ?? 'quilter';
+  const email = opts.email ?? uniqueEmail(role);
+  const password = opts.password ?? DEFAULT_PASSWORD;
+  const displayName = opts.displayName ?? `Test ${role}`;
+  const client = new TestClient();
+  const res = await client.post('/api/accounts', { email, password, displayName, units: 'in' });
+  if (res.status !== 201) throw new Error(`tests/helpers/accounts: sign-up failed (${res.status}): ${res.text}`);
+  const id = res.body.account.id as string;
+  if (role !== 'quilter') await testDb().updateTable('account').set({ role }).where('id', '=', id).execute();
+  return { id, email, password, displayName, role, client };
+}
+
+/** A new client signed in through POST /api/session; throws when the sign-in fails. */
+export async function signIn(email: string, password: string): Promise<TestClient> {
+  const client = new TestClient();
+  const res = await client.post('/api/session', { email, password });
+  if (res.status !== 200) throw new Error(`tests/helpers/accounts: sign-in as ${email} failed (${res.status}): ${res.text}`);
+  return client;
+}
+
+interface DemoFile {
+  guild: string;
+  password: string;
+  accounts: { email: string; displayName: string; role: Role }[];
+}
+const demo = JSON.parse(readFileSync(new URL('../../db/seed/demo-accounts.json', import.meta.url), 'utf8')) as DemoFile;
+
+/** The seeded demo guild: password and one account per role (first of each). */
+export const demoGuild = {
+  name: demo.guild,
+  password: demo.password,
+  accounts: demo.accounts,
+  byRole(role: Role) {
+    const a = demo.accounts.find((x) => x.role === role);
+    if (!a) throw new Error(`tests/helpers/accounts: the demo guild has no ${role}`);
+    return a;
+  },
+};

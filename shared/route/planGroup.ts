@@ -1,0 +1,111 @@
+import type { PlanarGraph } from '../graph/planarGraph.types.ts';
+import { findEulerWalk, type Traversal } from './eulerWalk.ts';
+import { joinComponents } from './joinPieces.ts';
+import { findMinTJoin, timed, type PlannerStats } from './minTJoin.ts';
+import type { RouteGroup } from './routeGroups.ts';
+import type { PathSearch } from './shortestPaths.ts';
+import { UnionFind } from './unionFind.ts';
+
+/** How one pass was planned. */
+export interface GroupPlan {
+  readonly walk: Traversal[];
+  /** Graph edge ids of the travel copies (each copy once per traversal). */
+  readonly travelCopies: readonly number[];
+  /** Σ integer travel cost of the chosen route and of the lower bound (min T-join). */
+  readonly travelCost: number;
+  readonly lowerBoundCost: number;
+  readonly lowerBoundEdges: readonly number[];
+  /** `exact`: one piece, or the min T-join already connects the pieces; otherwise the join that won. */
+  readonly method: 'exact' | 'tree-then-pairing' | 'pairing-then-double-tree';
+}
+
+/**
+ * Plans one pass over a travel group: fewest passes (one), then least travel.
+ * Terminals are the group's odd points with the fixed ends toggled in (T = odd Δ {s} Δ {t}); missing ends become
+ * free ends (engine-references.md §1.3). When the quilting lines form one piece this is route inspection and exact
+ * (Edmonds & Johnson 1973; Orloff 1974 for optional travel lines). With several pieces the min T-join is a lower
+ * bound (any route's travel contains a T-join); if its paths already connect the pieces it is optimal. Otherwise
+ * two joins are tried and the cheaper kept:
+ *  (a) Frederickson (J. ACM 26 (1979) 538–554): spanning tree over the pieces, then pair the new odd points;
+ *  (b) the min T-join, then a spanning tree over what is still apart, each tree path travelled twice.
+ */
+export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGroup, start: number, end: number, stats?: PlannerStats): GroupPlan {
+  const required = group.quiltingEdges;
+  const freeEnds = ((start < 0 ? 1 : 0) + (end < 0 ? 1 : 0)) as 0 | 1 | 2;
+  const terminalsOf = (extra: readonly number[]): number[] => {
+    const parity = new Map<number, number>();
+    const flip = (v: number): void => {
+      parity.set(v, (parity.get(v) ?? 0) ^ 1);
+    };
+    for (const e of required) {
+      flip(graph.edges[e]!.u);
+      flip(graph.edges[e]!.v);
+    }
+    for (const e of extra) {
+      flip(graph.edges[e]!.u);
+      flip(graph.edges[e]!.v);
+    }
+    if (start >= 0) flip(start);
+    if (end >= 0) flip(end);
+    return [...parity].filter(([, p]) => p === 1).map(([v]) => v).sort((a, b) => a - b);
+  };
+
+  const join = findMinTJoin(search, terminalsOf([]), freeEnds, stats);
+  const joinEdges = join.paths.flat();
+  const lowerBound = { lowerBoundCost: join.cost, lowerBoundEdges: joinEdges };
+  let travelCopies = joinEdges;
+  let travelCost = join.cost;
+  let method: GroupPlan['method'] = 'exact';
+  let openEnds = join.openEnds;
+
+  const joined = componentsOf(graph, [...required, ...joinEdges]);
+  if (group.pieceCount > 1 && countRoots(joined, group.vertices) > 1) {
+    const pieces = componentsOf(graph, required);
+    const tree = timed(stats, 'searchMs', () => joinComponents(search, group.vertices, (v) => pieces.find(v)));
+    const treeEdges = tree.paths.flat();
+    const rejoin = findMinTJoin(search, terminalsOf(treeEdges), freeEnds, stats);
+    const costA = tree.cost + rejoin.cost;
+    const treeB = timed(stats, 'searchMs', () => joinComponents(search, group.vertices, (v) => joined.find(v)));
+    const costB = join.cost + 2 * treeB.cost;
+    if (costA <= costB) {
+      travelCopies = [...treeEdges, ...rejoin.paths.flat()];
+      travelCost = costA;
+      method = 'tree-then-pairing';
+      openEnds = rejoin.openEnds;
+    } else {
+      const treeEdgesB = treeB.paths.flat();
+      travelCopies = [...joinEdges, ...treeEdgesB, ...treeEdgesB];
+      travelCost = costB;
+      method = 'pairing-then-double-tree';
+    }
+  }
+
+  const walkStart = start >= 0 ? start : pickStart(openEnds, end, graph, required);
+  const walk = timed(stats, 'walkMs', () => findEulerWalk(graph, [...required, ...travelCopies], walkStart));
+  if (end >= 0 && walk.length > 0) {
+    const last = walk[walk.length - 1]!;
+    const at = last.forward ? graph.edges[last.edge]!.v : graph.edges[last.edge]!.u;
+    if (at !== end) throw new Error(`route/planGroup: walk ends at ${at}, not at the fixed end ${end}`);
+  }
+  return { walk, travelCopies, travelCost, method, ...lowerBound };
+}
+
+/** With a free start: begin at a free end the pairing left open (not the fixed end), else anywhere on the lines. */
+function pickStart(openEnds: readonly number[], end: number, graph: PlanarGraph, required: readonly number[]): number {
+  const other = openEnds.find((v) => v !== end);
+  if (other !== undefined) return other;
+  if (end >= 0) return end;
+  return graph.edges[required[0]!]!.u;
+}
+
+function componentsOf(graph: PlanarGraph, edges: readonly number[]): UnionFind {
+  const uf = new UnionFind(graph.vertices.length);
+  for (const e of edges) uf.union(graph.edges[e]!.u, graph.edges[e]!.v);
+  return uf;
+}
+
+function countRoots(uf: UnionFind, vertices: readonly number[]): number {
+  const roots = new Set<number>();
+  for (const v of vertices) roots.add(uf.find(v));
+  return roots.size;
+}

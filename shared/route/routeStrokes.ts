@@ -1,0 +1,96 @@
+import type { Point } from '../geometry/point.ts';
+import type { PlanarGraph } from '../graph/planarGraph.types.ts';
+import { assertNever } from '../assertNever.ts';
+import type { Traversal } from './eulerWalk.ts';
+
+/** What the needle does along a stroke: stitch a quilting line, or travel (retrace, ditch, edge). */
+export type StrokeKind = 'stitch' | 'retrace' | 'ditch' | 'edge';
+
+/** A run of one kind within one pass; consecutive strokes of a pass share their end/start point. */
+export interface Stroke {
+  readonly pass: number;
+  readonly kind: StrokeKind;
+  readonly points: readonly Point[];
+  /** Length in design units. */
+  readonly length: number;
+}
+
+/** Travel and stitch lengths of a route, in design units. */
+export interface RouteLengths {
+  stitchLength: number;
+  retraceLength: number;
+  ditchLength: number;
+  edgeLength: number;
+}
+
+/**
+ * Turns one pass's walk into strokes. A quilting edge is `stitch` the first time the walk covers it and `retrace`
+ * after that (so travel copies never come before the stitching they retrace); seams are `ditch`, outline `edge`.
+ * `stitched` carries coverage across passes. Adds the lengths to `totals`.
+ */
+export function buildStrokes(
+  graph: PlanarGraph,
+  walk: readonly Traversal[],
+  pass: number,
+  stitched: Uint8Array,
+  totals: RouteLengths,
+): Stroke[] {
+  const strokes: Stroke[] = [];
+  let kind: StrokeKind | null = null;
+  let points: Point[] = [];
+  let length = 0;
+  const flush = (): void => {
+    if (kind !== null) strokes.push({ pass, kind, points, length });
+  };
+  for (const { edge, forward } of walk) {
+    const e = graph.edges[edge]!;
+    const k = strokeKindOf(e.kind, stitched, edge);
+    addLength(totals, k, e.length);
+    const pts = forward ? e.points : [...e.points].reverse();
+    if (k !== kind) {
+      flush();
+      kind = k;
+      points = [...pts];
+      length = e.length;
+    } else {
+      for (let i = 1; i < pts.length; i++) points.push(pts[i]!);
+      length += e.length;
+    }
+  }
+  flush();
+  return strokes;
+}
+
+function strokeKindOf(kind: PlanarGraph['edges'][number]['kind'], stitched: Uint8Array, edge: number): StrokeKind {
+  switch (kind) {
+    case 'quilting':
+      if (stitched[edge]) return 'retrace';
+      stitched[edge] = 1;
+      return 'stitch';
+    case 'seam':
+      return 'ditch';
+    case 'edge':
+      return 'edge';
+    default:
+      return assertNever(kind);
+  }
+}
+
+export function addLength(totals: RouteLengths, kind: StrokeKind, length: number): void {
+  switch (kind) {
+    case 'stitch':
+      totals.stitchLength += length;
+      return;
+    case 'retrace':
+      totals.retraceLength += length;
+      return;
+    case 'ditch':
+      totals.ditchLength += length;
+      return;
+    case 'edge':
+      totals.edgeLength += length;
+      return;
+    default:
+      assertNever(kind);
+  }
+}

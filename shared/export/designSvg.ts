@@ -1,0 +1,204 @@
+import type { Design } from '../design/design.schema.ts';
+import { bindingBandOf, CM_PER_INCH } from '../design/design.schema.ts';
+import type { Point, Polyline } from '../geometry/point.ts';
+import { assertNever } from '../assertNever.ts';
+
+/** One stroke of a route as the SVG draws it (the planner's and the route check's strokes fit this shape). */
+export interface SvgStroke {
+  readonly pass: number;
+  readonly kind: 'stitch' | 'retrace' | 'ditch' | 'edge';
+  readonly points: readonly Point[];
+}
+
+export interface DesignSvgOptions {
+  /** Shown above the block; escaped. */
+  readonly title?: string;
+  /** Strokes in stitching order; when given, quilting lines are drawn as the route (pass numbers, arrows). */
+  readonly route?: readonly SvgStroke[];
+  /** A line under the block (e.g. "the saved route is out of date"); escaped. */
+  readonly remark?: string;
+}
+
+// Our own palette: stitching in deep indigo, travel in warm tones, seams in grey.
+const INK = { block: '#fbf8f2', outline: '#4a4a4a', seam: '#9a9a9a', band: '#efe6d6', stitch: '#263a7a', retrace: '#c2571a', ditch: '#8a6d1f', edge: '#7a2f5c', text: '#222222' } as const;
+
+/**
+ * A print-ready SVG of a design (and optionally its route) at true size: the root element's width/height carry
+ * physical units (`in` or `cm`), the viewBox is in design units, so printing at 100% reproduces the block.
+ * Seams are thin grey, quilting lines solid; with a route, travel strokes are dashed in their own colours,
+ * each pass starts at a numbered disc and every stroke carries a direction arrow at half its length.
+ * A scale note (size in both inches and cm, and a 1 in and a 1 cm bar) sits under the block.
+ * Pure: the same design and options always give the same string.
+ */
+export function buildDesignSvg(design: Design, options: DesignSvgOptions = {}): string {
+  const { width: w, height: h, units } = design;
+  const side = Math.max(w, h);
+  const margin = side * 0.04;
+  const font = side * 0.028;
+  const top = options.title ? margin + font * 1.6 : margin;
+  const noteHeight = font * 5.5;
+  const totalW = w + 2 * margin;
+  const totalH = top + h + noteHeight;
+  const stroke = side * 0.0025;
+  const parts: string[] = [];
+  parts.push(
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${num(totalW)}${units}" height="${num(totalH)}${units}" viewBox="${num(-margin)} ${num(-top)} ${num(totalW)} ${num(totalH)}">`,
+  );
+  if (options.title) parts.push(`<title>${escapeXml(options.title)}</title>`);
+  parts.push(`<rect x="0" y="0" width="${num(w)}" height="${num(h)}" fill="${INK.block}"/>`);
+  const band = bindingBandOf(design);
+  parts.push(
+    `<path d="M0 0H${num(w)}V${num(h)}H0Z M${num(band)} ${num(band)}V${num(h - band)}H${num(w - band)}V${num(band)}Z" fill="${INK.band}" fill-rule="evenodd"/>`,
+  );
+  parts.push(`<g fill="none" stroke-linecap="round" stroke-linejoin="round">`);
+  parts.push(pathGroup(design.seams, `stroke="${INK.seam}" stroke-width="${num(stroke)}"`, 'seams'));
+  if (options.route && options.route.length > 0) parts.push(routeGroup(options.route, stroke, side));
+  else parts.push(pathGroup(design.lines, `stroke="${INK.stitch}" stroke-width="${num(stroke * 1.6)}"`, 'quilting-lines'));
+  parts.push(`<rect x="0" y="0" width="${num(w)}" height="${num(h)}" stroke="${INK.outline}" stroke-width="${num(stroke * 1.2)}"/>`);
+  parts.push('</g>');
+  if (options.route && options.route.length > 0) parts.push(passLabels(options.route, font));
+  if (options.title) {
+    parts.push(`<text x="0" y="${num(-font * 0.8)}" font-family="sans-serif" font-size="${num(font * 1.2)}" fill="${INK.text}">${escapeXml(options.title)}</text>`);
+  }
+  parts.push(scaleNote(design, h + font * 1.6, font, stroke, options.remark));
+  parts.push('</svg>');
+  return parts.join('\n');
+}
+
+/**
+ * A small SVG of a design for lists: no text, fixed pixel size, quilting lines and seams only, points closer
+ * than 1/200 of the block's longer side to the previous kept point dropped (the end of a line is always kept).
+ */
+export function buildDesignThumbnailSvg(design: Design, pixels = 96): string {
+  const { width: w, height: h } = design;
+  const side = Math.max(w, h);
+  const keep = side / 200;
+  const scale = pixels / side;
+  const seams = design.seams.map((l) => thin(l, keep));
+  const lines = design.lines.map((l) => thin(l, keep));
+  return [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${num(w * scale)}" height="${num(h * scale)}" viewBox="0 0 ${num(w)} ${num(h)}">`,
+    `<rect x="0" y="0" width="${num(w)}" height="${num(h)}" fill="${INK.block}" stroke="${INK.outline}" stroke-width="${num(side * 0.01)}"/>`,
+    `<g fill="none" stroke-linecap="round" stroke-linejoin="round">`,
+    pathGroup(seams, `stroke="${INK.seam}" stroke-width="${num(side * 0.006)}"`, 'seams'),
+    pathGroup(lines, `stroke="${INK.stitch}" stroke-width="${num(side * 0.008)}"`, 'quilting-lines'),
+    '</g>',
+    '</svg>',
+  ].join('\n');
+}
+
+function routeGroup(route: readonly SvgStroke[], stroke: number, side: number): string {
+  const out: string[] = ['<g class="route">'];
+  for (const s of route) {
+    out.push(`<path class="${s.kind}" data-pass="${s.pass}" d="${pathData(s.points)}" ${strokeStyle(s.kind, stroke)}/>`);
+  }
+  const size = side * 0.014;
+  const arrows = route.map((s) => arrowAt(s.points, size)).filter((a): a is string => a !== null);
+  out.push(`<g class="arrows" stroke="none">${arrows.join('')}</g>`);
+  out.push('</g>');
+  return out.join('\n');
+}
+
+function strokeStyle(kind: SvgStroke['kind'], stroke: number): string {
+  switch (kind) {
+    case 'stitch':
+      return `stroke="${INK.stitch}" stroke-width="${num(stroke * 1.6)}"`;
+    case 'retrace':
+      return `stroke="${INK.retrace}" stroke-width="${num(stroke)}" stroke-dasharray="${num(stroke * 4)} ${num(stroke * 3)}"`;
+    case 'ditch':
+      return `stroke="${INK.ditch}" stroke-width="${num(stroke)}" stroke-dasharray="${num(stroke * 1.5)} ${num(stroke * 3)}"`;
+    case 'edge':
+      return `stroke="${INK.edge}" stroke-width="${num(stroke)}" stroke-dasharray="${num(stroke * 6)} ${num(stroke * 2)} ${num(stroke)} ${num(stroke * 2)}"`;
+    default:
+      return assertNever(kind);
+  }
+}
+
+/** A filled triangle pointing along the polyline at half its length; null for a zero-length polyline. */
+function arrowAt(points: readonly Point[], size: number): string | null {
+  let total = 0;
+  for (let i = 1; i < points.length; i++) total += dist(points[i - 1]!, points[i]!);
+  if (!(total > 0)) return null;
+  let walked = 0;
+  for (let i = 1; i < points.length; i++) {
+    const a = points[i - 1]!;
+    const b = points[i]!;
+    const d = dist(a, b);
+    if (d > 0 && walked + d >= total / 2) {
+      const t = (total / 2 - walked) / d;
+      const ux = (b[0] - a[0]) / d;
+      const uy = (b[1] - a[1]) / d;
+      const cx = a[0] + (b[0] - a[0]) * t;
+      const cy = a[1] + (b[1] - a[1]) * t;
+      const tip: Point = [cx + ux * size, cy + uy * size];
+      const left: Point = [cx - ux * size * 0.6 - uy * size * 0.6, cy - uy * size * 0.6 + ux * size * 0.6];
+      const right: Point = [cx - ux * size * 0.6 + uy * size * 0.6, cy - uy * size * 0.6 - ux * size * 0.6];
+      return `<path d="M${pt(tip)}L${pt(left)}L${pt(right)}Z" fill="${INK.stitch}"/>`;
+    }
+    walked += d;
+  }
+  return null;
+}
+
+function passLabels(route: readonly SvgStroke[], font: number): string {
+  const out: string[] = ['<g class="pass-numbers" font-family="sans-serif" text-anchor="middle" dominant-baseline="central">'];
+  let lastPass = -1;
+  for (const s of route) {
+    if (s.pass === lastPass) continue;
+    lastPass = s.pass;
+    const [x, y] = s.points[0]!;
+    out.push(
+      `<circle cx="${num(x)}" cy="${num(y)}" r="${num(font * 0.75)}" fill="#ffffff" stroke="${INK.stitch}" stroke-width="${num(font * 0.08)}"/>`,
+      `<text x="${num(x)}" y="${num(y)}" font-size="${num(font * 0.9)}" fill="${INK.stitch}">${s.pass}</text>`,
+    );
+  }
+  out.push('</g>');
+  return out.join('\n');
+}
+
+function scaleNote(design: Design, y: number, font: number, stroke: number, remark: string | undefined): string {
+  const { width: w, height: h, units } = design;
+  const inW = units === 'in' ? w : w / CM_PER_INCH;
+  const inH = units === 'in' ? h : h / CM_PER_INCH;
+  const size = `Block ${round(inW, 3)} × ${round(inH, 3)} in (${round(inW * CM_PER_INCH, 2)} × ${round(inH * CM_PER_INCH, 2)} cm)`;
+  const inch = units === 'in' ? 1 : CM_PER_INCH;
+  const cm = units === 'cm' ? 1 : 1 / CM_PER_INCH;
+  const bar = (x: number, len: number, label: string): string =>
+    `<path d="M${num(x)} ${num(y + font * 1.4)}h${num(len)}" stroke="${INK.text}" stroke-width="${num(stroke * 2)}"/>` +
+    `<text x="${num(x + len + font * 0.4)}" y="${num(y + font * 1.7)}">${label}</text>`;
+  return [
+    `<g class="scale-note" font-family="sans-serif" font-size="${num(font)}" fill="${INK.text}">`,
+    `<text x="0" y="${num(y)}">${escapeXml(size)}</text>`,
+    bar(0, inch, '1 in'),
+    bar(inch + font * 3.5, cm, '1 cm'),
+    `<text x="0" y="${num(y + font * 3)}">Print at 100% (no fit to page) for true size.</text>`,
+    remark ? `<text x="0" y="${num(y + font * 4.3)}">${escapeXml(remark)}</text>` : '',
+    '</g>',
+  ].join('\n');
+}
+
+function pathGroup(lines: readonly Polyline[], style: string, cls: string): string {
+  if (lines.length === 0) return `<g class="${cls}"/>`;
+  return `<g class="${cls}" ${style}>${lines.map((l) => `<path d="${pathData(l)}"/>`).join('')}</g>`;
+}
+
+function pathData(points: readonly Point[]): string {
+  return points.map((p, i) => `${i === 0 ? 'M' : 'L'}${pt(p)}`).join('');
+}
+
+function thin(line: Polyline, keep: number): Polyline {
+  const out: Point[] = [line[0]!];
+  for (let i = 1; i < line.length - 1; i++) if (dist(out[out.length - 1]!, line[i]!) >= keep) out.push(line[i]!);
+  out.push(line[line.length - 1]!);
+  return out;
+}
+
+const dist = (a: Point, b: Point): number => Math.hypot(b[0] - a[0], b[1] - a[1]);
+const pt = (p: Point): string => `${num(p[0])} ${num(p[1])}`;
+/** Coordinates to 1e-4 design units (far below a stitch length), trailing zeros dropped. */
+const num = (v: number): string => String(Math.round(v * 1e4) / 1e4);
+const round = (v: number, digits: number): string => String(Math.round(v * 10 ** digits) / 10 ** digits);
+
+function escapeXml(text: string): string {
+  return text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);
+}

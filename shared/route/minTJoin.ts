@@ -38,7 +38,8 @@ const FIRST_NEIGHBOURS = 12;
  * Exact minimum T-join over travel lines (Edmonds & Johnson, Math. Programming 5 (1973) 88–124): a minimum-cost
  * perfect matching of the terminals under shortest-path distances. `freeEnds` (0, 1 or 2) adds that many dummy
  * terminals joined at cost 0 to every real terminal and not to each other (engine-references.md §1.3): whichever
- * terminals they take become the route's free ends.
+ * terminals they take become the route's free ends. Terminals in `notFree` may not be free ends (a fixed start off
+ * the quilting lines: ending there again would mean travelling out and back, never better than stopping on the lines).
  *
  * Sparse and certified: each terminal first searches only until its nearest FIRST_NEIGHBOURS terminals are settled,
  * which gives candidate pairs and a radius r (every other terminal is at least r away). The matching on the
@@ -46,7 +47,13 @@ const FIRST_NEIGHBOURS = 12;
  * price (LP duality; Derigs & Metz, Math. Prog. 50 (1991) 113–121 price out pairs the same way). Terminals whose
  * pairs fail widen their search (×2) and the matching is solved again, up to the complete graph.
  */
-export function findMinTJoin(search: PathSearch, terminals: readonly number[], freeEnds: 0 | 1 | 2, stats?: PlannerStats): TJoin {
+export function findMinTJoin(
+  search: PathSearch,
+  terminals: readonly number[],
+  freeEnds: 0 | 1 | 2,
+  stats?: PlannerStats,
+  notFree: readonly number[] = [],
+): TJoin {
   const k = terminals.length;
   const dummies = k === 0 ? 0 : freeEnds;
   if ((k + dummies) % 2 === 1) throw new Error(`route/minTJoin: ${k} terminals and ${freeEnds} free ends cannot be paired`);
@@ -55,13 +62,18 @@ export function findMinTJoin(search: PathSearch, terminals: readonly number[], f
   terminals.forEach((t, i) => indexOf.set(t, i));
   if (indexOf.size !== k) throw new Error('route/minTJoin: terminals must be distinct');
 
+  const barred = new Uint8Array(k);
+  for (const v of notFree) {
+    const i = indexOf.get(v);
+    if (i !== undefined) barred[i] = 1;
+  }
   const reach = new Int32Array(k).fill(Math.min(k - 1, FIRST_NEIGHBOURS));
   const radius = new Float64Array(k);
   const candidates = new Map<number, number>();
   const stale = new Uint8Array(k).fill(1);
   for (;;) {
     timed(stats, 'searchMs', () => searchStale(search, terminals, indexOf, reach, stale, radius, candidates, stats));
-    const matching = timed(stats, 'matchMs', () => solve(k, dummies, candidates));
+    const matching = timed(stats, 'matchMs', () => solve(k, dummies, candidates, barred));
     if (stats) stats.matchings++;
     if (matching === null) {
       // The candidate graph has no perfect matching: widen every search.
@@ -111,7 +123,7 @@ function widen(i: number, reach: Int32Array, stale: Uint8Array, k: number): void
   stale[i] = 1;
 }
 
-function solve(k: number, dummies: number, candidates: Map<number, number>): PerfectMatching | null {
+function solve(k: number, dummies: number, candidates: Map<number, number>, barred: Uint8Array): PerfectMatching | null {
   const size = candidates.size + dummies * k;
   const eu = new Int32Array(size);
   const ev = new Int32Array(size);
@@ -124,12 +136,13 @@ function solve(k: number, dummies: number, candidates: Map<number, number>): Per
   }
   for (let dmy = 0; dmy < dummies; dmy++) {
     for (let i = 0; i < k; i++) {
+      if (barred[i]) continue;
       eu[e] = i;
       ev[e] = k + dmy;
       cost[e++] = 0;
     }
   }
-  return findMinCostPerfectMatching(k + dummies, eu, ev, cost);
+  return findMinCostPerfectMatching(k + dummies, eu.subarray(0, e), ev.subarray(0, e), cost.subarray(0, e));
 }
 
 /** Terminals in some missing pair whose lower bound max(r_i, r_j) is below the pair's dual price. */

@@ -24,7 +24,8 @@ export interface GroupPlan {
  * Terminals are the group's odd points with the fixed ends toggled in (T = odd Δ {s} Δ {t}); missing ends become
  * free ends (engine-references.md §1.3). When the quilting lines form one piece this is route inspection and exact
  * (Edmonds & Johnson 1973; Orloff 1974 for optional travel lines). With several pieces the min T-join is a lower
- * bound (any route's travel contains a T-join); if its paths already connect the pieces it is optimal. Otherwise
+ * bound (any route's travel contains a T-join); if its paths already connect the pieces (and any fixed end lying
+ * off the quilting lines) it is optimal. Otherwise
  * two joins are tried and the cheaper kept:
  *  (a) Frederickson (J. ACM 26 (1979) 538–554): spanning tree over the pieces, then pair the new odd points;
  *  (b) the min T-join, then a spanning tree over what is still apart, each tree path travelled twice.
@@ -50,7 +51,11 @@ export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGr
     return [...parity].filter(([, p]) => p === 1).map(([v]) => v).sort((a, b) => a - b);
   };
 
-  const join = findMinTJoin(search, terminalsOf([]), freeEnds, stats);
+  const onLines = new Set<number>();
+  for (const e of required) onLines.add(graph.edges[e]!.u).add(graph.edges[e]!.v);
+  // With one end fixed off the quilting lines and the other free, the free end must not be that same point.
+  const notFree = freeEnds === 1 ? [start, end].filter((v) => v >= 0 && !onLines.has(v)) : [];
+  const join = findMinTJoin(search, terminalsOf([]), freeEnds, stats, notFree);
   const joinEdges = join.paths.flat();
   const lowerBound = { lowerBoundCost: join.cost, lowerBoundEdges: joinEdges };
   let travelCopies = joinEdges;
@@ -58,14 +63,18 @@ export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGr
   let method: GroupPlan['method'] = 'exact';
   let openEnds = join.openEnds;
 
+  // The route must reach a fixed start or end even when it lies off the quilting lines (a block corner): such an
+  // end counts as one more piece to join.
+  const mustReach = [...group.vertices];
+  for (const v of [start, end]) if (v >= 0 && !mustReach.includes(v)) mustReach.push(v);
   const joined = componentsOf(graph, [...required, ...joinEdges]);
-  if (group.pieceCount > 1 && countRoots(joined, group.vertices) > 1) {
+  if (countRoots(joined, mustReach) > 1) {
     const pieces = componentsOf(graph, required);
-    const tree = timed(stats, 'searchMs', () => joinComponents(search, group.vertices, (v) => pieces.find(v)));
+    const tree = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => pieces.find(v)));
     const treeEdges = tree.paths.flat();
-    const rejoin = findMinTJoin(search, terminalsOf(treeEdges), freeEnds, stats);
+    const rejoin = findMinTJoin(search, terminalsOf(treeEdges), freeEnds, stats, notFree);
     const costA = tree.cost + rejoin.cost;
-    const treeB = timed(stats, 'searchMs', () => joinComponents(search, group.vertices, (v) => joined.find(v)));
+    const treeB = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => joined.find(v)));
     const costB = join.cost + 2 * treeB.cost;
     if (costA <= costB) {
       travelCopies = [...treeEdges, ...rejoin.paths.flat()];

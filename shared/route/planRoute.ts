@@ -85,7 +85,7 @@ export function planRoute(graph: PlanarGraph, options: PlanOptions = {}): RouteP
     const s = gi === startGroup ? startVertex : -1;
     const t = gi === endGroup ? endVertex : -1;
     const plan: GroupPlan = planGroup(graph, search, group, s, t, stats);
-    route.push(...timed(stats, 'walkMs', () => buildStrokes(graph, plan.walk, pass + 1, stitched, totals)));
+    for (const stroke of timed(stats, 'walkMs', () => buildStrokes(graph, plan.walk, pass + 1, stitched, totals))) route.push(stroke);
     for (const e of plan.travelCopies) cost += weightedLength(graph, weights, e);
     for (const e of plan.lowerBoundEdges) lowerBound += weightedLength(graph, weights, e);
     lowerBoundCost += plan.lowerBoundCost;

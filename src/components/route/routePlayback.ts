@@ -26,6 +26,8 @@ export interface NeedlePosition {
   readonly point: Point;
   readonly angle: number;
   readonly strokeIndex: number;
+  /** Index in the stroke's points of the end of the segment the needle is on (≥ 1). */
+  readonly segment: number;
   readonly pass: number;
   readonly kind: StrokeKind;
 }
@@ -66,6 +68,7 @@ export function needleAt(playback: Playback, distance: number): NeedlePosition |
     point: [a[0] + (b[0] - a[0]) * t, a[1] + (b[1] - a[1]) * t],
     angle: Math.atan2(b[1] - a[1], b[0] - a[0]),
     strokeIndex: si,
+    segment: k,
     pass: stroke.pass,
     kind: stroke.kind,
   };

@@ -1,0 +1,47 @@
+import { z } from 'zod';
+import { unitsSchema } from '../../../shared/design/design.schema.ts';
+
+/** Sort keys the design list accepts (GET /api/designs?sort=). */
+export const DESIGN_SORTS = ['title', 'updated', 'passes', 'stops'] as const;
+export type DesignSort = (typeof DESIGN_SORTS)[number];
+
+/** One row of the design list as the API sends it. */
+export const designListItemSchema = z.object({
+  id: z.string(),
+  title: z.string(),
+  units: unitsSchema,
+  width: z.number(),
+  height: z.number(),
+  thumbnailSvg: z.string(),
+  updatedAt: z.string(),
+  summary: z
+    .object({
+      passes: z.number(),
+      stops: z.number(),
+      travel: z.number(),
+      threadInches: z.number(),
+    })
+    .nullable(),
+});
+export type DesignListItem = z.infer<typeof designListItemSchema>;
+
+export const designListSchema = z.object({
+  designs: z.array(designListItemSchema),
+  total: z.number().int(),
+  page: z.number().int(),
+  pageSize: z.number().int(),
+});
+export type DesignList = z.infer<typeof designListSchema>;
+
+/** The query string of the list request. */
+export function designListPath(q: { sort: DesignSort; dir: 'asc' | 'desc'; q: string; page: number }): string {
+  const p = new URLSearchParams({ sort: q.sort, dir: q.dir, page: String(q.page) });
+  if (q.q.trim()) p.set('q', q.q.trim());
+  return `/api/designs?${p.toString()}`;
+}
+
+/** The id of a design in a create or duplicate answer (`{ design: { id } }`), or null when it is not there. */
+export function createdDesignId(body: unknown): string | null {
+  const parsed = z.object({ design: z.object({ id: z.string() }) }).safeParse(body);
+  return parsed.success ? parsed.data.design.id : null;
+}

@@ -1,0 +1,86 @@
+import { Circle, Group, Layer, Rect, RegularPolygon, Shape, Text } from 'react-konva';
+import type { Point, Polyline } from '../../../../shared/geometry/point.ts';
+import type { CanvasTheme } from '../canvasTheme.ts';
+import type { Viewport } from '../viewport.ts';
+import { tracePolylines } from './drawPolylines.ts';
+
+export interface QuiltingLineLayerProps {
+  readonly lines: readonly Polyline[];
+  readonly view: Viewport;
+  readonly theme: CanvasTheme;
+  readonly selected: ReadonlySet<number>;
+  /** Piece number of each line (same order as `lines`), to colour pieces apart; null draws every line alike. */
+  readonly pieceOfLine: readonly number[] | null;
+  readonly oddPoints: readonly Point[];
+  readonly start: Point | undefined;
+  readonly end: Point | undefined;
+  /** The quilter's own stitching order so far: line indices, first sewn first. */
+  readonly ownOrder: readonly number[];
+  /** Dim the lines (while a route is shown on top). */
+  readonly dimmed: boolean;
+}
+
+/** Quilting lines, coloured by piece, with the selection, odd points, start/end marks and the own-order numbers. */
+export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
+  const { lines, view, theme, selected, pieceOfLine, oddPoints, start, end, ownOrder, dimmed } = props;
+  const px = 1 / view.scale;
+  const groups = groupByPiece(lines, pieceOfLine);
+  return (
+    <Layer listening={false} opacity={dimmed ? 0.35 : 1}>
+      <Group x={view.x} y={view.y} scaleX={view.scale} scaleY={view.scale}>
+        {groups.map(([piece, group]) => (
+          <Shape
+            key={piece}
+            sceneFunc={(ctx, shape) => {
+              tracePolylines(ctx, group);
+              ctx.strokeShape(shape);
+            }}
+            stroke={piece < 0 ? theme.line : theme.pieces[piece % theme.pieces.length]!}
+            strokeWidth={2}
+            strokeScaleEnabled={false}
+            lineCap="round"
+            lineJoin="round"
+          />
+        ))}
+        {selected.size > 0 && (
+          <Shape
+            sceneFunc={(ctx, shape) => {
+              tracePolylines(ctx, lines.filter((_, i) => selected.has(i)));
+              ctx.strokeShape(shape);
+            }}
+            stroke={theme.selected}
+            strokeWidth={6}
+            opacity={0.6}
+            strokeScaleEnabled={false}
+            lineCap="round"
+          />
+        )}
+        {oddPoints.map(([x, y], i) => (
+          <Rect key={`odd${i}`} x={x - 5 * px} y={y - 5 * px} width={10 * px} height={10 * px} stroke={theme.oddPoint} strokeWidth={2} strokeScaleEnabled={false} />
+        ))}
+        {start && <Circle x={start[0]} y={start[1]} radius={7 * px} fill={theme.guide} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />}
+        {end && <RegularPolygon x={end[0]} y={end[1]} sides={4} radius={8 * px} fill={theme.preview} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />}
+        {ownOrder.map((li, k) => {
+          const at = midpointOf(lines[li]);
+          return at ? <Text key={`own${k}`} x={at[0] + 4 * px} y={at[1] - 14 * px} text={String(k + 1)} fontSize={13 * px} fontStyle="bold" fill={theme.retrace} /> : null;
+        })}
+      </Group>
+    </Layer>
+  );
+}
+
+function groupByPiece(lines: readonly Polyline[], pieceOfLine: readonly number[] | null): [number, Polyline[]][] {
+  const map = new Map<number, Polyline[]>();
+  lines.forEach((line, i) => {
+    const piece = pieceOfLine?.[i] ?? -1;
+    const list = map.get(piece);
+    if (list) list.push(line);
+    else map.set(piece, [line]);
+  });
+  return [...map.entries()];
+}
+
+function midpointOf(line: Polyline | undefined): Point | null {
+  if (!line || line.length === 0) return null;
+  return line[Math.floor((line.length - 1) / 2)] ?? null;
+}

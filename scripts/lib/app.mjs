@@ -3,6 +3,7 @@ import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { ROOT, fail, log } from './system.mjs';
+import { ENGINE_WORKER_OUT, bundleEngineWorker } from './engineWorker.mjs';
 
 const SOURCES = ['src', 'shared', 'db', 'public', 'astro.config.mjs', 'package-lock.json', 'tsconfig.json'];
 const STAMP = path.join(ROOT, 'dist', '.threadway-build');
@@ -14,10 +15,10 @@ function newestMtime(entry) {
   return readdirSync(entry).reduce((max, name) => Math.max(max, newestMtime(path.join(entry, name))), stat.mtimeMs);
 }
 
-/** Runs `astro build` unless dist/ is newer than every source file (or `force`). */
+/** Runs `astro build` and bundles the engine worker, unless dist/ is newer than every source file (or `force`). */
 export function buildApp({ force = false } = {}) {
   const newest = Math.max(...SOURCES.map((s) => newestMtime(path.join(ROOT, s))));
-  if (!force && existsSync(STAMP) && statSync(STAMP).mtimeMs >= newest) {
+  if (!force && existsSync(STAMP) && existsSync(ENGINE_WORKER_OUT) && statSync(STAMP).mtimeMs >= newest) {
     log('app build is up to date.');
     return;
   }
@@ -30,6 +31,7 @@ export function buildApp({ force = false } = {}) {
     env: { ...process.env, ASTRO_TELEMETRY_DISABLED: '1' },
   });
   if (r.status !== 0) fail(`astro build failed:\n${r.stdout}\n${r.stderr}`);
+  bundleEngineWorker();
   writeFileSync(STAMP, new Date().toISOString());
   log(`built in ${((Date.now() - started) / 1000).toFixed(1)} s.`);
 }

@@ -1,0 +1,77 @@
+// What crosses the worker boundary: plain, structured-clonable data only.
+// The main thread validates every design (designSchema) before it sends a task.
+import type { Design } from '../../../shared/design/design.schema.ts';
+import type { Point } from '../../../shared/geometry/point.ts';
+import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
+import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
+import type { Stroke } from '../../../shared/route/routeStrokes.ts';
+
+/**
+ * - `summary`: the figures stored with a saved design (for the designs table);
+ * - `check`: route check of the design, of its own `route` if it has one, thread budget, gap check;
+ * - `plan`: the planner's route with its figures.
+ */
+export type EngineTask =
+  | { readonly op: 'summary'; readonly design: Design }
+  | { readonly op: 'check'; readonly design: Design }
+  | { readonly op: 'plan'; readonly design: Design };
+
+/** Figures of a route (planned or the quilter's own), lengths in the design's units. */
+export interface RouteFigures {
+  readonly passes: number;
+  readonly stops: number;
+  readonly pieces: number;
+  readonly oddPoints: number;
+  readonly stitchLength: number;
+  readonly travelLength: number;
+  readonly retraceLength: number;
+  readonly ditchLength: number;
+  readonly edgeLength: number;
+}
+
+/** Planner figures: route figures plus the proof status of its travel. */
+export interface PlanFigures extends RouteFigures {
+  /** No route with this many passes has less travel than this (design units). */
+  readonly travelLowerBound: number;
+  /** True when the travel is proven least. */
+  readonly optimal: boolean;
+}
+
+/** Stored with a design for the designs table (jsonb `design.summary`). */
+export interface DesignSummary extends PlanFigures {
+  readonly units: Design['units'];
+  readonly thread: { readonly totalYards: number; readonly topYards: number; readonly bobbinYards: number; readonly bobbins: number; readonly stitches: number; readonly minutes: number };
+}
+
+/** Route check of a design as the API returns it (no planar graph, no strokes). */
+export interface DesignCheckReport {
+  readonly units: Design['units'];
+  readonly pieces: number;
+  readonly pieceDetails: readonly { readonly length: number; readonly oddPoints: number }[];
+  readonly oddPoints: { readonly count: number; readonly points: readonly Point[] };
+  readonly onePassWithoutTravel: boolean;
+  readonly passesWithoutTravel: number;
+  readonly passesWithTravel: number;
+  readonly stitchLength: number;
+}
+
+export interface CheckAnswer {
+  readonly check: DesignCheckReport;
+  /** The planned route's figures and thread budget (what the planner would achieve). */
+  readonly plan: PlanFigures;
+  readonly threadBudget: ThreadBudget;
+}
+
+export interface PlanAnswer extends PlanFigures {
+  readonly units: Design['units'];
+  readonly route: readonly Stroke[];
+  readonly threadBudget: ThreadBudget;
+}
+
+export type EngineAnswer<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly problem: DesignProblem };
+
+export interface EngineAnswers {
+  summary: EngineAnswer<DesignSummary>;
+  check: EngineAnswer<CheckAnswer>;
+  plan: EngineAnswer<PlanAnswer>;
+}

@@ -1,4 +1,5 @@
 import type { Point } from '../geometry/point.ts';
+import { PairTable } from './pairTable.ts';
 import type { GraphEdge, LineKind, PlanarGraph } from './planarGraph.types.ts';
 
 /**
@@ -11,20 +12,14 @@ export interface Atoms {
   readonly v: number[];
   readonly kind: LineKind[];
   readonly source: number[];
-  /** Unordered vertex pair key → atom id. */
-  readonly byKey: Map<number, number>;
-  readonly vertexCount: number;
+  /** Unordered vertex pair → atom id. */
+  readonly byPair: PairTable;
 }
 
 const RANK: Readonly<Record<LineKind, number>> = { quilting: 0, seam: 1, edge: 2 };
 
-export function createAtoms(vertexCount: number): Atoms {
-  return { u: [], v: [], kind: [], source: [], byKey: new Map(), vertexCount };
-}
-
-/** Key of the unordered vertex pair {a, b}. */
-export function pairKey(atoms: Atoms, a: number, b: number): number {
-  return a < b ? a * atoms.vertexCount + b : b * atoms.vertexCount + a;
+export function createAtoms(expected: number): Atoms {
+  return { u: [], v: [], kind: [], source: [], byPair: new PairTable(expected) };
 }
 
 /** Adds the pieces of one line chain (zero-length pieces never occur: chains have no repeats). */
@@ -32,10 +27,9 @@ export function addChain(atoms: Atoms, chain: readonly number[], kind: LineKind,
   for (let k = 1; k < chain.length; k++) {
     const a = chain[k - 1]!;
     const b = chain[k]!;
-    const key = pairKey(atoms, a, b);
-    const found = atoms.byKey.get(key);
-    if (found === undefined) {
-      atoms.byKey.set(key, atoms.u.length);
+    const found = atoms.byPair.get(a, b);
+    if (found < 0) {
+      atoms.byPair.insert(a, b, atoms.u.length);
       atoms.u.push(a);
       atoms.v.push(b);
       atoms.kind.push(kind);

@@ -82,7 +82,6 @@ export function nodePolylines(lines: readonly Polyline[], tolerance: number, max
       const dy = pa1[1] - pa0[1];
       const len = Math.hypot(dx, dy);
       const candidates = index.search(Math.min(pa0[0], pa1[0]), Math.min(pa0[1], pa1[1]), Math.max(pa0[0], pa1[0]), Math.max(pa0[1], pa1[1]));
-      candidates.sort((p, q) => p - q);
       for (const j of candidates) {
         if (j <= i) continue;
         const aj = segA[j]!;

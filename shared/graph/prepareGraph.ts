@@ -48,7 +48,7 @@ export function prepareGraph(design: Design, strokes: readonly Polyline[], toler
     return err({ kind: 'too-many-crossings', message: `the lines meet in more than ${noded.error.cap} places`, cap: noded.error.cap });
   }
   const { chains, xs } = noded.value;
-  const atoms = createAtoms(xs.length);
+  const atoms = createAtoms(xs.length + chains.length);
   const keep = new Uint8Array(xs.length);
   lines.forEach((line, i) => {
     const chain = chains[i]!;

@@ -1,0 +1,67 @@
+import { z } from 'zod';
+import type { Polygon } from '../layouts/patch.ts';
+import { assertNever } from '../assertNever.ts';
+import { err, ok, type Result } from '../result.ts';
+import { archesParamsSchema, generateArches } from './arches.ts';
+import { echoParamsSchema, generateEcho } from './echo.ts';
+import type { MotifLines } from './motif.types.ts';
+import { generatePebbles, pebblesParamsSchema } from './pebbles.ts';
+import { generateRibbonCandy, ribbonCandyParamsSchema } from './ribbonCandy.ts';
+import { crosshatchParamsSchema, generateCrosshatch, generateStraightLines, straightLinesParamsSchema } from './straightLines.ts';
+
+/** Parameters of any motif, tagged by `kind`; lengths in design units, angles in degrees. */
+export const motifParamsSchema = z.discriminatedUnion('kind', [
+  straightLinesParamsSchema,
+  crosshatchParamsSchema,
+  echoParamsSchema,
+  pebblesParamsSchema,
+  ribbonCandyParamsSchema,
+  archesParamsSchema,
+]);
+export type MotifParams = z.output<typeof motifParamsSchema>;
+export type MotifParamsInput = z.input<typeof motifParamsSchema>;
+export type MotifKind = MotifParams['kind'];
+
+/** The motifs a quilter can place into a patch, in the order the picker shows them. */
+export const MOTIFS: readonly { readonly kind: MotifKind; readonly label: string; readonly description: string }[] = [
+  { kind: 'straight-lines', label: 'Straight lines', description: 'Parallel lines at an even spacing, optionally along a seam.' },
+  { kind: 'crosshatch', label: 'Crosshatch', description: 'Two sets of straight lines crossing in squares or diamonds.' },
+  { kind: 'echo', label: 'Echo', description: 'Lines following the patch outline at an even spacing inside it.' },
+  { kind: 'pebbles', label: 'Pebbles', description: 'Circles of varied size packed inside the patch.' },
+  { kind: 'ribbon-candy', label: 'Ribbon candy', description: 'One line of loops swinging left and right, sized to the patch.' },
+  { kind: 'arches', label: 'Arches', description: 'Rows of arches, across the patch or along a strip.' },
+];
+
+export type MotifError =
+  | { readonly kind: 'invalid-params'; readonly issues: readonly { readonly path: string; readonly message: string }[] }
+  | { readonly kind: 'degenerate-patch' }
+  | { readonly kind: 'patch-not-convex' };
+
+/**
+ * Generates a motif's quilting lines inside the patch polygon (design units). `params` is checked by
+ * `motifParamsSchema` first. Every returned line lies inside the patch (within ~1e-12 × its size).
+ */
+export function generateMotif(polygon: Polygon, params: unknown): Result<MotifLines, MotifError> {
+  const parsed = motifParamsSchema.safeParse(params);
+  if (!parsed.success) {
+    return err({ kind: 'invalid-params', issues: parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })) });
+  }
+  if (polygon.length < 3 || !polygon.every((p) => Number.isFinite(p[0]) && Number.isFinite(p[1]))) return err({ kind: 'degenerate-patch' });
+  const p = parsed.data;
+  switch (p.kind) {
+    case 'straight-lines':
+      return ok(generateStraightLines(polygon, p));
+    case 'crosshatch':
+      return ok(generateCrosshatch(polygon, p));
+    case 'echo':
+      return generateEcho(polygon, p);
+    case 'pebbles':
+      return ok(generatePebbles(polygon, p));
+    case 'ribbon-candy':
+      return ok(generateRibbonCandy(polygon, p));
+    case 'arches':
+      return ok(generateArches(polygon, p));
+    default:
+      return assertNever(p);
+  }
+}

@@ -201,6 +201,8 @@ export interface DesignTable {
   created_at: CreatedAt;
   updated_at: UpdatedAt;
   deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  /** Set when the design is a copy of a published template version (migration 2026_12_02_1610). */
+  copied_from_template_version_id: ColumnType<string | null, string | null | undefined, string | null>;
 }
 export type DesignRow = Selectable<DesignTable>;
 

@@ -8,6 +8,7 @@ import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } f
 import { findFreePort, waitForHttp } from './lib/ports.mjs';
 import { buildApp, runTs, serveApp } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
+import { startS3Fake } from './lib/s3Fake.mjs';
 import { clusterLocation } from './lib/cluster.mjs';
 
 ensureNodeModules();
@@ -29,6 +30,8 @@ runTs('db/migrate.ts', env);
 runTs('db/seed/index.ts', env);
 mkdirSync(env.MAIL_CAPTURE_DIR, { recursive: true });
 const mail = await startMailSink({ dir: env.MAIL_CAPTURE_DIR, port: await findFreePort(2525) });
+const s3 = await startS3Fake({ dir: path.join(ROOT, '.data', 's3') });
+Object.assign(env, s3.env);
 buildApp();
 
 const appPort = Number(process.env.PORT ?? (await findFreePort(4321)));
@@ -53,6 +56,7 @@ async function shutdown() {
   log('stopping…');
   server.kill('SIGTERM');
   await mail.close();
+  await s3.close();
   stopCluster(pgBin, pgDir);
   log('stopped.');
   process.exit(0);

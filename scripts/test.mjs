@@ -9,6 +9,7 @@ import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } f
 import { findFreePort, waitForHttp } from './lib/ports.mjs';
 import { buildApp, runTs, serveApp } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
+import { startS3Fake } from './lib/s3Fake.mjs';
 
 ensureNodeModules();
 const pgBin = ensurePostgres();
@@ -52,6 +53,9 @@ try {
   runTs('db/seed/index.ts', env);
   const mail = await startMailSink({ dir: mailDir });
   cleanups.push(() => mail.close());
+  const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
+  cleanups.push(() => s3.close());
+  Object.assign(env, s3.env);
   buildApp({ force: process.env.CI === 'true' });
   const appPort = await findFreePort();
   const appUrl = `http://127.0.0.1:${appPort}`;

@@ -1,0 +1,48 @@
+// /api/classes/:id/invitations — GET: invitations sent and their state; POST { emails: [...] }: send one e-mail
+// invitation per address (signed, expiring, single-use link) → 201 { invitations }. Teacher and admins only.
+import type { APIRoute } from 'astro';
+import { PUBLIC_ORIGIN } from 'astro:env/server';
+import { db } from '../../../../../server/db.ts';
+import { json, problem, readJson } from '../../../../../server/http.ts';
+import { requireUser } from '../../../../../server/auth/guards.ts';
+import { findClassAccess, isManager } from '../../../../../server/classes/classAccess.ts';
+import { inviteSchema } from '../../../../../server/classes/class.schema.ts';
+import { inviteByEmail } from '../../../../../server/classes/invitation.service.ts';
+
+export const GET = (async ({ locals, params }) => {
+  const signedIn = requireUser(locals);
+  if (!signedIn.ok) return signedIn.error;
+  const access = await findClassAccess(db, signedIn.value.user, params['id']);
+  if (!access || !isManager(access.standing)) return problem(404, 'not_found', 'Not found.');
+  const rows = await db
+    .selectFrom('class_invitation as i')
+    .leftJoin('account as a', 'a.id', 'i.used_by')
+    .select(['i.id', 'i.email', 'i.expires_at', 'i.used_at', 'i.revoked_at', 'i.created_at', 'a.display_name as used_by_name'])
+    .where('i.class_id', '=', access.cls.id)
+    .orderBy('i.created_at', 'desc')
+    .execute();
+  const now = Date.now();
+  return json({
+    invitations: rows.map((r) => ({
+      id: r.id,
+      email: r.email,
+      sentAt: r.created_at.toISOString(),
+      expiresAt: r.expires_at.toISOString(),
+      usedAt: r.used_at?.toISOString() ?? null,
+      usedBy: r.used_by_name,
+      state: r.revoked_at ? 'revoked' : r.used_at ? 'accepted' : r.expires_at.getTime() <= now ? 'expired' : 'open',
+    })),
+  });
+}) satisfies APIRoute;
+
+export const POST = (async ({ locals, params, request, url }) => {
+  const signedIn = requireUser(locals);
+  if (!signedIn.ok) return signedIn.error;
+  const access = await findClassAccess(db, signedIn.value.user, params['id']);
+  if (!access || !isManager(access.standing)) return problem(404, 'not_found', 'Not found.');
+  const body = await readJson(request, inviteSchema);
+  if (!body.ok) return body.error;
+  const teacher = await db.selectFrom('account').select('display_name').where('id', '=', access.cls.teacher_id).executeTakeFirstOrThrow();
+  const sent = await inviteByEmail(db, access.cls, teacher.display_name, body.value.emails, PUBLIC_ORIGIN ?? url.origin);
+  return json({ invitations: sent.map((s) => ({ id: s.id, email: s.email, expiresAt: s.expiresAt.toISOString(), delivered: s.delivered })) }, 201);
+}) satisfies APIRoute;

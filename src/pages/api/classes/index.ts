@@ -1,0 +1,28 @@
+// /api/classes — GET: my classes { teaching, enrolled }; POST: a teacher creates a class → 201 { class }.
+import type { APIRoute } from 'astro';
+import { db } from '../../../server/db.ts';
+import { json, readJson } from '../../../server/http.ts';
+import { requireRole, requireUser } from '../../../server/auth/guards.ts';
+import { createClassSchema } from '../../../server/classes/class.schema.ts';
+import { createClass } from '../../../server/classes/class.service.ts';
+import { findClassRow, listClassesFor } from '../../../server/classes/class.repository.ts';
+import { toClassJson } from '../../../server/classes/classJson.ts';
+import '../../../server/classes/releaseSchedule.ts';
+
+export const GET = (async ({ locals }) => {
+  const signedIn = requireUser(locals);
+  if (!signedIn.ok) return signedIn.error;
+  const { teaching, enrolled } = await listClassesFor(db, signedIn.value.user.id);
+  return json({ teaching: teaching.map((c) => toClassJson(c, true)), enrolled: enrolled.map((c) => toClassJson(c, false)) });
+}) satisfies APIRoute;
+
+export const POST = (async ({ locals, request }) => {
+  const signedIn = requireRole(locals, 'teacher');
+  if (!signedIn.ok) return signedIn.error;
+  const body = await readJson(request, createClassSchema);
+  if (!body.ok) return body.error;
+  const id = await createClass(db, signedIn.value.user.id, body.value);
+  const row = await findClassRow(db, id);
+  if (!row) throw new Error('api/classes: the class just created is missing');
+  return json({ class: toClassJson(row, true) }, 201);
+}) satisfies APIRoute;

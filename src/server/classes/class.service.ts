@@ -1,0 +1,106 @@
+// Rules for classes and lessons: creating them, which template versions a lesson may use, and joining by code.
+import type { Kysely } from 'kysely';
+import type { z } from 'zod';
+import type { Database } from '../../../db/schema.ts';
+import { err, ok, type Result } from '../../../shared/result.ts';
+import type { SessionUser } from '../auth/session.ts';
+import type { createClassSchema, createLessonSchema, updateClassSchema, updateLessonSchema } from './class.schema.ts';
+import { enrollStudent } from './class.repository.ts';
+import { generateJoinCode, normalizeJoinCode } from './joinCode.ts';
+
+const UNIQUE_VIOLATION = '23505';
+const isUniqueViolation = (e: unknown) => typeof e === 'object' && e !== null && (e as { code?: unknown }).code === UNIQUE_VIOLATION;
+
+/** Creates a class with a fresh join code (a collision, ~1 in 10^11, just draws again). */
+export async function createClass(db: Kysely<Database>, teacherId: string, input: z.output<typeof createClassSchema>): Promise<string> {
+  for (let attempt = 0; ; attempt += 1) {
+    try {
+      const row = await db
+        .insertInto('class')
+        .values({
+          teacher_id: teacherId,
+          title: input.title,
+          description: input.description,
+          starts_on: input.startsOn,
+          price_cents: input.priceCents,
+          currency: input.currency,
+          join_code: generateJoinCode(),
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      return row.id;
+    } catch (e) {
+      if (!isUniqueViolation(e) || attempt >= 4) throw e;
+    }
+  }
+}
+
+export async function updateClass(db: Kysely<Database>, classId: string, input: z.output<typeof updateClassSchema>): Promise<void> {
+  await db
+    .updateTable('class')
+    .set({
+      ...(input.title !== undefined && { title: input.title }),
+      ...(input.description !== undefined && { description: input.description }),
+      ...(input.startsOn !== undefined && { starts_on: input.startsOn }),
+      ...(input.priceCents !== undefined && { price_cents: input.priceCents }),
+      ...(input.currency !== undefined && { currency: input.currency }),
+      updated_at: new Date(),
+    })
+    .where('id', '=', classId)
+    .execute();
+}
+
+export async function regenerateJoinCode(db: Kysely<Database>, classId: string): Promise<string> {
+  const code = generateJoinCode();
+  await db.updateTable('class').set({ join_code: code, updated_at: new Date() }).where('id', '=', classId).execute();
+  return code;
+}
+
+/**
+ * A lesson may use a version of the teacher's own template or of a public one (admins: any). Anything else is
+ * reported exactly like a version that does not exist.
+ */
+export async function canUseTemplateVersion(db: Kysely<Database>, teacherId: string, user: SessionUser, versionId: string): Promise<boolean> {
+  const row = await db
+    .selectFrom('template_version as tv')
+    .innerJoin('template', 'template.id', 'tv.template_id')
+    .select(['template.owner_id', 'template.visibility'])
+    .where('tv.id', '=', versionId)
+    .executeTakeFirst();
+  if (!row) return false;
+  return row.visibility === 'public' || row.owner_id === teacherId || row.owner_id === user.id || user.role === 'admin';
+}
+
+export async function createLesson(db: Kysely<Database>, classId: string, input: z.output<typeof createLessonSchema>): Promise<string> {
+  const row = await db
+    .insertInto('lesson')
+    .values({ class_id: classId, title: input.title, release_at: new Date(input.releaseAt), notes_md: input.notes, template_version_id: input.templateVersionId })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}
+
+export async function updateLesson(db: Kysely<Database>, lessonId: string, input: z.output<typeof updateLessonSchema>): Promise<void> {
+  await db
+    .updateTable('lesson')
+    .set({
+      ...(input.title !== undefined && { title: input.title }),
+      ...(input.releaseAt !== undefined && { release_at: new Date(input.releaseAt) }),
+      ...(input.notes !== undefined && { notes_md: input.notes }),
+      ...(input.templateVersionId !== undefined && { template_version_id: input.templateVersionId }),
+      updated_at: new Date(),
+    })
+    .where('id', '=', lessonId)
+    .execute();
+}
+
+export type JoinError = { kind: 'unknown-code' } | { kind: 'own-class' };
+
+/** Enrols the user in the class whose join code they typed. */
+export async function joinByCode(db: Kysely<Database>, user: SessionUser, typed: string): Promise<Result<{ classId: string; newlyJoined: boolean }, JoinError>> {
+  const cls = await db.selectFrom('class').select(['id', 'teacher_id']).where('join_code', '=', normalizeJoinCode(typed)).executeTakeFirst();
+  if (!cls) return err({ kind: 'unknown-code' });
+  if (cls.teacher_id === user.id) return err({ kind: 'own-class' });
+  const newlyJoined = await enrollStudent(db, cls.id, user.id, 'join-code');
+  return ok({ classId: cls.id, newlyJoined });
+}

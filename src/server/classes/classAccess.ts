@@ -1,0 +1,54 @@
+// Who may do what with a class. The class's teacher and admins manage it; enrolled students read it;
+// everyone else gets the same answer as for a class that does not exist (null → 404).
+import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
+import type { ClassTable, Database } from '../../../db/schema.ts';
+import type { SessionUser } from '../auth/session.ts';
+
+type Db = Kysely<Database> | Transaction<Database>;
+export type ClassRow = Selectable<ClassTable>;
+/** How the user stands toward one class. Admins who also teach it count as its teacher. */
+export type ClassStanding = 'teacher' | 'admin' | 'student';
+
+export interface ClassAccess {
+  cls: ClassRow;
+  standing: ClassStanding;
+}
+
+export const isManager = (standing: ClassStanding): boolean => standing === 'teacher' || standing === 'admin';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+export const isUuid = (s: string | undefined): s is string => s !== undefined && UUID.test(s);
+
+/** The class and the user's standing toward it, or null when the user may not see it at all. */
+export async function findClassAccess(db: Db, user: SessionUser, classId: string | undefined): Promise<ClassAccess | null> {
+  if (!isUuid(classId)) return null;
+  const cls = await db.selectFrom('class').selectAll().where('id', '=', classId).executeTakeFirst();
+  if (!cls) return null;
+  if (cls.teacher_id === user.id) return { cls, standing: 'teacher' };
+  if (user.role === 'admin') return { cls, standing: 'admin' };
+  const enrolled = await db.selectFrom('enrollment').select('student_id').where('class_id', '=', cls.id).where('student_id', '=', user.id).executeTakeFirst();
+  return enrolled ? { cls, standing: 'student' } : null;
+}
+
+export interface LessonAccess extends ClassAccess {
+  lessonId: string;
+  released: boolean;
+}
+
+/**
+ * A lesson as the user may see it: managers see every lesson; students only released ones (the server's
+ * clock decides: release_at <= now()). Null → 404.
+ */
+export async function findLessonAccess(db: Db, user: SessionUser, lessonId: string | undefined): Promise<LessonAccess | null> {
+  if (!isUuid(lessonId)) return null;
+  const lesson = await db
+    .selectFrom('lesson')
+    .select((eb) => ['id', 'class_id', eb('release_at', '<=', sql<Date>`now()`).as('released')])
+    .where('id', '=', lessonId)
+    .executeTakeFirst();
+  if (!lesson) return null;
+  const access = await findClassAccess(db, user, lesson.class_id);
+  if (!access) return null;
+  if (access.standing === 'student' && !lesson.released) return null;
+  return { ...access, lessonId: lesson.id, released: Boolean(lesson.released) };
+}

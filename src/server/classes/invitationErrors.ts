@@ -1,0 +1,26 @@
+// Plain answers for invitation links that cannot be used. The wording tells the student what to do next.
+import { assertNever } from '../../../shared/assertNever.ts';
+import { problem } from '../http.ts';
+import type { AcceptProblem } from './invitation.service.ts';
+
+export function invitationMessage(p: AcceptProblem): string {
+  switch (p.kind) {
+    case 'forged':
+      return 'This invitation link is not valid. Check that you opened the whole link from the e-mail, or ask your teacher to send a new one.';
+    case 'expired':
+      return `This invitation expired on ${p.expiredAt.toISOString().slice(0, 10)}. Ask your teacher to send a new one.`;
+    case 'used':
+      return 'This invitation has already been used. If that was you, the class is in your list of classes; otherwise ask your teacher for a new one.';
+    case 'revoked':
+      return 'Your teacher withdrew this invitation. Ask them for a new one if you still want to join.';
+    case 'own-class':
+      return 'You teach this class, so you cannot join it as a student.';
+    default:
+      return assertNever(p);
+  }
+}
+
+export function invitationProblemResponse(p: AcceptProblem): Response {
+  const status = p.kind === 'forged' || p.kind === 'own-class' ? 400 : 410;
+  return problem(status, p.kind === 'own-class' ? 'invalid_input' : 'invalid_token', invitationMessage(p));
+}

@@ -1,0 +1,49 @@
+// Walkthrough progress per student and lesson: the step the student is on, how many steps the walkthrough has,
+// whether the lesson is finished, and when they were last active. Saved by the walkthrough island.
+import type { Kysely } from 'kysely';
+import type { Database } from '../../../db/schema.ts';
+
+export interface ProgressJson {
+  lessonId: string;
+  stepIndex: number;
+  totalSteps: number;
+  finished: boolean;
+  finishedAt: string | null;
+  lastActiveAt: string | null;
+}
+
+export async function readProgress(db: Kysely<Database>, lessonId: string, studentId: string): Promise<ProgressJson> {
+  const row = await db.selectFrom('lesson_progress').selectAll().where('lesson_id', '=', lessonId).where('student_id', '=', studentId).executeTakeFirst();
+  if (!row) return { lessonId, stepIndex: 0, totalSteps: 0, finished: false, finishedAt: null, lastActiveAt: null };
+  return {
+    lessonId,
+    stepIndex: row.step_index,
+    totalSteps: row.total_steps,
+    finished: row.finished_at !== null,
+    finishedAt: row.finished_at?.toISOString() ?? null,
+    lastActiveAt: row.last_active_at.toISOString(),
+  };
+}
+
+/** Upserts the student's place. `finished: true` stamps finished_at once; `false` clears it (lesson re-opened). */
+export async function saveProgress(
+  db: Kysely<Database>,
+  lessonId: string,
+  studentId: string,
+  p: { stepIndex: number; totalSteps: number; finished: boolean },
+  now = new Date(),
+): Promise<ProgressJson> {
+  await db
+    .insertInto('lesson_progress')
+    .values({ lesson_id: lessonId, student_id: studentId, step_index: p.stepIndex, total_steps: p.totalSteps, finished_at: p.finished ? now : null, last_active_at: now })
+    .onConflict((oc) =>
+      oc.columns(['lesson_id', 'student_id']).doUpdateSet((eb) => ({
+        step_index: p.stepIndex,
+        total_steps: p.totalSteps,
+        last_active_at: now,
+        finished_at: p.finished ? eb.fn.coalesce('lesson_progress.finished_at', eb.val(now)) : null,
+      })),
+    )
+    .execute();
+  return readProgress(db, lessonId, studentId);
+}

@@ -1,0 +1,67 @@
+// The bridge to the workbench's tables (design, design_version, design_route): reading a teacher's design with
+// its saved route to publish it, and writing a copy of a template version into a quilter's designs.
+import type { Kysely } from 'kysely';
+import type { Database } from '../../../db/schema.ts';
+import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
+import { err, ok, type Result } from '../../../shared/result.ts';
+import type { TemplateVersionRow } from './template.repository.ts';
+import { routeFiguresSchema, routeStrokesSchema, type RouteFigures, type RouteStroke } from './routeSnapshot.schema.ts';
+
+export interface PublishableDesign {
+  design: Design;
+  route: RouteStroke[];
+  figures: RouteFigures;
+}
+export type DesignSourceError = { kind: 'not-found' } | { kind: 'no-route' } | { kind: 'stale-route'; designVersion: number; routeVersion: number };
+
+/** The owner's design and its saved route; the route must belong to the design's current version. */
+export async function loadPublishableDesign(db: Kysely<Database>, ownerId: string, designId: string): Promise<Result<PublishableDesign, DesignSourceError>> {
+  const row = await db
+    .selectFrom('design')
+    .leftJoin('design_route', 'design_route.design_id', 'design.id')
+    .select(['design.data', 'design.version', 'design_route.strokes', 'design_route.summary', 'design_route.design_version as route_version'])
+    .where('design.id', '=', designId)
+    .where('design.owner_id', '=', ownerId)
+    .where('design.deleted_at', 'is', null)
+    .executeTakeFirst();
+  if (!row) return err({ kind: 'not-found' });
+  if (row.route_version === null || row.strokes === null) return err({ kind: 'no-route' });
+  if (row.route_version !== row.version) return err({ kind: 'stale-route', designVersion: row.version, routeVersion: row.route_version });
+  // jsonb written by another feature: parse it like any outside input (a broken row is a bug, so parse throws).
+  return ok({ design: designSchema.parse(row.data), route: routeStrokesSchema.parse(row.strokes), figures: routeFiguresSchema.parse(row.summary) });
+}
+
+/**
+ * A new design owned by `ownerId` holding the version's drawing and route, marked with the version it came from
+ * (design.copied_from_template_version_id). Returns the new design's id.
+ */
+export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: string, v: TemplateVersionRow): Promise<string> {
+  const design = designSchema.parse(v.design);
+  const route = routeStrokesSchema.parse(v.route);
+  const figures = routeFiguresSchema.parse(v.figures);
+  const title = `${v.title} (template v${v.version})`.slice(0, 200);
+  const notes = `Copied from the template "${v.title}", version ${v.version}.`;
+  const data = JSON.stringify(design);
+  return db.transaction().execute(async (trx) => {
+    const created = await trx
+      .insertInto('design')
+      .values({
+        owner_id: ownerId,
+        title,
+        notes,
+        data,
+        thumbnail_svg: buildDesignThumbnailSvg(design),
+        summary: JSON.stringify(figures),
+        copied_from_template_version_id: v.id,
+      })
+      .returning(['id', 'version'])
+      .executeTakeFirstOrThrow();
+    await trx.insertInto('design_version').values({ design_id: created.id, version: created.version, title, notes, data }).execute();
+    await trx
+      .insertInto('design_route')
+      .values({ design_id: created.id, kind: 'planned', strokes: JSON.stringify(route), summary: JSON.stringify(figures), design_version: created.version })
+      .execute();
+    return created.id;
+  });
+}

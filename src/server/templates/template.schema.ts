@@ -1,0 +1,40 @@
+// Request bodies and query strings for templates.
+import { z } from 'zod';
+
+export const difficultySchema = z.enum(['beginner', 'intermediate', 'advanced']);
+export const visibilitySchema = z.enum(['public', 'class', 'unlisted']);
+
+const motif = z.string().trim().toLowerCase().min(1).max(40).regex(/^[\p{L}\p{N} -]+$/u, 'Letters, digits, spaces and dashes only.');
+
+export const publishTemplateSchema = z
+  .object({
+    /** The teacher's own design; its saved route and figures are copied into the published version. */
+    designId: z.uuid('Choose one of your designs.'),
+    title: z.string().trim().min(1, 'Required.').max(200, 'At most 200 characters.'),
+    description: z.string().trim().max(5000, 'At most 5000 characters.').default(''),
+    difficulty: difficultySchema,
+    motifs: z.array(motif).max(12, 'At most 12 motif tags.').default([]),
+    visibility: visibilitySchema,
+  })
+  .strict();
+
+/** A new version: any field left out is taken from the latest version; without designId the drawing stays. */
+export const newVersionSchema = publishTemplateSchema.partial().strict();
+
+export const SIZE_BUCKETS = {
+  small: { label: 'up to 8 in', maxInches: 8 },
+  medium: { label: '8–14 in', maxInches: 14 },
+  large: { label: 'over 14 in', maxInches: Infinity },
+} as const;
+export type SizeBucket = keyof typeof SIZE_BUCKETS;
+
+export const galleryQuerySchema = z.object({
+  q: z.string().trim().max(100).optional(),
+  motif: motif.optional(),
+  difficulty: difficultySchema.optional(),
+  size: z.enum(['small', 'medium', 'large']).optional(),
+  page: z.coerce.number().int().min(1).max(1000).default(1),
+});
+export type GalleryQuery = z.infer<typeof galleryQuerySchema>;
+
+export const copySchema = z.object({ version: z.number().int().min(1).optional() }).strict();

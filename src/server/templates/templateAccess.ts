@@ -1,0 +1,28 @@
+// Who may see a template. The owner and admins always; anyone (signed in or not) a public one; an unlisted one
+// only through its link token; a class-only one the students of a class with a released lesson that uses it
+// (the same rule also opens unlisted templates to those students, since their teacher chose it for them).
+import { sql, type Kysely } from 'kysely';
+import type { Database } from '../../../db/schema.ts';
+import type { SessionUser } from '../auth/session.ts';
+import type { TemplateRow } from './template.repository.ts';
+
+export async function canSeeTemplate(db: Kysely<Database>, user: SessionUser | null, tpl: TemplateRow, viaLink: boolean): Promise<boolean> {
+  if (tpl.visibility === 'public') return true;
+  if (tpl.visibility === 'unlisted' && viaLink) return true;
+  if (!user) return false;
+  if (tpl.owner_id === user.id || user.role === 'admin') return true;
+  const lesson = await db
+    .selectFrom('lesson')
+    .innerJoin('template_version as tv', 'tv.id', 'lesson.template_version_id')
+    .innerJoin('enrollment', 'enrollment.class_id', 'lesson.class_id')
+    .select('lesson.id')
+    .where('tv.template_id', '=', tpl.id)
+    .where('enrollment.student_id', '=', user.id)
+    .where('lesson.release_at', '<=', sql<Date>`now()`)
+    .executeTakeFirst();
+  return lesson !== undefined;
+}
+
+export function canEditTemplate(user: SessionUser | null, tpl: TemplateRow): boolean {
+  return user !== null && (tpl.owner_id === user.id || user.role === 'admin');
+}

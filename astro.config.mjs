@@ -11,7 +11,18 @@ export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
   integrations: [react()],
-  security: { checkOrigin: true },
+  // allowedDomains: the Host names the Node adapter may put into Astro's request URL. Without them it
+  // uses "localhost" with no port, so url.origin never equals a browser's Origin and checkOrigin refuses
+  // every form post. Loopback for npm start / npm test; a deployment adds its host by setting
+  // PUBLIC_ORIGIN when it builds.
+  security: {
+    checkOrigin: true,
+    allowedDomains: [
+      { hostname: '127.0.0.1' },
+      { hostname: 'localhost' },
+      ...(process.env.PUBLIC_ORIGIN ? [{ hostname: new URL(process.env.PUBLIC_ORIGIN).hostname }] : []),
+    ],
+  },
   vite: {
     plugins: [tailwindcss()],
     resolve: {

@@ -1,0 +1,75 @@
+// Cross-site protection for the JSON API, and the sign-in / reset rate limits.
+import { afterAll, describe, expect, it } from 'vitest';
+import { createAccount, uniqueEmail } from '../helpers/accounts.ts';
+import { TestClient } from '../helpers/client.ts';
+import { closeTestDb, testDb } from '../helpers/db.ts';
+
+afterAll(closeTestDb);
+
+describe('Origin check on state-changing API requests', () => {
+  const writes: [string, string][] = [
+    ['POST', '/api/session'],
+    ['POST', '/api/accounts'],
+    ['DELETE', '/api/session'],
+    ['PATCH', '/api/account'],
+    ['PUT', '/api/account/password'],
+    ['POST', '/api/password-resets'],
+  ];
+  for (const [method, path] of writes) {
+    it(`${method} ${path}: 403 JSON without an Origin and with a foreign one`, async () => {
+      for (const origin of [null, 'https://evil.example', 'http://127.0.0.1:1']) {
+        const res = await new TestClient().request(method, path, { origin, body: { email: uniqueEmail(), password: 'whatever-password' } });
+        expect(res.status).toBe(403);
+        expect(res.body.error.code).toBe('forbidden_origin');
+      }
+    });
+  }
+
+  it('does not sign out a session through a foreign-origin DELETE', async () => {
+    const a = await createAccount();
+    expect((await a.client.delete('/api/session', { origin: 'https://evil.example' })).status).toBe(403);
+    expect((await a.client.get('/api/session')).status).toBe(200);
+  });
+
+  it('lets GET requests through without an Origin', async () => {
+    expect((await new TestClient().get('/api/session')).status).toBe(401);
+  });
+});
+
+describe('rate limits', () => {
+  it('blocks the 11th failed sign-in within 15 minutes with 429, Retry-After and the retry time', async () => {
+    const a = await createAccount();
+    for (let i = 0; i < 10; i += 1) {
+      expect((await new TestClient().post('/api/session', { email: a.email, password: `wrong-password-${i}` })).status).toBe(401);
+    }
+    const blocked = await new TestClient().post('/api/session', { email: a.email, password: a.password });
+    expect(blocked.status).toBe(429);
+    expect(blocked.body.error.code).toBe('rate_limited');
+    const retryAfter = Number(blocked.headers.get('retry-after'));
+    expect(retryAfter).toBeGreaterThan(14 * 60);
+    expect(retryAfter).toBeLessThanOrEqual(15 * 60);
+    expect(blocked.body.error.message).toMatch(/15 minutes \(until \d\d:\d\d UTC\)/);
+    // Another e-mail from the same address is not affected.
+    const b = await createAccount();
+    expect((await new TestClient().post('/api/session', { email: b.email, password: b.password })).status).toBe(200);
+    // Once the window has passed, the right password works again.
+    await testDb().updateTable('rate_limit').set({ window_ends_at: new Date(Date.now() - 1000) }).where('key', 'like', `sign-in:%:${a.email}`).execute();
+    expect((await new TestClient().post('/api/session', { email: a.email, password: a.password })).status).toBe(200);
+  });
+
+  it('a successful sign-in clears earlier failures', async () => {
+    const a = await createAccount();
+    for (let i = 0; i < 9; i += 1) await new TestClient().post('/api/session', { email: a.email, password: 'wrong-password' });
+    expect((await new TestClient().post('/api/session', { email: a.email, password: a.password })).status).toBe(200);
+    for (let i = 0; i < 9; i += 1) expect((await new TestClient().post('/api/session', { email: a.email, password: 'wrong-password' })).status).toBe(401);
+  });
+
+  it('allows 5 reset requests per hour for one e-mail, then 429', async () => {
+    const email = uniqueEmail('resetter');
+    for (let i = 0; i < 5; i += 1) expect((await new TestClient().post('/api/password-resets', { email })).status).toBe(202);
+    const blocked = await new TestClient().post('/api/password-resets', { email });
+    expect(blocked.status).toBe(429);
+    expect(Number(blocked.headers.get('retry-after'))).toBeGreaterThan(59 * 60);
+    expect(blocked.body.error.message).toMatch(/password-reset requests/);
+  });
+});

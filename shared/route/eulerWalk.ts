@@ -19,20 +19,25 @@ export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], sta
   const n = graph.vertices.length;
   const m = copies.length;
   const dirs = edgeDirections(graph);
+  const cu = new Int32Array(m);
+  const cv = new Int32Array(m);
   const degree = new Int32Array(n + 1);
-  for (const e of copies) {
+  copies.forEach((e, c) => {
     const { u, v } = graph.edges[e]!;
+    cu[c] = u;
+    cv[c] = v;
     degree[u]!++;
     if (v !== u) degree[v]!++;
-  }
+  });
   const offset = new Int32Array(n + 1);
   for (let v = 0; v < n; v++) offset[v + 1] = offset[v]! + degree[v]!;
   const live = new Int32Array(n);
   const slot = new Int32Array(offset[n]!);
   const posU = new Int32Array(m);
   const posV = new Int32Array(m);
-  copies.forEach((e, c) => {
-    const { u, v } = graph.edges[e]!;
+  copies.forEach((_, c) => {
+    const u = cu[c]!;
+    const v = cv[c]!;
     posU[c] = offset[u]! + live[u]!;
     slot[offset[u]! + live[u]!++] = c;
     if (v !== u) {
@@ -41,13 +46,11 @@ export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], sta
     }
   });
   const removeAt = (vertex: number, c: number): void => {
-    const e = graph.edges[copies[c]!]!;
-    const pos = vertex === e.u ? posU[c]! : posV[c]!;
+    const pos = vertex === cu[c] ? posU[c]! : posV[c]!;
     const lastPos = offset[vertex]! + --live[vertex]!;
     const moved = slot[lastPos]!;
     slot[pos] = moved;
-    const me = graph.edges[copies[moved]!]!;
-    if (me.u === vertex) posU[moved] = pos;
+    if (cu[moved] === vertex) posU[moved] = pos;
     else posV[moved] = pos;
   };
 
@@ -73,18 +76,19 @@ export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], sta
       for (let q = offset[v]!; q < offset[v]! + live[v]!; q++) {
         const c = slot[q]!;
         const e = copies[c]!;
-        const leavesFromU = graph.edges[e]!.u === v;
+        const leavesFromU = cu[c] === v;
         const cos = ax * dirs[4 * e + (leavesFromU ? 0 : 2)]! + ay * dirs[4 * e + (leavesFromU ? 1 : 3)]!;
         if (cos > bestCos + 1e-12 || (Math.abs(cos - bestCos) <= 1e-12 && c < best)) {
           best = c;
           bestCos = cos;
         }
       }
-      const edge = graph.edges[copies[best]!]!;
-      removeAt(edge.u, best);
-      if (edge.v !== edge.u) removeAt(edge.v, best);
-      const forward = edge.u === v;
-      stackV.push(forward ? edge.v : edge.u);
+      const bu = cu[best]!;
+      const bv = cv[best]!;
+      removeAt(bu, best);
+      if (bv !== bu) removeAt(bv, best);
+      const forward = bu === v;
+      stackV.push(forward ? bv : bu);
       stackC.push(best);
       stackF.push(forward);
     } else {

@@ -46,16 +46,16 @@ export function buildStrokes(
     const e = graph.edges[edge]!;
     const k = strokeKindOf(e.kind, stitched, edge);
     addLength(totals, k, e.length);
-    const pts = forward ? e.points : [...e.points].reverse();
+    const pts = e.points;
+    const last = pts.length - 1;
     if (k !== kind) {
       flush();
       kind = k;
-      points = [...pts];
-      length = e.length;
-    } else {
-      for (let i = 1; i < pts.length; i++) points.push(pts[i]!);
-      length += e.length;
+      points = [pts[forward ? 0 : last]!];
+      length = 0;
     }
+    for (let i = 1; i <= last; i++) points.push(pts[forward ? i : last - i]!);
+    length += e.length;
   }
   flush();
   return strokes;

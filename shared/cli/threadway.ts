@@ -1,0 +1,75 @@
+/**
+ * Threadway command line, for batch use and scripting:
+ *   npm run --silent threadway -- check FILE   route check of the design's own `route`
+ *   npm run --silent threadway -- plan FILE    the planner's route
+ * FILE is a design JSON (shared/design/design.schema.ts). Prints one JSON object to stdout; lengths are in the
+ * design's units. A bad file or bad usage prints a message to stderr and exits with code 2.
+ */
+import { readFileSync } from 'node:fs';
+import { designSchema, type Design } from '../design/design.schema.ts';
+import { checkRoute } from '../route/checkRoute.ts';
+import { planDesign } from '../route/planDesign.ts';
+
+const USAGE = 'usage: threadway (check|plan) FILE';
+
+function fail(message: string): never {
+  process.stderr.write(`threadway: ${message}\n`);
+  process.exit(2);
+}
+
+function readDesign(file: string): Design {
+  let text: string;
+  try {
+    text = readFileSync(file, 'utf8');
+  } catch (e) {
+    fail(`cannot read ${file}: ${(e as Error).message}`);
+  }
+  let json: unknown;
+  try {
+    json = JSON.parse(text);
+  } catch (e) {
+    fail(`${file} is not valid JSON: ${(e as Error).message}`);
+  }
+  const parsed = designSchema.safeParse(json);
+  if (!parsed.success) {
+    const issues = parsed.error.issues.slice(0, 10).map((i) => `  ${i.path.join('.') || '(design)'}: ${i.message}`);
+    fail(`${file} is not a valid design:\n${issues.join('\n')}`);
+  }
+  return parsed.data;
+}
+
+function plan(design: Design): object {
+  const planned = planDesign(design);
+  if (!planned.ok) fail(planned.error.message);
+  const p = planned.value;
+  return {
+    command: 'plan',
+    units: design.units,
+    pieces: p.pieces,
+    oddPoints: p.oddPoints,
+    passes: p.passes,
+    stops: p.stops,
+    stitchLength: p.stitchLength,
+    travelLength: p.travelLength,
+    retraceLength: p.retraceLength,
+    ditchLength: p.ditchLength,
+    edgeLength: p.edgeLength,
+    optimal: p.optimal,
+    travelLowerBound: p.travelLowerBound,
+    threadBudget: p.threadBudget,
+    route: p.route.map((s) => ({ pass: s.pass, kind: s.kind, points: s.points })),
+  };
+}
+
+function check(design: Design): object {
+  if (!design.route || design.route.length === 0) fail('the design has no `route` to check (use `plan` for a planned route)');
+  const checked = checkRoute(design);
+  if (!checked.ok) fail(checked.error.message);
+  const c = checked.value;
+  return { command: 'check', units: design.units, ...c };
+}
+
+const [command, file, ...rest] = process.argv.slice(2);
+if ((command !== 'check' && command !== 'plan') || file === undefined || rest.length > 0) fail(USAGE);
+const design = readDesign(file);
+process.stdout.write(`${JSON.stringify(command === 'plan' ? plan(design) : check(design))}\n`);

@@ -1,0 +1,95 @@
+import { describe, expect, it } from 'vitest';
+import type { Design } from '../design/design.schema.ts';
+import { createDrawTool, stepDrawTool, type DrawToolState } from './drawTools.ts';
+import { createSelectTool, stepSelectTool, type SelectToolState } from './selectTool.ts';
+import type { ToolEvent, ToolStep } from './tool.types.ts';
+
+const design: Design = {
+  version: 1, units: 'in', width: 12, height: 12, seams: [], edgeTravel: true,
+  lines: [[[1, 1], [5, 1]], [[1, 6], [6, 6]]],
+};
+
+function run(state: DrawToolState, events: ToolEvent[]): ToolStep<DrawToolState>[] {
+  const steps: ToolStep<DrawToolState>[] = [];
+  for (const e of events) {
+    const step = stepDrawTool(state, e);
+    steps.push(step);
+    state = step.state;
+  }
+  return steps;
+}
+
+describe('editor/drawTools', () => {
+  it('ruler: click, move (preview), click commits one straight line', () => {
+    const steps = run(createDrawTool('lines', { kind: 'ruler' }), [
+      { kind: 'pointerDown', point: [0, 0] },
+      { kind: 'pointerMove', point: [2, 1] },
+      { kind: 'pointerDown', point: [3, 3] },
+    ]);
+    expect(steps[1]!.preview).toEqual([[[0, 0], [2, 1]]]);
+    expect(steps[2]!.command).toEqual({ kind: 'addLines', target: 'lines', lines: [[[0, 0], [3, 3]]] });
+    expect(steps[2]!.state.points).toEqual([]);
+  });
+
+  it('polyline: clicks then double-click; Escape drops the gesture', () => {
+    const steps = run(createDrawTool('seams', { kind: 'polyline' }), [
+      { kind: 'pointerDown', point: [0, 0] },
+      { kind: 'pointerDown', point: [1, 0] },
+      { kind: 'pointerDown', point: [1, 1] },
+      { kind: 'pointerDown', point: [1, 1] },
+      { kind: 'doubleClick', point: [1, 1] },
+    ]);
+    expect(steps[4]!.command).toEqual({ kind: 'addLines', target: 'seams', lines: [[[0, 0], [1, 0], [1, 1]]] });
+    const cancelled = run(createDrawTool('lines', { kind: 'polyline' }), [
+      { kind: 'pointerDown', point: [0, 0] },
+      { kind: 'key', key: 'Escape' },
+      { kind: 'key', key: 'Enter' },
+    ]);
+    expect(cancelled.some((s) => s.command)).toBe(false);
+  });
+
+  it('curve: Enter commits a Catmull–Rom line through the clicked points', () => {
+    const steps = run(createDrawTool('lines', { kind: 'curve', samplesPerSpan: 8 }), [
+      { kind: 'pointerDown', point: [0, 0] },
+      { kind: 'pointerDown', point: [2, 2] },
+      { kind: 'pointerDown', point: [4, 0] },
+      { kind: 'key', key: 'Enter' },
+    ]);
+    const cmd = steps[3]!.command;
+    if (cmd?.kind !== 'addLines') throw new Error('no line committed');
+    expect(cmd.lines[0]!.length).toBe(17);
+    expect(cmd.lines[0]).toContainEqual([2, 2]);
+  });
+
+  it('freehand: drag then release commits one simplified line; a click without a drag commits nothing', () => {
+    const drag: ToolEvent[] = [{ kind: 'pointerDown', point: [0, 0] }];
+    for (let i = 1; i <= 50; i++) drag.push({ kind: 'pointerMove', point: [i * 0.1, (i % 2) * 0.001] });
+    drag.push({ kind: 'pointerUp', point: [5, 0] });
+    const steps = run(createDrawTool('lines', { kind: 'freehand', tolerance: 0.01, smoothingPasses: 2 }), drag);
+    const cmd = steps[steps.length - 1]!.command;
+    if (cmd?.kind !== 'addLines') throw new Error('no line committed');
+    expect(cmd.lines[0]).toEqual([[0, 0], [5, 0]]);
+    const click = run(createDrawTool('lines', { kind: 'freehand', tolerance: 0.01, smoothingPasses: 2 }), [
+      { kind: 'pointerDown', point: [1, 1] },
+      { kind: 'pointerUp', point: [1, 1] },
+    ]);
+    expect(click[1]!.command).toBeUndefined();
+  });
+});
+
+describe('editor/selectTool', () => {
+  it('selects by hit test, previews a drag, commits one move, deletes with Delete', () => {
+    let state: SelectToolState = createSelectTool('lines', 0.1);
+    let step = stepSelectTool(state, { kind: 'pointerDown', point: [3, 6.05] }, design);
+    expect(step.state.selection).toEqual([1]);
+    state = step.state;
+    step = stepSelectTool(state, { kind: 'pointerMove', point: [3, 7.05] }, design);
+    expect(step.preview).toEqual([[[1, 7], [6, 7]]]);
+    state = step.state;
+    step = stepSelectTool(state, { kind: 'pointerUp', point: [3, 7.05] }, design);
+    expect(step.command).toEqual({ kind: 'moveLines', target: 'lines', indices: [1], dx: 0, dy: 1 });
+    step = stepSelectTool(step.state, { kind: 'key', key: 'Delete' }, design);
+    expect(step.command).toEqual({ kind: 'deleteLines', target: 'lines', indices: [1] });
+    expect(stepSelectTool(createSelectTool('lines', 0.1), { kind: 'pointerDown', point: [9, 9] }, design).state.selection).toEqual([]);
+  });
+});

@@ -1,7 +1,7 @@
 // Machine set-up for `npm start` and `npm test`: Node modules from the lockfile and Debian packages.
 // Node built-ins only: this runs before `npm ci` has installed anything.
 import { execFileSync, spawnSync } from 'node:child_process';
-import { existsSync, statSync, readdirSync } from 'node:fs';
+import { existsSync, lstatSync, statSync, readdirSync } from 'node:fs';
 import path from 'node:path';
 
 export const ROOT = path.resolve(import.meta.dirname, '..', '..');
@@ -21,6 +21,13 @@ export function ensureNodeModules() {
   const marker = path.join(ROOT, 'node_modules', '.package-lock.json');
   const lock = path.join(ROOT, 'package-lock.json');
   if (existsSync(marker) && statSync(marker).mtimeMs >= statSync(lock).mtimeMs) return;
+  // A copy of the project whose node_modules links to another checkout's must not run `npm ci`:
+  // npm would empty the linked folder for everyone who uses it.
+  const modules = path.join(ROOT, 'node_modules');
+  if (existsSync(modules) && lstatSync(modules).isSymbolicLink()) {
+    log('node_modules is a symbolic link: not running npm ci here (install in the linked checkout instead).');
+    return;
+  }
   log('installing npm dependencies from package-lock.json (npm ci)…');
   const result = spawnSync('npm', ['ci', '--no-audit', '--no-fund'], { cwd: ROOT, stdio: 'inherit' });
   if (result.status !== 0) fail('npm ci failed; see the output above.');

@@ -91,6 +91,10 @@ describe('motifs: every generated line lies inside its patch (fast-check, seeded
     );
   });
 
+  it('refuses a patch with no area', () => {
+    expect(generateMotif([[0, 0], [1, 1], [2, 2]], { kind: 'straight-lines', spacing: 1 })).toEqual({ ok: false, error: { kind: 'degenerate-patch' } });
+  });
+
   it('reports invalid parameters with their paths', () => {
     const result = generateMotif([[0, 0], [1, 0], [0, 1]], { kind: 'straight-lines', spacing: -1 });
     expect(result.ok).toBe(false);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import type { Polygon } from '../layouts/patch.ts';
+import { signedArea, type Polygon } from '../layouts/patch.ts';
 import { assertNever } from '../assertNever.ts';
 import { err, ok, type Result } from '../result.ts';
 import { archesParamsSchema, generateArches } from './arches.ts';
@@ -46,7 +46,8 @@ export function generateMotif(polygon: Polygon, params: unknown): Result<MotifLi
   if (!parsed.success) {
     return err({ kind: 'invalid-params', issues: parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })) });
   }
-  if (polygon.length < 3 || !polygon.every((p) => Number.isFinite(p[0]) && Number.isFinite(p[1]))) return err({ kind: 'degenerate-patch' });
+  const finite = polygon.every((p) => Number.isFinite(p[0]) && Number.isFinite(p[1]));
+  if (polygon.length < 3 || !finite || signedArea(polygon) === 0) return err({ kind: 'degenerate-patch' });
   const p = parsed.data;
   switch (p.kind) {
     case 'straight-lines':

@@ -24,6 +24,10 @@ export const guardedRoutes: GuardedRoute[] = [
   { kind: 'api', method: 'PUT', path: '/api/account/password', minRole: 'quilter', body: {} },
   { kind: 'api', method: 'PUT', path: '/api/account/email', minRole: 'quilter', body: {} },
   { kind: 'api', method: 'GET', path: '/api/admin/accounts', minRole: 'admin' },
+  // Designs: only the collection routes fit here; every /api/designs/:id route answers 404 to anyone but the
+  // design's owner, which tests/api/designsAccess.test.ts checks endpoint by endpoint (401 anonymous too).
+  { kind: 'api', method: 'GET', path: '/api/designs', minRole: 'quilter' },
+  { kind: 'api', method: 'POST', path: '/api/designs', minRole: 'quilter', body: {} },
   { kind: 'api', method: 'PATCH', path: `/api/admin/accounts/${SOME_UUID}`, minRole: 'admin', body: {} },
   { kind: 'page', method: 'GET', path: '/dashboard', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/account', minRole: 'quilter' },

@@ -1,10 +1,10 @@
 // The engine work a worker does for one task: calls into shared/ and trims the answer to what the API
 // sends (no planar graph, no per-step timings). Runs inside the worker thread; also callable directly.
 import { checkDesign } from '../../../shared/route/checkDesign.ts';
-import type { DesignPlan } from '../../../shared/route/planDesign.ts';
 import { planDesign } from '../../../shared/route/planDesign.ts';
 import { assertNever } from '../../../shared/assertNever.ts';
-import type { DesignSummary, EngineAnswers, EngineTask, PlanFigures } from './engine.types.ts';
+import type { EngineAnswers, EngineTask } from './engine.types.ts';
+import { figuresOf, summaryOf } from './engineSummaries.ts';
 
 export function runEngineTask<T extends EngineTask>(task: T): EngineAnswers[T['op']];
 export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']] {
@@ -28,36 +28,4 @@ export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']]
     default:
       return assertNever(task);
   }
-}
-
-function figuresOf(plan: DesignPlan): PlanFigures {
-  return {
-    passes: plan.passes,
-    stops: plan.stops,
-    pieces: plan.pieces,
-    oddPoints: plan.oddPoints,
-    stitchLength: plan.stitchLength,
-    travelLength: plan.travelLength,
-    retraceLength: plan.retraceLength,
-    ditchLength: plan.ditchLength,
-    edgeLength: plan.edgeLength,
-    travelLowerBound: plan.travelLowerBound,
-    optimal: plan.optimal,
-  };
-}
-
-function summaryOf(plan: DesignPlan): DesignSummary {
-  const b = plan.threadBudget;
-  return {
-    ...figuresOf(plan),
-    units: plan.units,
-    thread: {
-      totalYards: b.topThreadYards + b.bobbinThreadYards,
-      topYards: b.topThreadYards,
-      bobbinYards: b.bobbinThreadYards,
-      bobbins: b.bobbins,
-      stitches: b.stitchCount,
-      minutes: b.sewingMinutes,
-    },
-  };
 }

@@ -1,0 +1,44 @@
+// Request shapes for /api/designs/… (zod). Designs themselves go through the shared designSchema, so the
+// server and the workbench refuse the same things (non-finite numbers, far-away points, 1-point lines, caps).
+import { z } from 'zod';
+import { designSchema } from '../../../shared/design/design.schema.ts';
+import { DESIGN_SORTS } from './designList.repository.ts';
+
+/** Largest request body a design endpoint reads. A design at DESIGN_LIMITS.maxPoints (200,000 points) is
+ * about 3–4 MB of JSON, so 5 MiB leaves room for the rest of the body; larger gets 413. */
+export const DESIGN_BODY_LIMIT = 5 * 1024 * 1024;
+
+const title = z.string().trim().min(1, 'Give the design a title.').max(200, 'Keep the title to 200 characters.');
+const notes = z.string().max(10_000, 'Keep notes to 10,000 characters.');
+const version = z.number().int().positive();
+
+export const createDesignSchema = z.object({ title, notes: notes.default(''), design: designSchema }).strict();
+
+export const updateDesignSchema = z
+  .object({ baseVersion: version, title: title.optional(), notes: notes.optional(), design: designSchema.optional() })
+  .strict()
+  .refine((b) => b.title !== undefined || b.notes !== undefined || b.design !== undefined, { message: 'Send a title, notes or design to save.' });
+export type UpdateDesignInput = z.infer<typeof updateDesignSchema>;
+
+export const baseVersionSchema = z.object({ baseVersion: version }).strict();
+
+/** Optional unsaved draft: the workbench checks or plans what is on screen before it is saved. */
+export const draftSchema = z.object({ design: designSchema.optional() }).strict();
+
+export const saveRouteSchema = z.discriminatedUnion('kind', [
+  /** Keep the planner's route: the server plans the saved design again (same input, same route). */
+  z.object({ kind: z.literal('planned'), designVersion: version }).strict(),
+]);
+
+/** Query of GET /api/designs; paged like the other lists (page from 1, pageSize up to 100). */
+export const listQuerySchema = z.strictObject({
+  q: z.string().trim().max(200, 'Use at most 200 characters.').default(''),
+  sort: z.enum(DESIGN_SORTS).default('updated'),
+  /** Default: newest first for dates; A→Z for titles; fewest first for figures. */
+  dir: z.enum(['asc', 'desc']).optional(),
+  page: z.coerce.number().int('Page must be a whole number.').min(1, 'Page starts at 1.').max(10_000).default(1),
+  pageSize: z.coerce.number().int('Page size must be a whole number.').min(1).max(100, 'At most 100 per page.').default(25),
+});
+
+export const idParamSchema = z.uuid();
+export const versionParamSchema = z.coerce.number().int().positive().max(2_147_483_647);

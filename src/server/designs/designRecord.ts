@@ -1,0 +1,103 @@
+// Rows → the JSON the API sends. jsonb read back from Postgres is `unknown` until a schema accepts it:
+// a stored design that no longer parses is a broken invariant (we only ever store parsed designs), so it throws.
+import { z } from 'zod';
+import type { DesignRouteRow, DesignRow, DesignVersionRow } from '../../../db/schema.ts';
+import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import type { DesignSummary, RouteFigures } from '../engine/engine.types.ts';
+
+const figure = z.number().finite();
+const routeFiguresShape = {
+  passes: figure,
+  stops: figure,
+  pieces: figure,
+  oddPoints: figure,
+  stitchLength: figure,
+  travelLength: figure,
+  retraceLength: figure,
+  ditchLength: figure,
+  edgeLength: figure,
+};
+const threadShape = z.object({ totalYards: figure, topYards: figure, bobbinYards: figure, bobbins: figure, stitches: figure, minutes: figure });
+
+export const designSummarySchema = z.object({
+  ...routeFiguresShape,
+  travelLowerBound: figure,
+  optimal: z.boolean(),
+  units: z.enum(['in', 'cm']),
+  thread: threadShape,
+}) satisfies z.ZodType<DesignSummary>;
+
+/** Figures stored with a saved route: route figures, plus the planner's proof status for planned routes. */
+export const savedRouteSummarySchema = z.object({
+  ...routeFiguresShape,
+  units: z.enum(['in', 'cm']),
+  optimal: z.boolean().nullable(),
+  thread: threadShape,
+});
+export type SavedRouteSummary = z.infer<typeof savedRouteSummarySchema> & RouteFigures;
+
+const strokesSchema = z.array(
+  z.object({
+    pass: z.number().int().positive(),
+    kind: z.enum(['stitch', 'retrace', 'ditch', 'edge']),
+    points: z.array(z.tuple([figure, figure])).min(2),
+    length: figure,
+  }),
+);
+
+function parseStored<S extends z.ZodType>(schema: S, value: unknown, what: string): z.output<S> {
+  const parsed = schema.safeParse(value);
+  if (!parsed.success) throw new Error(`server/designs/designRecord: stored ${what} fails its schema: ${parsed.error.message}`);
+  return parsed.data;
+}
+
+export function storedDesign(row: Pick<DesignRow, 'id' | 'data'>): Design {
+  return parseStored(designSchema, row.data, `design ${row.id}`);
+}
+
+export interface DesignJson {
+  id: string;
+  title: string;
+  notes: string;
+  version: number;
+  design: Design;
+  summary: DesignSummary | null;
+  createdAt: string;
+  updatedAt: string;
+}
+
+export function toDesignJson(row: DesignRow): DesignJson {
+  return {
+    id: row.id,
+    title: row.title,
+    notes: row.notes,
+    version: row.version,
+    design: storedDesign(row),
+    summary: row.summary === null ? null : parseStored(designSummarySchema, row.summary, `summary of design ${row.id}`),
+    createdAt: row.created_at.toISOString(),
+    updatedAt: row.updated_at.toISOString(),
+  };
+}
+
+export function toDesignVersionJson(row: DesignVersionRow) {
+  return {
+    version: row.version,
+    title: row.title,
+    notes: row.notes,
+    design: parseStored(designSchema, row.data, `version ${row.version} of design ${row.design_id}`),
+    savedAt: row.saved_at.toISOString(),
+  };
+}
+
+export function toSavedRouteJson(row: DesignRouteRow, currentVersion: number) {
+  return {
+    kind: row.kind,
+    designVersion: row.design_version,
+    /** False once the design was saved again after this route was computed. */
+    current: row.design_version === currentVersion,
+    strokes: parseStored(strokesSchema, row.strokes, `route strokes of design ${row.design_id}`),
+    summary: parseStored(savedRouteSummarySchema, row.summary, `route summary of design ${row.design_id}`),
+    createdAt: row.created_at.toISOString(),
+    updatedAt: row.updated_at.toISOString(),
+  };
+}

@@ -1,0 +1,107 @@
+// Route check, planning, saved routes and SVG export through the API (engine in the server's worker pool).
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createAccount, type TestAccount } from '../helpers/accounts.ts';
+import { closeTestDb } from '../helpers/db.ts';
+import { block, e9Grid } from './designFixtures.ts';
+
+let ann: TestAccount;
+beforeAll(async () => {
+  ann = await createAccount({ displayName: 'Ann' });
+});
+afterAll(closeTestDb);
+
+async function create(title: string, design: Record<string, unknown>): Promise<{ id: string; version: number }> {
+  const res = await ann.client.post('/api/designs', { title, design });
+  expect(res.status, res.text).toBe(201);
+  return res.body.design;
+}
+
+describe('check and plan against worked example E9 (shared/notes/engine-references.md §2)', () => {
+  // E9: border + N vertical and N horizontal lines at s/2 + n·s on a 12 in block, all stitched; the odd points are the
+  // 4N T-junctions on the border, spaced s apart around it, so the least retrace from (0,0) to (12,12) is 2N·s = 24
+  // for every N (derived in the notes and checked there with exact rationals and networkx).
+  for (const n of [4, 12]) {
+    it(`N = ${n}: one pass, ${4 * n} odd points, stitch ${48 + 24 * n} in, retrace 24 in, proven optimal`, async () => {
+      const d = await create(`E9 grid N=${n}`, e9Grid(n));
+      const check = await ann.client.post(`/api/designs/${d.id}/check`, {});
+      expect(check.status, check.text).toBe(200);
+      expect(check.body).toMatchObject({ designVersion: 1, draft: false });
+      expect(check.body.check).toMatchObject({ pieces: 1, passesWithTravel: 1, onePassWithoutTravel: false, units: 'in' });
+      expect(check.body.check.oddPoints.count).toBe(4 * n);
+      expect(check.body.check.stitchLength).toBeCloseTo(48 + 24 * n, 9);
+      expect(check.body.plan.retraceLength).toBeCloseTo(24, 9);
+      expect(check.body.threadBudget.stitchCount).toBeGreaterThan(0);
+
+      const plan = await ann.client.post(`/api/designs/${d.id}/plan`, {});
+      expect(plan.status, plan.text).toBe(200);
+      const p = plan.body.plan;
+      expect(p).toMatchObject({ passes: 1, stops: 0, optimal: true, units: 'in' });
+      expect(p.retraceLength).toBeCloseTo(24, 9);
+      expect(p.travelLowerBound).toBeCloseTo(24, 9);
+      expect(p.route[0].points[0]).toEqual([0, 0]);
+      expect(p.route.at(-1).points.at(-1)).toEqual([12, 12]);
+      const stitched = p.route.filter((s: any) => s.kind === 'stitch').reduce((sum: number, s: any) => sum + s.length, 0);
+      expect(stitched).toBeCloseTo(48 + 24 * n, 9);
+    });
+  }
+
+  it('checks an unsaved draft sent in the body without saving it', async () => {
+    const d = await create('Draft check', block());
+    const check = await ann.client.post(`/api/designs/${d.id}/check`, { design: e9Grid(4) });
+    expect(check.status).toBe(200);
+    expect(check.body).toMatchObject({ draft: true, designVersion: 1 });
+    expect(check.body.check.oddPoints.count).toBe(16);
+    expect((await ann.client.get(`/api/designs/${d.id}`)).body.design.design.lines).toHaveLength(2);
+  });
+
+  it('names the problem when the engine cannot check the design (no quilting lines)', async () => {
+    const d = await create('Nothing to quilt', block({ lines: [] }));
+    const check = await ann.client.post(`/api/designs/${d.id}/check`, {});
+    expect(check.status).toBe(400);
+    expect(check.body.error.fields['design.lines']).toMatch(/no quilting lines/);
+  });
+
+  it('serves concurrent checks (the pool runs them in worker threads)', async () => {
+    const d = await create('Concurrent', e9Grid(12));
+    const answers = await Promise.all(Array.from({ length: 6 }, () => ann.client.post(`/api/designs/${d.id}/check`, {})));
+    for (const a of answers) {
+      expect(a.status).toBe(200);
+      expect(a.body.plan.retraceLength).toBeCloseTo(24, 9);
+    }
+  });
+});
+
+describe('saved routes', () => {
+  it('keeps the planned route for the current version, marks it out of date after an edit, and refuses a stale version', async () => {
+    const d = await create('Route keeper', e9Grid(4));
+    const saved = await ann.client.put(`/api/designs/${d.id}/route`, { kind: 'planned', designVersion: 1 });
+    expect(saved.status, saved.text).toBe(200);
+    expect(saved.body.route).toMatchObject({ kind: 'planned', designVersion: 1, current: true, summary: { passes: 1, optimal: true } });
+    expect(saved.body.route.summary.retraceLength).toBeCloseTo(24, 9);
+    const again = await ann.client.get(`/api/designs/${d.id}/route`);
+    expect(again.body.route.strokes).toEqual(saved.body.route.strokes);
+
+    await ann.client.put(`/api/designs/${d.id}`, { baseVersion: 1, title: 'Route keeper (renamed)' });
+    expect((await ann.client.get(`/api/designs/${d.id}/route`)).body.route.current).toBe(false);
+    const stale = await ann.client.put(`/api/designs/${d.id}/route`, { kind: 'planned', designVersion: 1 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.design.version).toBe(2);
+  });
+});
+
+describe('SVG export', () => {
+  it('exports the design at true size with its current route: one path per stroke, travel dashed, pass numbers', async () => {
+    const d = await create('Export: E9 & friends', e9Grid(4));
+    await ann.client.put(`/api/designs/${d.id}/route`, { kind: 'planned', designVersion: 1 });
+    const res = await ann.client.get(`/api/designs/${d.id}/export.svg`);
+    expect(res.status).toBe(200);
+    expect(res.headers.get('content-type')).toContain('image/svg+xml');
+    expect(res.headers.get('content-disposition')).toContain('Export-E9-friends.svg');
+    expect(res.text).toMatch(/^<svg [^>]*width="[\d.]+in"/);
+    expect(res.text).toContain('<title>Export: E9 &amp; friends</title>');
+    const route = (await ann.client.get(`/api/designs/${d.id}/route`)).body.route;
+    expect(res.text.match(/data-pass="/g)).toHaveLength(route.strokes.length);
+    expect(res.text).toContain('class="retrace"');
+    expect(res.text).toContain('Block 12 × 12 in (30.48 × 30.48 cm)');
+  });
+});

@@ -13,6 +13,8 @@ export interface Stroke {
   readonly points: readonly Point[];
   /** Length in design units. */
   readonly length: number;
+  /** Planar-graph edge ids the stroke runs over, in order. */
+  readonly edges: readonly number[];
 }
 
 /** Travel and stitch lengths of a route, in design units. */
@@ -39,8 +41,9 @@ export function buildStrokes(
   let kind: StrokeKind | null = null;
   let points: Point[] = [];
   let length = 0;
+  let edges: number[] = [];
   const flush = (): void => {
-    if (kind !== null) strokes.push({ pass, kind, points, length });
+    if (kind !== null) strokes.push({ pass, kind, points, length, edges });
   };
   for (const { edge, forward } of walk) {
     const e = graph.edges[edge]!;
@@ -53,7 +56,9 @@ export function buildStrokes(
       kind = k;
       points = [pts[forward ? 0 : last]!];
       length = 0;
+      edges = [];
     }
+    edges.push(edge);
     for (let i = 1; i <= last; i++) points.push(pts[forward ? i : last - i]!);
     length += e.length;
   }

@@ -1,0 +1,90 @@
+import { useEffect, useMemo } from 'react';
+import type { Design } from '../../../shared/design/design.schema.ts';
+import { buildWalkthrough } from '../../../shared/walkthrough/buildWalkthrough.ts';
+import { findSafetyCautions } from '../../../shared/walkthrough/safetyCautions.ts';
+import type { RouteStrokeInput } from '../../../shared/walkthrough/walkthrough.types.ts';
+import { KeyList } from './KeyList.tsx';
+import { StepCard } from './StepCard.tsx';
+import { StepControls } from './StepControls.tsx';
+import { StepList } from './StepList.tsx';
+import type { ProgressSync } from './useProgressSync.ts';
+import { useStepPlayer } from './useStepPlayer.ts';
+import { WalkthroughCanvas } from './WalkthroughCanvas.tsx';
+import { findWalkthroughAction } from './walkthroughKeys.ts';
+
+export interface WalkthroughViewProps {
+  readonly title: string;
+  readonly design: Design;
+  readonly route: readonly RouteStrokeInput[];
+  /** Words from the lesson (notes) that decide which safety notes to add beyond the needle. */
+  readonly lessonText: readonly string[];
+  readonly initialStep: number;
+  readonly progress: ProgressSync;
+}
+
+const SAVE_LABEL = { off: 'Progress is not saved here (open the walkthrough from a class lesson to keep your place).', saved: 'Your place is saved.', saving: 'Saving your place…', retrying: 'Not saved yet: retrying when the connection is back.' } as const;
+
+/** The student walkthrough: canvas replay, the current step, controls, keyboard, and the printable step list. */
+export function WalkthroughView({ title, design, route, lessonText, initialStep, progress }: WalkthroughViewProps) {
+  const walkthrough = useMemo(() => buildWalkthrough(design, route), [design, route]);
+  const { steps } = walkthrough;
+  const cautions = useMemo(() => findSafetyCautions(lessonText), [lessonText]);
+  const sp = useStepPlayer(steps, route, design.units, initialStep);
+  const step = steps[sp.stepIndex]!;
+  const patch = walkthrough.patches.find((p) => p.name === step.patch) ?? null;
+  const last = sp.stepIndex === steps.length - 1;
+  const { report } = progress;
+
+  useEffect(() => report(sp.stepIndex, steps.length), [report, sp.stepIndex, steps.length]);
+
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const target = e.target as HTMLElement | null;
+      const inField = !!target && (['INPUT', 'SELECT', 'TEXTAREA'].includes(target.tagName) || target.isContentEditable);
+      const onButton = target?.tagName === 'BUTTON' && (e.key === ' ' || e.key === 'Enter');
+      const action = onButton ? null : findWalkthroughAction(e, inField);
+      if (!action) return;
+      e.preventDefault();
+      if (action === 'play-pause') sp.playPause();
+      else if (action === 'next-step') sp.goTo(sp.stepIndex + 1);
+      else if (action === 'previous-step') sp.goTo(sp.stepIndex - 1);
+      else if (action === 'first-step') sp.goTo(0);
+      else if (action === 'last-step') sp.goTo(steps.length - 1);
+      else if (action === 'replay-step') sp.replay();
+      else if (action === 'faster') sp.changeSpeed(1);
+      else sp.changeSpeed(-1);
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [sp, steps.length]);
+
+  return (
+    <div className="flex flex-col gap-6" data-testid="walkthrough">
+      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_28rem]">
+        <div className="h-[55vh] min-h-80 print:hidden">
+          <WalkthroughCanvas design={design} strokes={route} step={step} patch={patch} needle={sp.needle} />
+        </div>
+        <div className="flex flex-col gap-4">
+          <StepCard step={step} />
+          <StepControls sp={sp} stepCount={steps.length} units={design.units} />
+          <div className="flex flex-col gap-2 print:hidden">
+            {last && progress.state !== 'off' && (
+              <button
+                type="button"
+                onClick={() => progress.setFinished(!progress.finished, steps.length)}
+                className={`min-h-12 rounded-lg px-4 text-xl font-bold ${progress.finished ? 'border-2 border-sage-600 bg-white text-sage-600' : 'bg-sage-600 text-white'}`}
+              >
+                {progress.finished ? '✓ Lesson done (tap to re-open)' : 'Mark lesson done'}
+              </button>
+            )}
+            <p className="text-base" role="status" data-testid="save-state" data-state={progress.state}>
+              {progress.finished && progress.state !== 'off' ? 'You finished this lesson. ' : ''}{SAVE_LABEL[progress.state]}
+            </p>
+          </div>
+          <KeyList />
+        </div>
+      </div>
+      <StepList title={title} steps={steps} cautions={cautions} current={sp.stepIndex} onPick={sp.goTo} />
+    </div>
+  );
+}

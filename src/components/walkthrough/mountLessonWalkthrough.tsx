@@ -1,0 +1,16 @@
+// Mounts the lesson walkthrough into the lesson page's mount point (#walkthrough-root), reading the lesson JSON
+// the page embeds in #walkthrough-data (the same document as GET /api/lessons/:id). The page's static block
+// preview stays until this runs, so the lesson still shows its block without JavaScript.
+import { createRoot } from 'react-dom/client';
+import { LessonWalkthrough, lessonDataSchema } from './LessonWalkthrough.tsx';
+
+const root = document.getElementById('walkthrough-root');
+const dataEl = document.getElementById('walkthrough-data');
+if (root && dataEl) {
+  const parsed = lessonDataSchema.safeParse(JSON.parse(dataEl.textContent || 'null'));
+  if (parsed.success) {
+    const progressUrl = root.dataset['canSave'] === 'true' ? (root.dataset['progressUrl'] ?? null) : null;
+    root.replaceChildren();
+    createRoot(root).render(<LessonWalkthrough data={parsed.data} progressUrl={progressUrl} />);
+  }
+}

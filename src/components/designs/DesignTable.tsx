@@ -15,8 +15,8 @@ const COLUMNS: readonly Columns[] = [
   { key: null, label: 'Size' },
   { key: 'passes', label: 'Passes' },
   { key: 'stops', label: 'Stops' },
-  { key: null, label: 'Travel' },
-  { key: null, label: 'Thread' },
+  { key: 'travel', label: 'Travel' },
+  { key: 'thread', label: 'Thread' },
   { key: 'updated', label: 'Last edited' },
 ];
 
@@ -46,7 +46,7 @@ export function DesignTable() {
     if (key === sort) setDir(dir === 'asc' ? 'desc' : 'asc');
     else {
       setSort(key);
-      setDir(key === 'title' ? 'asc' : 'desc');
+      setDir(key === 'updated' ? 'desc' : 'asc');
     }
     setPage(1);
   }
@@ -99,7 +99,7 @@ export function DesignTable() {
         </div>
       )}
       {list && list.total === 0 && query && <p className="mt-6">No design titles contain “{query}”.</p>}
-      {list && list.designs.length > 0 && (
+      {list && list.items.length > 0 && (
         <div className="mt-4 overflow-x-auto">
           <table className="w-full border-collapse text-left">
             <thead>
@@ -117,7 +117,7 @@ export function DesignTable() {
               </tr>
             </thead>
             <tbody>
-              {list.designs.map((d) => (
+              {list.items.map((d) => (
                 <tr key={d.id} className="border-b border-muslin-200 align-middle">
                   <td className="px-2 py-2">
                     <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`} alt="" width={56} height={56} className="rounded border border-muslin-200 bg-white" />
@@ -126,8 +126,8 @@ export function DesignTable() {
                   <td className="px-2 py-2 whitespace-nowrap">{formatSize(d.width, d.height, d.units)}</td>
                   <td className="px-2 py-2">{d.summary?.passes ?? '–'}</td>
                   <td className="px-2 py-2">{d.summary?.stops ?? '–'}</td>
-                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatDistance(d.summary.travel, d.units) : '–'}</td>
-                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatYards(d.summary.threadInches) : '–'}</td>
+                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatDistance(d.summary.travelLength, d.units) : '–'}</td>
+                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatYards(d.summary.thread.totalYards) : '–'}</td>
                   <td className="px-2 py-2 whitespace-nowrap"><time dateTime={d.updatedAt}>{formatEdited(Date.parse(d.updatedAt), now)}</time></td>
                   <td className="px-2 py-2 whitespace-nowrap">
                     <button type="button" onClick={() => void duplicate(d)} className="mr-2 underline" aria-label={`Duplicate ${d.title}`}>Duplicate</button>

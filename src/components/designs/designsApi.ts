@@ -1,8 +1,8 @@
 import { z } from 'zod';
-import { unitsSchema } from '../../../shared/design/design.schema.ts';
+import { designSchema, unitsSchema } from '../../../shared/design/design.schema.ts';
 
 /** Sort keys the design list accepts (GET /api/designs?sort=). */
-export const DESIGN_SORTS = ['title', 'updated', 'passes', 'stops'] as const;
+export const DESIGN_SORTS = ['title', 'updated', 'passes', 'stops', 'travel', 'thread'] as const;
 export type DesignSort = (typeof DESIGN_SORTS)[number];
 
 /** One row of the design list as the API sends it. */
@@ -18,15 +18,15 @@ export const designListItemSchema = z.object({
     .object({
       passes: z.number(),
       stops: z.number(),
-      travel: z.number(),
-      threadInches: z.number(),
+      travelLength: z.number(),
+      thread: z.object({ totalYards: z.number() }),
     })
     .nullable(),
 });
 export type DesignListItem = z.infer<typeof designListItemSchema>;
 
 export const designListSchema = z.object({
-  designs: z.array(designListItemSchema),
+  items: z.array(designListItemSchema),
   total: z.number().int(),
   page: z.number().int(),
   pageSize: z.number().int(),
@@ -44,4 +44,20 @@ export function designListPath(q: { sort: DesignSort; dir: 'asc' | 'desc'; q: st
 export function createdDesignId(body: unknown): string | null {
   const parsed = z.object({ design: z.object({ id: z.string() }) }).safeParse(body);
   return parsed.success ? parsed.data.design.id : null;
+}
+
+/** One design as the workbench edits it (GET /api/designs/:id). */
+export const designRecordSchema = z.object({
+  id: z.string(),
+  title: z.string(),
+  notes: z.string(),
+  version: z.number().int(),
+  design: designSchema,
+});
+export type DesignRecord = z.infer<typeof designRecordSchema>;
+
+/** Reads `{ design: record }` from a read, update or 409 answer; null when the shape does not match. */
+export function parseDesignRecord(body: unknown): DesignRecord | null {
+  const parsed = z.object({ design: designRecordSchema }).safeParse(body);
+  return parsed.success ? parsed.data.design : null;
 }

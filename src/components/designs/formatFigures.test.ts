@@ -13,9 +13,9 @@ describe('figure formatting', () => {
     expect(formatSize(12, 12, 'in')).toBe('12 × 12 in');
   });
 
-  it('turns inches of thread into yards (36 in = 1 yd, by definition)', () => {
-    expect(formatYards(36)).toBe('1 yd');
-    expect(formatYards(90)).toBe('2.5 yd');
+  it('rounds thread to a tenth of a yard', () => {
+    expect(formatYards(1)).toBe('1 yd');
+    expect(formatYards(2.54)).toBe('2.5 yd');
   });
 
   it('says how long ago in plain words', () => {

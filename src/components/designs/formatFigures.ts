@@ -33,8 +33,8 @@ export function formatDistance(value: number, units: Units): string {
 }
 
 /** Thread in yards (the unit thread is sold in here) with one decimal. */
-export function formatYards(inches: number): string {
-  return `${trimDecimals(inches / 36, 1)} yd`;
+export function formatYards(yards: number): string {
+  return `${trimDecimals(yards, 1)} yd`;
 }
 
 /** Minutes, as "about 4 min" or "under 1 min". */

@@ -17,10 +17,10 @@ export interface RouteLayerProps {
 }
 
 /** How each stroke kind is drawn: stitching solid, travel dashed in its own colour. */
-function strokeStyle(kind: StrokeKind, theme: CanvasTheme): { color: string; dash: number[] | undefined; width: number } {
+function strokeStyle(kind: StrokeKind, theme: CanvasTheme): { color: string; dash: number[]; width: number } {
   switch (kind) {
     case 'stitch':
-      return { color: theme.stitch, dash: undefined, width: 2.5 };
+      return { color: theme.stitch, dash: [], width: 2.5 };
     case 'retrace':
       return { color: theme.retrace, dash: [8, 4], width: 3 };
     case 'ditch':

@@ -1,0 +1,25 @@
+import { describe, expect, it } from 'vitest';
+import { generateMotif, MOTIFS, motifParamsSchema } from '../../../shared/motifs/motifs.ts';
+import { buildMotifParams, defaultMotifValues, MOTIF_FIELDS } from './motifForm.ts';
+
+describe('motif panel values', () => {
+  it('every motif’s default values pass the generator’s own schema, in inches and in cm', () => {
+    for (const { kind } of MOTIFS) {
+      for (const units of ['in', 'cm'] as const) {
+        const params = buildMotifParams(kind, defaultMotifValues(kind, units));
+        expect(motifParamsSchema.safeParse(params).success, `${kind} ${units}`).toBe(true);
+      }
+    }
+  });
+
+  it('fields exist for every motif kind the registry offers', () => {
+    expect(Object.keys(MOTIF_FIELDS).sort()).toEqual(MOTIFS.map((m) => m.kind).sort());
+  });
+
+  it('a straight-line set at 1/2 in across a 4 in square gives ⌊4/0.5⌋ = 8 lines', () => {
+    // Count rule from the issue: ⌊w/s⌋ lines across width w at spacing s.
+    const square = [[0, 0], [4, 0], [4, 4], [0, 4]] as const;
+    const r = generateMotif(square, buildMotifParams('straight-lines', { spacing: 0.5, angle: 0 }));
+    expect(r.ok && r.value.lines.length).toBe(8);
+  });
+});

@@ -1,0 +1,73 @@
+// Progressive forms for the teaching pages: a <form data-json-form action="/api/…" data-method="POST"> is sent as
+// JSON (fields by name; data-number / data-list / data-datetime inputs converted), file inputs marked data-raw as
+// raw bytes. Errors from the API's one error shape appear in the form's [data-form-alert] and beside the named
+// fields; on success the page goes to data-redirect (":id"-style {placeholders} filled from the response) or reloads.
+import { sendJson } from '../ui/submitJson.ts';
+
+function valueOf(el: HTMLInputElement | HTMLTextAreaElement | HTMLSelectElement): unknown {
+  const v = el.value.trim();
+  if (el.dataset['number'] !== undefined) return v === '' ? null : Math.round(Number(v) * Number(el.dataset['number'] || 1));
+  if (el.dataset['list'] !== undefined) return v.split(/[,\n]/).map((s) => s.trim()).filter(Boolean);
+  if (el.dataset['datetime'] !== undefined) return v === '' ? undefined : new Date(v).toISOString();
+  return v === '' && el.dataset['optional'] !== undefined ? undefined : el.value;
+}
+
+function fill(template: string, data: unknown): string {
+  return template.replace(/\{([\w.]+)\}/g, (_, path: string) => String(path.split('.').reduce<any>((o, k) => (o == null ? o : o[k]), data) ?? ''));
+}
+
+async function submit(form: HTMLFormElement): Promise<void> {
+  const alert = form.querySelector<HTMLElement>('[data-form-alert]');
+  const button = form.querySelector<HTMLButtonElement>('button[type=submit]');
+  form.querySelectorAll('[data-field-error]').forEach((e) => e.remove());
+  if (alert) alert.hidden = true;
+  if (button) button.disabled = true;
+  const method = (form.dataset['method'] ?? 'POST') as 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  let outcome;
+  const raw = form.querySelector<HTMLInputElement>('input[type=file][data-raw]');
+  if (raw) {
+    const file = raw.files?.[0];
+    const side = form.querySelector<HTMLSelectElement>('[name=side]')?.value ?? 'front';
+    const res = file
+      ? await fetch(`${form.action}?side=${side}`, { method: 'POST', body: file, headers: { 'content-type': file.type || 'application/octet-stream' } }).catch(() => null)
+      : null;
+    const data = res ? await res.json().catch(() => null) : null;
+    outcome = res?.ok ? { ok: true as const, data } : { ok: false as const, error: { message: file ? (data?.error?.message ?? 'The upload failed.') : 'Choose a photo first.', fields: {} as Record<string, string> } };
+  } else {
+    const body: Record<string, unknown> = {};
+    for (const el of Array.from(form.elements)) {
+      if (!(el instanceof HTMLInputElement || el instanceof HTMLTextAreaElement || el instanceof HTMLSelectElement) || !el.name) continue;
+      const v = valueOf(el);
+      if (v !== undefined) body[el.name] = v;
+    }
+    outcome = await sendJson(method, form.action, form.dataset['empty'] !== undefined ? undefined : body);
+  }
+  if (button) button.disabled = false;
+  if (!outcome.ok) {
+    if (alert) {
+      alert.textContent = outcome.error.message;
+      alert.hidden = false;
+    }
+    for (const [name, message] of Object.entries(outcome.error.fields)) {
+      const input = form.querySelector<HTMLElement>(`[name="${CSS.escape(name)}"]`);
+      if (!input) continue;
+      const p = document.createElement('p');
+      p.dataset['fieldError'] = '';
+      p.className = 'mt-1 text-sm font-semibold text-madder-600';
+      p.textContent = message;
+      input.insertAdjacentElement('afterend', p);
+    }
+    (alert ?? form).focus();
+    return;
+  }
+  const to = form.dataset['redirect'];
+  if (to) window.location.assign(fill(to, outcome.data));
+  else window.location.reload();
+}
+
+for (const form of Array.from(document.querySelectorAll<HTMLFormElement>('form[data-json-form]'))) {
+  form.addEventListener('submit', (event) => {
+    event.preventDefault();
+    void submit(form);
+  });
+}

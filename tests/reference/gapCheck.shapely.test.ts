@@ -53,5 +53,5 @@ describe('reference: gap check against shapely polylabel', () => {
       // Our disc is empty: its centre is at least `radius` from every line and the border.
       expect(reference[i]!.centerClearance, context).toBeGreaterThanOrEqual(ours[i]!.radius - 1e-9);
     });
-  });
+  }, 180_000);
 });

@@ -106,5 +106,5 @@ describe('reference: planar graph against shapely unary_union', () => {
       segments += ref.segments;
     });
     expect(segments).toBeGreaterThan(240 * 5); // the designs are not trivial
-  });
+  }, 180_000);
 });

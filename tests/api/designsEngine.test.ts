@@ -89,6 +89,53 @@ describe('saved routes', () => {
   });
 });
 
+describe("the quilter's own route", () => {
+  // block(): seam x = 6 and quilting lines y = 3 and y = 9 across a 12 in block (edge travel on).
+  const along = [[[0, 3], [12, 3]], [[12, 3], [12, 9]], [[12, 9], [0, 9]]];
+  const jump = [[[0, 3], [12, 3]], [[0, 9], [12, 9]]];
+
+  it('checks a drawn route with the draft: one pass with 6 in of edge travel; a jump is a new pass (a stop)', async () => {
+    const d = await create('Own route', block());
+    const one = await ann.client.post(`/api/designs/${d.id}/check`, { design: block({ route: along }) });
+    expect(one.status, one.text).toBe(200);
+    expect(one.body.ownRoute).toMatchObject({ passes: 1, stops: 0, unstitched: { count: 0 } });
+    expect(one.body.ownRoute.stitchLength).toBeCloseTo(24, 9);
+    expect(one.body.ownRoute.edgeLength).toBeCloseTo(6, 9);
+    // The planner's least travel for the same lines is also 6 in (4 odd points, 2 free ends, the others 6 in apart).
+    expect(one.body.plan.travelLength).toBeCloseTo(6, 9);
+    const two = await ann.client.post(`/api/designs/${d.id}/check`, { design: block({ route: jump }) });
+    expect(two.body.ownRoute).toMatchObject({ passes: 2, stops: 1, travelLength: 0 });
+    const none = await ann.client.post(`/api/designs/${d.id}/check`, {});
+    expect(none.body.ownRoute).toBeNull();
+  });
+
+  it('saves the own route with strokes computed on the server, and refuses a malformed stroke naming it', async () => {
+    const d = await create('Own route saved', block());
+    const saved = await ann.client.put(`/api/designs/${d.id}/route`, { kind: 'own', designVersion: 1, route: along });
+    expect(saved.status, saved.text).toBe(200);
+    expect(saved.body.route).toMatchObject({ kind: 'own', current: true, summary: { passes: 1, stops: 0, optimal: null } });
+    expect(saved.body.route.strokes.map((s: any) => [s.pass, s.kind])).toEqual([[1, 'stitch'], [1, 'edge'], [1, 'stitch']]);
+    const bad = await ann.client.put(`/api/designs/${d.id}/route`, { kind: 'own', designVersion: 1, route: [[[1, 1]], [[0, 0], [900, 0]]] });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['route.0']).toMatch(/at least 2 points/);
+    expect(bad.body.error.fields['route.1.1']).toMatch(/far outside/);
+  });
+});
+
+describe('gap check', () => {
+  it('finds the widest empty spot: a 6 in square between the two lines and the seam holds a circle of diameter 6', async () => {
+    // Analytic: the largest circle inside a 6 × 6 in square has radius 3 (the other regions are 3 in strips).
+    const d = await create('Gap', block({ thread: { battingSpacing: 4 } }));
+    const check = await ann.client.post(`/api/designs/${d.id}/check`, {});
+    // The search is certified: the true radius lies in [radius, radius + precision].
+    const { radius, precision } = check.body.gap;
+    expect(radius).toBeLessThanOrEqual(3 + 1e-9);
+    expect(radius + precision).toBeGreaterThanOrEqual(3 - 1e-9);
+    expect(precision).toBeLessThan(0.05);
+    expect(check.body.gap).toMatchObject({ limit: 4, status: 'over' });
+  });
+});
+
 describe('SVG export', () => {
   it('exports the design at true size with its current route: one path per stroke, travel dashed, pass numbers', async () => {
     const d = await create('Export: E9 & friends', e9Grid(4));

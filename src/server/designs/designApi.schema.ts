@@ -28,6 +28,8 @@ export const draftSchema = z.object({ design: designSchema.optional() }).strict(
 export const saveRouteSchema = z.discriminatedUnion('kind', [
   /** Keep the planner's route: the server plans the saved design again (same input, same route). */
   z.object({ kind: z.literal('planned'), designVersion: version }).strict(),
+  /** Keep the quilter's own route: polylines in stitching order (checked against the block like the design's lines). */
+  z.object({ kind: z.literal('own'), designVersion: version, route: z.array(z.unknown()).min(1, 'Draw at least one stroke.') }).strict(),
 ]);
 
 /** Query of GET /api/designs; paged like the other lists (page from 1, pageSize up to 100). */

@@ -3,18 +3,22 @@
 import type { Design } from '../../../shared/design/design.schema.ts';
 import type { Point } from '../../../shared/geometry/point.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
+import type { GapCheck } from '../../../shared/gap/gapCheck.ts';
+import type { RouteCheck } from '../../../shared/route/checkRoute.ts';
 import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
 import type { Stroke } from '../../../shared/route/routeStrokes.ts';
 
 /**
  * - `summary`: the figures stored with a saved design (for the designs table);
  * - `check`: route check of the design, of its own `route` if it has one, thread budget, gap check;
- * - `plan`: the planner's route with its figures.
+ * - `plan`: the planner's route with its figures;
+ * - `ownRoute`: route check of the design's own `route` with drawing strokes (for saving it).
  */
 export type EngineTask =
   | { readonly op: 'summary'; readonly design: Design }
   | { readonly op: 'check'; readonly design: Design }
-  | { readonly op: 'plan'; readonly design: Design };
+  | { readonly op: 'plan'; readonly design: Design }
+  | { readonly op: 'ownRoute'; readonly design: Design };
 
 /** Figures of a route (planned or the quilter's own), lengths in the design's units. */
 export interface RouteFigures {
@@ -60,6 +64,23 @@ export interface CheckAnswer {
   /** The planned route's figures and thread budget (what the planner would achieve). */
   readonly plan: PlanFigures;
   readonly threadBudget: ThreadBudget;
+  /** Route check of the design's own `route`; null when it has none. */
+  readonly ownRoute: RouteCheck | null;
+  /** Widest empty spot vs the batting's spacing limit; null if the gap search refused the design. */
+  readonly gap: GapCheck | null;
+}
+
+/** A stroke as saved and drawn: one kind, one pass, its polyline and length (design units). */
+export interface RouteStroke {
+  readonly pass: number;
+  readonly kind: Stroke['kind'];
+  readonly points: readonly Point[];
+  readonly length: number;
+}
+
+export interface OwnRouteAnswer {
+  readonly check: RouteCheck;
+  readonly strokes: readonly RouteStroke[];
 }
 
 export interface PlanAnswer extends PlanFigures {
@@ -74,4 +95,5 @@ export interface EngineAnswers {
   summary: EngineAnswer<DesignSummary>;
   check: EngineAnswer<CheckAnswer>;
   plan: EngineAnswer<PlanAnswer>;
+  ownRoute: EngineAnswer<OwnRouteAnswer>;
 }

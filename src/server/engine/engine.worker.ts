@@ -1,4 +1,5 @@
-// Worker-thread entry for the engine pool (see enginePool.ts). Answers `{ id, input: EngineTask }` with a
+// Worker-thread entry for the engine pool (see enginePool.ts). Says `{ ready: true }` once loaded, then answers
+// each `{ id, input: EngineTask }` with a
 // WorkerReply. A throw inside the engine is a broken invariant: it goes back as `ok: false` with its stack,
 // and the worker stays up for the next task. Bundled to dist/engine/engine.worker.mjs by scripts/lib/engineWorker.mjs.
 import { parentPort } from 'node:worker_threads';
@@ -17,3 +18,4 @@ port.on('message', ({ id, input }: { id: number; input: EngineTask }) => {
   }
   port.postMessage(reply);
 });
+port.postMessage({ ready: true } satisfies WorkerReply);

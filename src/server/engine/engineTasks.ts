@@ -1,10 +1,13 @@
 // The engine work a worker does for one task: calls into shared/ and trims the answer to what the API
 // sends (no planar graph, no per-step timings). Runs inside the worker thread; also callable directly.
+import { checkGap } from '../../../shared/gap/gapCheck.ts';
 import { checkDesign } from '../../../shared/route/checkDesign.ts';
+import { checkRoute } from '../../../shared/route/checkRoute.ts';
 import { planDesign } from '../../../shared/route/planDesign.ts';
 import { assertNever } from '../../../shared/assertNever.ts';
 import type { EngineAnswers, EngineTask } from './engine.types.ts';
 import { figuresOf, summaryOf } from './engineSummaries.ts';
+import { buildOwnRouteStrokes } from './ownRouteStrokes.ts';
 
 export function runEngineTask<T extends EngineTask>(task: T): EngineAnswers[T['op']];
 export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']] {
@@ -17,7 +20,20 @@ export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']]
       const checked = checkDesign(task.design);
       if (!checked.ok) return { ok: false, problem: checked.error };
       const { plan, ...check } = checked.value;
-      return { ok: true, value: { check, plan: figuresOf(plan), threadBudget: plan.threadBudget } };
+      let ownRoute = null;
+      if (task.design.route && task.design.route.length > 0) {
+        const own = checkRoute(task.design);
+        if (!own.ok) return { ok: false, problem: own.error };
+        ownRoute = own.value;
+      }
+      const gap = checkGap(task.design);
+      return { ok: true, value: { check, plan: figuresOf(plan), threadBudget: plan.threadBudget, ownRoute, gap: gap.ok ? gap.value : null } };
+    }
+    case 'ownRoute': {
+      const own = checkRoute(task.design);
+      if (!own.ok) return { ok: false, problem: own.error };
+      const strokes = buildOwnRouteStrokes(task.design, own.value);
+      return strokes.ok ? { ok: true, value: { check: own.value, strokes: strokes.value } } : { ok: false, problem: strokes.error };
     }
     case 'plan': {
       const planned = planDesign(task.design);

@@ -53,6 +53,7 @@ describe('WorkerPool', () => {
 
   it('queues beyond its size, refuses beyond the queue cap as busy, and passes worker errors on as failed', async () => {
     const pool = makePool<SpinIn, SpinOut>({ ...spin, size: 1, maxQueue: 1 });
+    expect((await pool.run({ ms: 0 })).ok).toBe(true); // loaded: the next job runs at once instead of waiting
     const running = pool.run({ ms: 300 });
     const queued = pool.run({ ms: 0 });
     const refused = await pool.run({ ms: 0 });
@@ -61,6 +62,16 @@ describe('WorkerPool', () => {
     expect((await queued).ok).toBe(true);
     expect(await pool.run({ ms: 0, fail: true })).toEqual({ ok: false, error: { kind: 'failed', message: 'asked to fail' } });
     expect((await pool.run({ ms: 0 })).ok).toBe(true);
+  });
+
+  it('does not count a cold start against the time cap, and fails jobs when the worker file cannot load', async () => {
+    // tsx compiles the engine on first load, which takes longer than this cap on a busy machine.
+    const cold = makePool<EngineTask, EngineAnswers['plan']>({ ...engineWorkerLocation(true, root), size: 1, timeoutMs: 300 });
+    const design = designSchema.parse({ version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [[[0, 6], [12, 6]]] });
+    expect((await cold.run({ op: 'plan', design })).ok).toBe(true);
+    const broken = makePool<SpinIn, SpinOut>({ file: path.join(root, 'src/server/engine/testing/no-such.worker.mjs'), size: 1 });
+    const r = await broken.run({ ms: 0 });
+    expect(r.ok === false && r.error.kind).toBe('failed');
   });
 
   it('answers closed after close()', async () => {

@@ -14,7 +14,7 @@ export interface WorkerPoolOptions {
   readonly size: number;
   /** Time cap per job in ms, counted from when a worker takes the job (queue time not included). */
   readonly timeoutMs: number;
-  /** Most jobs waiting for a worker; one more is refused as `busy`. */
+  /** Most jobs waiting for a worker (busy or still loading); one more is refused as `busy`. */
   readonly maxQueue: number;
 }
 
@@ -25,8 +25,11 @@ export type PoolFailure =
   | { readonly kind: 'failed'; readonly message: string }
   | { readonly kind: 'closed' };
 
-/** What a worker posts back. */
-export type WorkerReply = { readonly id: number; readonly ok: true; readonly value: unknown } | { readonly id: number; readonly ok: false; readonly error: string };
+/** What a worker posts: `ready` once it has loaded and listens, then one reply per job. */
+export type WorkerReply =
+  | { readonly ready: true }
+  | { readonly id: number; readonly ok: true; readonly value: unknown }
+  | { readonly id: number; readonly ok: false; readonly error: string };
 
 interface Job {
   readonly id: number;
@@ -36,6 +39,8 @@ interface Job {
 
 interface Slot {
   worker: Worker;
+  /** False until the worker has loaded (a cold start must not eat into a job's time cap). */
+  ready: boolean;
   job: Job | null;
   timer: NodeJS.Timeout | null;
 }
@@ -61,16 +66,14 @@ export class WorkerPool<TIn, TOut> {
     }
   }
 
-  /** Runs one job; never rejects. Workers start on first use. */
+  /** Runs one job; never rejects. Workers start on first use; a job waits while every worker is busy or loading. */
   run(input: TIn): Promise<Result<TOut, PoolFailure>> {
     if (this.closed) return Promise.resolve(err({ kind: 'closed' }));
-    if (this.slots.length < this.options.size) this.slots.push(this.spawn());
+    if (this.queue.length >= this.options.maxQueue) return Promise.resolve(err({ kind: 'busy', queued: this.queue.length }));
+    while (this.slots.length < this.options.size) this.slots.push(this.spawn());
     return new Promise((resolve) => {
-      const job: Job = { id: this.nextId++, input, resolve: resolve as Job['resolve'] };
-      const idle = this.slots.find((s) => s.job === null);
-      if (idle) this.start(idle, job);
-      else if (this.queue.length >= this.options.maxQueue) resolve(err({ kind: 'busy', queued: this.queue.length }));
-      else this.queue.push(job);
+      this.queue.push({ id: this.nextId++, input, resolve: resolve as Job['resolve'] });
+      this.dispatch();
     });
   }
 
@@ -94,29 +97,55 @@ export class WorkerPool<TIn, TOut> {
 
   private spawn(): Slot {
     const worker = new Worker(this.options.file, { workerData: this.options.workerData });
-    const slot: Slot = { worker, job: null, timer: null };
-    worker.on('message', (reply: WorkerReply) => this.finish(slot, reply));
-    worker.on('error', (error) => this.replace(slot, { kind: 'failed', message: error.message }));
+    const slot: Slot = { worker, ready: false, job: null, timer: null };
+    worker.on('message', (reply: WorkerReply) => this.receive(slot, reply));
+    worker.on('error', (error) => this.lose(slot, error.message));
     worker.on('exit', (code) => {
-      if (slot.worker === worker && !this.closed) this.replace(slot, { kind: 'failed', message: `engine worker exited (code ${code})` });
+      if (slot.worker === worker && !this.closed) this.lose(slot, `engine worker exited (code ${code})`);
     });
-    // An idle pool must not keep the process alive (tests, scripts); a busy worker holds it through its job's promise.
+    // An idle pool must not keep the process alive (tests, scripts); a running job holds it through its timer.
     worker.unref();
     return slot;
   }
 
-  private start(slot: Slot, job: Job): void {
-    slot.job = job;
-    slot.timer = setTimeout(() => this.replace(slot, { kind: 'timeout', ms: this.options.timeoutMs }), this.options.timeoutMs);
-    slot.worker.postMessage({ id: job.id, input: job.input });
-  }
-
-  private finish(slot: Slot, reply: WorkerReply): void {
+  private receive(slot: Slot, reply: WorkerReply): void {
+    if ('ready' in reply) {
+      slot.ready = true;
+      this.dispatch();
+      return;
+    }
     const job = slot.job;
     if (!job || job.id !== reply.id) return;
     this.release(slot);
     job.resolve(reply.ok ? ok(reply.value) : err({ kind: 'failed', message: reply.error }));
-    this.pump(slot);
+    this.dispatch();
+  }
+
+  /** Gives queued jobs to ready, idle workers; the time cap starts here. */
+  private dispatch(): void {
+    for (const slot of this.slots) {
+      if (!slot.ready || slot.job) continue;
+      const job = this.queue.shift();
+      if (!job) return;
+      slot.job = job;
+      slot.timer = setTimeout(() => this.replace(slot, { kind: 'timeout', ms: this.options.timeoutMs }), this.options.timeoutMs);
+      slot.worker.postMessage({ id: job.id, input: job.input });
+    }
+  }
+
+  /**
+   * A worker died. If it had loaded, it is replaced like a timed-out one. If it never loaded, the worker file
+   * itself is broken: respawning would only fail again, so waiting jobs fail and the slot is dropped (the next
+   * run() tries a fresh worker).
+   */
+  private lose(slot: Slot, message: string): void {
+    if (this.closed || !this.slots.includes(slot)) return;
+    if (slot.ready) {
+      this.replace(slot, { kind: 'failed', message });
+      return;
+    }
+    this.slots.splice(this.slots.indexOf(slot), 1);
+    if (this.slots.length === 0) for (const job of this.queue.splice(0)) job.resolve(err({ kind: 'failed', message }));
   }
 
   /** Ends the slot's job with `failure`, terminates its worker and puts a fresh one in its place. */
@@ -125,22 +154,15 @@ export class WorkerPool<TIn, TOut> {
     const job = slot.job;
     this.release(slot);
     const old = slot.worker;
-    const fresh = this.spawn();
-    this.slots[this.slots.indexOf(slot)] = fresh;
+    this.slots[this.slots.indexOf(slot)] = this.spawn();
     this.replaced += 1;
     void old.terminate();
     job?.resolve(err(failure));
-    this.pump(fresh);
   }
 
   private release(slot: Slot): void {
     if (slot.timer) clearTimeout(slot.timer);
     slot.timer = null;
     slot.job = null;
-  }
-
-  private pump(slot: Slot): void {
-    const next = this.queue.shift();
-    if (next) this.start(slot, next);
   }
 }

@@ -1,5 +1,5 @@
 // A worker for testing WorkerPool itself: it busy-waits `input.ms` milliseconds of CPU (like a dense design
-// that blocks its thread) and answers with its thread id, or throws when `input.fail` is set.
+// that blocks its thread) and answers with its thread id, or fails when `input.fail` is set.
 import { parentPort, threadId } from 'node:worker_threads';
 
 parentPort!.on('message', ({ id, input }: { id: number; input: { ms: number; fail?: boolean } }) => {
@@ -13,3 +13,4 @@ parentPort!.on('message', ({ id, input }: { id: number; input: { ms: number; fai
   }
   parentPort!.postMessage({ id, ok: true, value: { threadId } });
 });
+parentPort!.postMessage({ ready: true });

@@ -1,16 +1,17 @@
 // GET /api/designs/:id/route — { route: SavedRoute | null }.
-// PUT /api/designs/:id/route { kind: 'planned', designVersion } — keep the planner's route for the design at
-//   `designVersion`; 200 { route: SavedRoute }.
+// PUT /api/designs/:id/route { kind: 'planned', designVersion } | { kind: 'own', designVersion, route: Polyline[] }
+//   — keep the planner's route or the quilter's own for the design at `designVersion`; 200 { route: SavedRoute }.
 //   The server computes strokes and figures itself. 409 { error, design: current } when designVersion is not current.
 // SavedRoute = { kind, designVersion, current, strokes: [{ pass, kind, points, length }], summary, createdAt, updatedAt }.
 import type { APIRoute } from 'astro';
 import { db } from '../../../../server/db.ts';
-import { json, readJson } from '../../../../server/http.ts';
+import { invalidInput, json, readJson } from '../../../../server/http.ts';
+import { assertNever } from '../../../../../shared/assertNever.ts';
 import { findDesignRoute } from '../../../../server/designs/design.repository.ts';
 import { DESIGN_BODY_LIMIT, saveRouteSchema } from '../../../../server/designs/designApi.schema.ts';
 import { conflict, designProblemResponse, engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
 import { toSavedRouteJson } from '../../../../server/designs/designRecord.ts';
-import { savePlannedRoute } from '../../../../server/designs/designRoute.service.ts';
+import { saveOwnRoute, savePlannedRoute } from '../../../../server/designs/designRoute.service.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);
@@ -27,7 +28,19 @@ export const PUT = (async ({ locals, params, request }) => {
   if (!body.ok) return body.error;
   const { row } = owned.value;
   if (body.value.designVersion !== row.version) return conflict(row);
-  const saved = await savePlannedRoute(db, row);
-  if (!saved.ok) return saved.error.kind === 'problem' ? designProblemResponse(saved.error.problem) : engineFailureResponse(saved.error.failure);
+  const saved = body.value.kind === 'planned' ? await savePlannedRoute(db, row) : await saveOwnRoute(db, row, body.value.route);
+  if (!saved.ok) {
+    const f = saved.error;
+    switch (f.kind) {
+      case 'invalid':
+        return invalidInput(f.error, 'Some route strokes need attention.');
+      case 'problem':
+        return designProblemResponse(f.problem);
+      case 'engine':
+        return engineFailureResponse(f.failure);
+      default:
+        return assertNever(f);
+    }
+  }
   return json({ route: toSavedRouteJson(saved.value, row.version) });
 }) satisfies APIRoute;

@@ -96,7 +96,7 @@ export async function expectStatus(p: Promise<{ status: number; body: any; text:
 export async function sendBytes(client: TestClient | null, path: string, bytes: Uint8Array, contentType = 'application/octet-stream') {
   const headers = new Headers({ 'content-type': contentType, origin: new URL(testEnv.appUrl).origin });
   if (client?.cookies.size) headers.set('cookie', [...client.cookies].map(([k, v]) => `${k}=${v}`).join('; '));
-  const res = await fetch(new URL(path, testEnv.appUrl), { method: 'POST', headers, body: bytes });
+  const res = await fetch(new URL(path, testEnv.appUrl), { method: 'POST', headers, body: bytes as Uint8Array<ArrayBuffer> });
   const text = await res.text();
   return { status: res.status, body: res.headers.get('content-type')?.includes('json') ? JSON.parse(text) : null, text };
 }

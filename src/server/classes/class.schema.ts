@@ -4,28 +4,33 @@ import { z } from 'zod';
 const text = (max: number) => z.string().trim().min(1, 'Required.').max(max, `At most ${max} characters.`);
 const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-01-15.').refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), 'Not a real date.');
 
+const classFields = {
+  title: text(200),
+  description: z.string().trim().max(5000, 'At most 5000 characters.'),
+  startsOn: isoDate,
+  /** Price in the smallest currency unit (cents); kept for a later payments feature. Null = free. */
+  priceCents: z.number().int().min(0).max(10_000_000).nullable(),
+  currency: z.string().regex(/^[A-Z]{3}$/, 'A three-letter currency code, e.g. USD.').nullable(),
+};
 export const createClassSchema = z
-  .object({
-    title: text(200),
-    description: z.string().trim().max(5000, 'At most 5000 characters.').default(''),
-    startsOn: isoDate,
-    /** Price in the smallest currency unit (cents); kept for a later payments feature. Null or absent = free. */
-    priceCents: z.number().int().min(0).max(10_000_000).nullable().default(null),
-    currency: z.string().regex(/^[A-Z]{3}$/, 'A three-letter currency code, e.g. USD.').nullable().default(null),
-  })
+  .object({ ...classFields, description: classFields.description.default(''), priceCents: classFields.priceCents.default(null), currency: classFields.currency.default(null) })
   .strict();
-export const updateClassSchema = createClassSchema.partial().strict();
+// Written out, not createClassSchema.partial(): zod would fill the defaults and overwrite fields left out.
+export const updateClassSchema = z
+  .object(Object.fromEntries(Object.entries(classFields).map(([k, v]) => [k, v.optional()])) as { [K in keyof typeof classFields]: z.ZodOptional<(typeof classFields)[K]> })
+  .strict();
 
 export const NOTES_MAX = 20_000;
-export const createLessonSchema = z
-  .object({
-    title: text(200),
-    releaseAt: z.iso.datetime({ offset: true, message: 'Use an ISO date and time, e.g. 2027-01-15T09:00:00Z.' }),
-    notes: z.string().max(NOTES_MAX, `At most ${NOTES_MAX} characters.`).default(''),
-    templateVersionId: z.uuid('Choose a template version.'),
-  })
+const lessonFields = {
+  title: text(200),
+  releaseAt: z.iso.datetime({ offset: true, message: 'Use an ISO date and time, e.g. 2027-01-15T09:00:00Z.' }),
+  notes: z.string().max(NOTES_MAX, `At most ${NOTES_MAX} characters.`),
+  templateVersionId: z.uuid('Choose a template version.'),
+};
+export const createLessonSchema = z.object({ ...lessonFields, notes: lessonFields.notes.default('') }).strict();
+export const updateLessonSchema = z
+  .object(Object.fromEntries(Object.entries(lessonFields).map(([k, v]) => [k, v.optional()])) as { [K in keyof typeof lessonFields]: z.ZodOptional<(typeof lessonFields)[K]> })
   .strict();
-export const updateLessonSchema = createLessonSchema.partial().strict();
 
 export const INVITATIONS_PER_REQUEST = 50;
 export const inviteSchema = z

@@ -18,8 +18,18 @@ export const publishTemplateSchema = z
   })
   .strict();
 
-/** A new version: any field left out is taken from the latest version; without designId the drawing stays. */
-export const newVersionSchema = publishTemplateSchema.partial().strict();
+/** A new version: any field left out is taken from the latest version; without designId the drawing stays.
+ *  (Written out rather than `.partial()`: zod would still fill the defaults above and wipe kept fields.) */
+export const newVersionSchema = z
+  .object({
+    designId: z.uuid('Choose one of your designs.').optional(),
+    title: z.string().trim().min(1, 'Required.').max(200, 'At most 200 characters.').optional(),
+    description: z.string().trim().max(5000, 'At most 5000 characters.').optional(),
+    difficulty: difficultySchema.optional(),
+    motifs: z.array(motif).max(12, 'At most 12 motif tags.').optional(),
+    visibility: visibilitySchema.optional(),
+  })
+  .strict();
 
 export const SIZE_BUCKETS = {
   small: { label: 'up to 8 in', maxInches: 8 },

@@ -5,6 +5,8 @@ import { db } from './server/db.ts';
 import { problem } from './server/http.ts';
 import { isForeignApiRequest } from './server/originCheck.ts';
 import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from './server/auth/session.ts';
+// Loaded with the middleware, i.e. when the server takes its first request: starts the lesson-release e-mail sweep.
+import './server/classes/releaseSchedule.ts';
 
 const isApi = (url: URL) => url.pathname === '/api' || url.pathname.startsWith('/api/');
 

@@ -7,7 +7,6 @@ import { createClassSchema } from '../../../server/classes/class.schema.ts';
 import { createClass } from '../../../server/classes/class.service.ts';
 import { findClassRow, listClassesFor } from '../../../server/classes/class.repository.ts';
 import { toClassJson } from '../../../server/classes/classJson.ts';
-import '../../../server/classes/releaseSchedule.ts';
 
 export const GET = (async ({ locals }) => {
   const signedIn = requireUser(locals);

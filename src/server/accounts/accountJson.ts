@@ -10,6 +10,6 @@ export interface AccountJson {
   createdAt: string;
 }
 
-export function toAccountJson(a: Pick<Account, 'id' | 'email' | 'displayName' | 'role' | 'units'> & { createdAt?: Date }): AccountJson {
-  return { id: a.id, email: a.email, displayName: a.displayName, role: a.role, units: a.units, createdAt: (a.createdAt ?? new Date(0)).toISOString() };
+export function toAccountJson(a: Pick<Account, 'id' | 'email' | 'displayName' | 'role' | 'units' | 'createdAt'>): AccountJson {
+  return { id: a.id, email: a.email, displayName: a.displayName, role: a.role, units: a.units, createdAt: a.createdAt.toISOString() };
 }

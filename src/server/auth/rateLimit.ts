@@ -44,6 +44,8 @@ export async function consumeRateLimit(db: Kysely<Database>, key: string, rule: 
     )
     .returning(['hits', 'window_ends_at'])
     .executeTakeFirstOrThrow();
+  // Now and then, sweep counters whose window has ended, so the table stays small without a job.
+  if (Math.random() < 0.01) await pruneRateLimits(db, now);
   if (row.hits <= scaledLimit(rule)) return { allowed: true };
   return { allowed: false, retryAt: row.window_ends_at };
 }

@@ -12,6 +12,7 @@ export interface SessionUser {
   displayName: string;
   role: Role;
   units: UnitsPreference;
+  createdAt: Date;
 }
 export interface SessionInfo {
   id: string;
@@ -46,7 +47,7 @@ export async function validateSessionToken(db: Kysely<Database>, token: string, 
   const row = await db
     .selectFrom('session')
     .innerJoin('account', 'account.id', 'session.account_id')
-    .select(['session.id', 'session.expires_at', 'account.id as account_id', 'account.email', 'account.display_name', 'account.role', 'account.units'])
+    .select(['session.id', 'session.expires_at', 'account.id as account_id', 'account.email', 'account.display_name', 'account.role', 'account.units', 'account.created_at'])
     .where('session.id', '=', id)
     .executeTakeFirst();
   if (!row) return { session: null, user: null, refreshed: false };
@@ -61,7 +62,7 @@ export async function validateSessionToken(db: Kysely<Database>, token: string, 
     await db.updateTable('session').set({ expires_at: session.expiresAt }).where('id', '=', id).execute();
     refreshed = true;
   }
-  const user: SessionUser = { id: row.account_id, email: row.email, displayName: row.display_name, role: row.role, units: row.units };
+  const user: SessionUser = { id: row.account_id, email: row.email, displayName: row.display_name, role: row.role, units: row.units, createdAt: row.created_at };
   return { session, user, refreshed };
 }
 

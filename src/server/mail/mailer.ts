@@ -1,6 +1,7 @@
 // Outgoing e-mail. Every message is first written to `email_message` (the outbox and the log), then
 // handed to the SMTP server; the row records the outcome: pending → sent, or failed with the error and
-// the attempt count. Messages that must go out once only carry a `dedupeKey`.
+// the attempt count. Messages that must go out once only carry a `dedupeKey`. (Retrying failed rows
+// is not automated yet; `attempts` and `last_error` keep what a retry job needs.)
 import nodemailer from 'nodemailer';
 import { MAIL_FROM, SMTP_HOST, SMTP_PORT } from 'astro:env/server';
 import type { Kysely } from 'kysely';
@@ -18,9 +19,6 @@ export interface OutgoingEmail {
 }
 
 export type SendOutcome = { status: 'sent'; id: string } | { status: 'failed'; id: string; error: string } | { status: 'duplicate' };
-
-/** At most this many delivery attempts per message (one on send, the rest through retryFailedEmails). */
-export const MAX_ATTEMPTS = 3;
 
 const transport = nodemailer.createTransport({
   host: SMTP_HOST,
@@ -51,14 +49,6 @@ export async function sendEmail(db: Kysely<Database>, mail: OutgoingEmail): Prom
     .executeTakeFirst();
   if (!row) return { status: 'duplicate' };
   return deliver(db, row.id);
-}
-
-/** Tries again every failed message that has attempts left; returns how many went out. */
-export async function retryFailedEmails(db: Kysely<Database>): Promise<number> {
-  const rows = await db.selectFrom('email_message').select('id').where('status', '=', 'failed').where('attempts', '<', MAX_ATTEMPTS).execute();
-  let sent = 0;
-  for (const r of rows) if ((await deliver(db, r.id)).status === 'sent') sent += 1;
-  return sent;
 }
 
 async function deliver(db: Kysely<Database>, id: string): Promise<SendOutcome> {

@@ -162,7 +162,7 @@ describe('buildWalkthrough: step text for known strokes (analytic)', () => {
     expect(w.steps[2]!.strokes).toEqual([1, 2, 3]);
     expect(w.steps[2]!.title).toBe('Travel');
     // 0.707 + 2.121 + 4 = 6.828 in → 6 7/8 in; legs 3/4, 2 1/8 and 4 in (Pythagoras, ruler to 1/8 in).
-    expect(w.steps[2]!.instruction).toMatch(/^Travel 6 7\/8 in to the top edge of the block, by the top-left square: 3\/4 in over your stitching away from you, then 2 1\/8 in in the ditch toward you, then 4 in along the edge away from you\.$/);
+    expect(w.steps[2]!.instruction).toMatch(/^Travel 6 7\/8 in to the top edge of the block, by the top-left square: 3\/4 in over your stitching away from you, then 2 1\/8 in along the seam toward you, then 4 in along the edge away from you\.$/);
     expect(w.steps[4]!.instruction).toMatch(/^Tie off: pass 1 ends at /);
     expect(w.steps[5]!.passCounter).toBe('Pass 2 of 2');
     expect(w.steps[7]!.instruction).toContain('That was the last pass');

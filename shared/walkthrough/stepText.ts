@@ -76,7 +76,7 @@ export function travelText(places: BlockPlaces, parts: readonly TravelPart[]): {
       case 'retrace':
         return { title: 'Retrace', instruction: `Retrace ${fmt(total)} over your stitching, ${way}, to ${end}.`, length: total };
       case 'ditch':
-        return { title: 'Travel in the ditch', instruction: `Travel ${fmt(total)} in the ditch along the seam, ${way}, to ${end}.`, length: total };
+        return { title: 'Travel in the ditch', instruction: `Travel ${fmt(total)} along the seam, in the ditch, ${way}, to ${end}.`, length: total };
       case 'edge':
         return { title: 'Travel along the edge', instruction: `Travel ${fmt(total)} along the edge, inside the binding band, ${way}, to ${end}.`, length: total };
       default:
@@ -92,7 +92,7 @@ function travelKindWords(kind: TravelPart['kind']): string {
     case 'retrace':
       return 'over your stitching';
     case 'ditch':
-      return 'in the ditch';
+      return 'along the seam';
     case 'edge':
       return 'along the edge';
     default:

@@ -3,7 +3,7 @@ import { WALKTHROUGH_KEYS } from './walkthroughKeys.ts';
 /** The keyboard shortcuts, always on screen on desktop widths (a tablet has no keyboard to list). */
 export function KeyList() {
   return (
-    <section aria-label="Keyboard shortcuts" className="hidden rounded border border-muslin-300 bg-white p-4 md:block print:hidden">
+    <section aria-label="Keyboard shortcuts" className="hidden rounded border border-muslin-300 bg-white p-4 md:block pointer-coarse:hidden print:hidden">
       <h2 className="text-lg font-semibold">Keyboard</h2>
       <dl className="mt-1 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
         {WALKTHROUGH_KEYS.map((k) => (

@@ -99,7 +99,7 @@ export function DesignTable() {
         </div>
       )}
       {list && list.total === 0 && query && <p className="mt-6">No design titles contain “{query}”.</p>}
-      {list && list.items.length > 0 && (
+      {list && list.designs.length > 0 && (
         <div className="mt-4 overflow-x-auto">
           <table className="w-full border-collapse text-left">
             <thead>
@@ -117,7 +117,7 @@ export function DesignTable() {
               </tr>
             </thead>
             <tbody>
-              {list.items.map((d) => (
+              {list.designs.map((d) => (
                 <tr key={d.id} className="border-b border-muslin-200 align-middle">
                   <td className="px-2 py-2">
                     <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`} alt="" width={56} height={56} className="rounded border border-muslin-200 bg-white" />

@@ -26,7 +26,7 @@ export const designListItemSchema = z.object({
 export type DesignListItem = z.infer<typeof designListItemSchema>;
 
 export const designListSchema = z.object({
-  items: z.array(designListItemSchema),
+  designs: z.array(designListItemSchema),
   total: z.number().int(),
   page: z.number().int(),
   pageSize: z.number().int(),

@@ -1,7 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Units } from '../../../shared/design/design.schema.ts';
-import { fitViewport, panBy, zoomAt, zoomTo, ZOOM_STEP, type Viewport } from './viewport.ts';
-import { RULER_PX } from './canvas/RulerLayer.tsx';
+import { fitBlockViewport, panBy, zoomAt, zoomTo, ZOOM_STEP, type Viewport } from './viewport.ts';
 
 /** Keyboard pan step in CSS px (Shift: four times as far). */
 const PAN_STEP_PX = 48;
@@ -20,10 +19,7 @@ export interface ViewportControl {
 export function useViewportControl(width: number, height: number, stageWidth: number, stageHeight: number, units: Units): ViewportControl {
   const [view, setView] = useState<Viewport>({ scale: 1, x: 0, y: 0 });
   const fitted = useRef(false);
-  const fitView = useCallback(() => {
-    const v = fitViewport(width, height, stageWidth - RULER_PX, stageHeight - RULER_PX, 24);
-    return panBy(v, RULER_PX, RULER_PX);
-  }, [width, height, stageWidth, stageHeight]);
+  const fitView = useCallback(() => fitBlockViewport(width, height, stageWidth, stageHeight), [width, height, stageWidth, stageHeight]);
 
   useEffect(() => {
     if (fitted.current || stageWidth <= 0 || stageHeight <= 0) return;

@@ -60,6 +60,14 @@ export function zoomAt(view: Viewport, factor: number, anchor: Point, units: Uni
   return { scale, x: anchor[0] - (anchor[0] - view.x) * k, y: anchor[1] - (anchor[1] - view.y) * k };
 }
 
+/** Thickness of the rulers along the top and left edges of the stage, in CSS px. */
+export const RULER_PX = 22;
+
+/** The fit-to-block viewport of the workbench: the block centred in the stage area right of and below the rulers. */
+export function fitBlockViewport(width: number, height: number, stageWidth: number, stageHeight: number): Viewport {
+  return panBy(fitViewport(width, height, stageWidth - RULER_PX, stageHeight - RULER_PX, 24), RULER_PX, RULER_PX);
+}
+
 /** The viewport at a given zoom (fraction of true size) around the stage centre. */
 export function zoomTo(view: Viewport, zoom: number, centre: Point, units: Units): Viewport {
   return zoomAt(view, (zoom * trueScale(units)) / view.scale, centre, units);

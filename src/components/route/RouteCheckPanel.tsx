@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import type { Units } from '../../../shared/design/design.schema.ts';
 import { formatDistance, formatMinutes } from '../designs/formatFigures.ts';
-import type { RouteCheckView, RouteFigures, ThreadBudgetView } from './routeCheckView.ts';
+import type { GapView, RouteCheckView, RouteFigures, ThreadBudgetView } from './routeCheckView.ts';
 
 export interface RouteCheckPanelProps {
   readonly check: RouteCheckView | null;
@@ -30,15 +30,15 @@ export function RouteCheckPanel({ check, state, message, units }: RouteCheckPane
               <FigureList figures={check.own.figures} units={units} extra={[]} />
             </>
           )}
-          <ThreadList thread={check.own?.thread ?? check.thread} />
+          <ThreadList thread={check.own?.thread ?? check.thread} whose={check.own ? 'my stitching order' : 'the planned route'} />
           <h3 className="mt-3 font-semibold">Gap check</h3>
           {check.gap ? (
-            <p className="text-sm" data-figure="gap">
-              Widest gap {formatDistance(check.gap.radius * 2, units)} across
-              {check.gap.limit != null ? (check.gap.ok === false ? `, over the batting's ${formatDistance(check.gap.limit, units)} limit` : `, within the batting's ${formatDistance(check.gap.limit, units)} limit`) : ''}.
+            <p className={`text-sm ${check.gap.status === 'over' ? 'text-madder-600' : ''}`} data-figure="gap">
+              Widest gap {formatDistance(check.gap.widestGap, units)} across (circled on the block)
+              {check.gap.limit === null ? '. Set the batting’s spacing limit to compare.' : GAP_WORDS[check.gap.status](formatDistance(check.gap.limit, units))}
             </p>
           ) : (
-            <p className="text-sm">No gap figure yet.</p>
+            <p className="text-sm">The gap check could not measure this design.</p>
           )}
           {check.warnings.length > 0 && (
             <ul className="mt-2 list-disc pl-5 text-sm text-madder-600">
@@ -50,6 +50,13 @@ export function RouteCheckPanel({ check, state, message, units }: RouteCheckPane
     </section>
   );
 }
+
+const GAP_WORDS: Readonly<Record<GapView['status'], (limit: string) => string>> = {
+  within: (l) => `: within the batting’s ${l} limit.`,
+  over: (l) => `: over the batting’s ${l} limit. Add quilting there.`,
+  'at-limit': (l) => `: right at the batting’s ${l} limit.`,
+  'no-limit': () => '.',
+};
 
 function Row({ label, figure, children }: { label: string; figure: string; children: ReactNode }) {
   return (
@@ -94,11 +101,11 @@ const SETTING_LABELS: Readonly<Record<string, string>> = {
   model: 'Thread model',
 };
 
-function ThreadList({ thread }: { thread: ThreadBudgetView }) {
+function ThreadList({ thread, whose }: { thread: ThreadBudgetView; whose: string }) {
   const assumed = thread.assumptions.filter((a) => a.setting !== 'model');
   return (
     <>
-      <h3 className="mt-3 font-semibold">Thread budget</h3>
+      <h3 className="mt-3 font-semibold">Thread budget <span className="font-normal text-xs">for {whose}</span></h3>
       <dl className="text-sm">
         <Row label="Stitches" figure="stitches">{thread.stitchCount.toLocaleString('en')}</Row>
         <Row label="Top thread" figure="top-thread">{thread.topThreadYards.toFixed(1)} yd</Row>

@@ -29,12 +29,15 @@ export const threadBudgetSchema = z.object({
 });
 export type ThreadBudgetView = z.infer<typeof threadBudgetSchema>;
 
+/** The gap check: the largest empty disc (centre, radius) and its diameter against the batting's limit. */
 export const gapViewSchema = z.object({
-  centre: point,
+  center: point,
   radius: z.number(),
-  /** The batting's spacing limit in design units, when one is known. */
-  limit: z.number().nullable().optional(),
-  ok: z.boolean().optional(),
+  /** Diameter of the empty disc, design units. */
+  widestGap: z.number(),
+  /** The batting's spacing limit in design units, when the design states one. */
+  limit: z.number().nullable(),
+  status: z.enum(['within', 'over', 'at-limit', 'no-limit']),
 });
 export type GapView = z.infer<typeof gapViewSchema>;
 
@@ -44,10 +47,17 @@ export interface RouteCheckView {
   readonly passesWithoutTravel: number;
   readonly oddPointPositions: readonly (readonly [number, number])[];
   readonly thread: ThreadBudgetView;
-  readonly own: { readonly figures: RouteFigures; readonly thread: ThreadBudgetView | null } | null;
+  /** The quilter's own stitching order, when the design has one: its figures and what it leaves unstitched. */
+  readonly own: { readonly figures: RouteFigures; readonly thread: ThreadBudgetView; readonly unstitchedCount: number } | null;
   readonly gap: GapView | null;
   readonly warnings: readonly string[];
 }
+
+const ownRouteSchema = routeFiguresSchema.extend({
+  threadBudget: threadBudgetSchema,
+  unstitched: z.object({ count: z.number(), length: z.number() }),
+  warnings: z.array(z.object({ kind: z.string(), message: z.string() })),
+});
 
 const checkAnswerSchema = z.object({
   check: z.object({
@@ -56,9 +66,8 @@ const checkAnswerSchema = z.object({
   }),
   plan: routeFiguresSchema,
   threadBudget: threadBudgetSchema,
-  ownRoute: z.object({ figures: routeFiguresSchema, threadBudget: threadBudgetSchema.nullable().optional() }).nullable().optional(),
-  gap: gapViewSchema.nullable().optional(),
-  warnings: z.array(z.union([z.string(), z.object({ message: z.string() })])).optional(),
+  ownRoute: ownRouteSchema.nullable(),
+  gap: gapViewSchema.nullable(),
 });
 
 /** The check card's model from the API's check answer; null when the answer has another shape. */
@@ -66,13 +75,16 @@ export function parseCheckAnswer(body: unknown): RouteCheckView | null {
   const parsed = checkAnswerSchema.safeParse(body);
   if (!parsed.success) return null;
   const a = parsed.data;
+  const own = a.ownRoute;
+  const warnings = own ? own.warnings.map((w) => w.message) : [];
+  if (own && own.unstitched.count > 0) warnings.push(`${own.unstitched.count} quilting line part${own.unstitched.count === 1 ? ' is' : 's are'} not in your stitching order yet.`);
   return {
     planned: a.plan,
     passesWithoutTravel: a.check.passesWithoutTravel,
     oddPointPositions: a.check.oddPoints.points,
     thread: a.threadBudget,
-    own: a.ownRoute ? { figures: a.ownRoute.figures, thread: a.ownRoute.threadBudget ?? null } : null,
-    gap: a.gap ?? null,
-    warnings: (a.warnings ?? []).map((w) => (typeof w === 'string' ? w : w.message)),
+    own: own ? { figures: own, thread: own.threadBudget, unstitchedCount: own.unstitched.count } : null,
+    gap: a.gap,
+    warnings,
   };
 }

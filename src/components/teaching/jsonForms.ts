@@ -1,7 +1,7 @@
 // Progressive forms for the teaching pages: a <form data-json-form action="/api/…" data-method="POST"> is sent as
 // JSON (fields by name; data-number / data-list / data-datetime inputs converted), file inputs marked data-raw as
 // raw bytes. Errors from the API's one error shape appear in the form's [data-form-alert] and beside the named
-// fields; on success the page goes to data-redirect (":id"-style {placeholders} filled from the response) or reloads.
+// fields; on success (and after an optional data-then-post request) the page goes to data-redirect (":id"-style {placeholders} filled from the response) or reloads.
 import { sendJson } from '../ui/submitJson.ts';
 
 function valueOf(el: HTMLInputElement | HTMLTextAreaElement | HTMLSelectElement): unknown {
@@ -59,6 +59,19 @@ async function submit(form: HTMLFormElement): Promise<void> {
     }
     (alert ?? form).focus();
     return;
+  }
+  // data-then-post: a second request after the first succeeded (e.g. create the account, then accept the invitation).
+  const then = form.dataset['thenPost'];
+  if (then) {
+    const second = await sendJson('POST', then);
+    if (!second.ok) {
+      if (alert) {
+        alert.textContent = second.error.message;
+        alert.hidden = false;
+      }
+      return;
+    }
+    outcome = second;
   }
   const to = form.dataset['redirect'];
   if (to) window.location.assign(fill(to, outcome.data));

@@ -2,10 +2,7 @@ import { Layer, Shape } from 'react-konva';
 import type { Units } from '../../../../shared/design/design.schema.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import { buildRulerTicks } from '../rulerTicks.ts';
-import { toScreen, toWorld, type Viewport } from '../viewport.ts';
-
-/** Thickness of the rulers along the top and left edges of the stage, in CSS px. */
-export const RULER_PX = 22;
+import { RULER_PX, toScreen, toWorld, type Viewport } from '../viewport.ts';
 
 export interface RulerLayerProps {
   readonly units: Units;

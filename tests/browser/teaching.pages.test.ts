@@ -81,4 +81,20 @@ describe('teaching pages', () => {
     expect(await page.locator(`img[alt^="Ines Brookfield"]`).count()).toBe(1);
     await screenshot(page, 'teaching-class-teacher-after');
   });
+
+  it('a newcomer signs up on the way from the invitation link and lands in the class', async () => {
+    const email = `newcomer-${Date.now()}@guild.test`;
+    await w.teacher.client.post(`/api/classes/${w.classId}/invitations`, { emails: [email] });
+    const link = linksIn((await waitForMail(email, { subject: 'invites you' })).text).find((l) => l.includes('/invitations/'))!;
+    await browser.context.clearCookies();
+    const page = browser.page;
+    await page.goto(new URL(link).pathname);
+    expect(await page.inputValue('input[name=email]')).toBe(email);
+    await page.fill('input[name=displayName]', 'Newcomer Quilter');
+    await page.fill('input[name=password]', 'heron-bend-newcomer-1');
+    await screenshot(page, 'teaching-invitation-signup');
+    await page.getByRole('button', { name: 'Create account and join' }).click();
+    await page.waitForURL(`**/classes/${w.classId}`);
+    expect(await page.textContent('h1')).toBe('Tuesday quilt-along');
+  });
 });

@@ -28,7 +28,7 @@ export const MOTIFS: readonly { readonly kind: MotifKind; readonly label: string
   { kind: 'crosshatch', label: 'Crosshatch', description: 'Two sets of straight lines crossing in squares or diamonds.' },
   { kind: 'echo', label: 'Echo', description: 'Lines following the patch outline at an even spacing inside it.' },
   { kind: 'pebbles', label: 'Pebbles', description: 'Circles of varied size packed inside the patch.' },
-  { kind: 'ribbon-candy', label: 'Ribbon candy', description: 'One line of loops swinging left and right, sized to the patch.' },
+  { kind: 'ribbon-candy', label: 'Ribbon candy', description: 'One line of loops swinging left and right, sized to the patch, ending in one big loop in a point.' },
   { kind: 'arches', label: 'Arches', description: 'Rows of arches, across the patch or along a strip.' },
 ];
 

@@ -103,8 +103,6 @@ export class WorkerPool<TIn, TOut> {
     worker.on('exit', (code) => {
       if (slot.worker === worker && !this.closed) this.lose(slot, `engine worker exited (code ${code})`);
     });
-    // An idle pool must not keep the process alive (tests, scripts); a running job holds it through its timer.
-    worker.unref();
     return slot;
   }
 
@@ -126,10 +124,17 @@ export class WorkerPool<TIn, TOut> {
     for (const slot of this.slots) {
       if (!slot.ready || slot.job) continue;
       const job = this.queue.shift();
-      if (!job) return;
+      if (!job) break;
       slot.job = job;
       slot.timer = setTimeout(() => this.replace(slot, { kind: 'timeout', ms: this.options.timeoutMs }), this.options.timeoutMs);
       slot.worker.postMessage({ id: job.id, input: job.input });
+    }
+    // Workers keep the process alive only while there is work (a job running or waiting for a loading worker);
+    // an idle pool must not hold a script or test run open.
+    const working = this.queue.length > 0 || this.slots.some((s) => s.job);
+    for (const slot of this.slots) {
+      if (working) slot.worker.ref();
+      else slot.worker.unref();
     }
   }
 
@@ -146,6 +151,7 @@ export class WorkerPool<TIn, TOut> {
     }
     this.slots.splice(this.slots.indexOf(slot), 1);
     if (this.slots.length === 0) for (const job of this.queue.splice(0)) job.resolve(err({ kind: 'failed', message }));
+    this.dispatch();
   }
 
   /** Ends the slot's job with `failure`, terminates its worker and puts a fresh one in its place. */
@@ -158,6 +164,7 @@ export class WorkerPool<TIn, TOut> {
     this.replaced += 1;
     void old.terminate();
     job?.resolve(err(failure));
+    this.dispatch();
   }
 
   private release(slot: Slot): void {

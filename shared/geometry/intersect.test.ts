@@ -58,4 +58,12 @@ describe('geometry/intersect', () => {
     expect(properCrossing(a0, a1, [24, 24], [0.5000000000000001, 0.5])).toBeNull();
     expect(properCrossing([0, 0], [1, 1], [0, 1e-300], [1, -1e-300])).not.toBeNull();
   });
+  it('adds no crossing inside a near-collinear overlap (ill-conditioned; pinned from a replayed planned route)', () => {
+    // b runs along a between two points rounded off a's supporting line by ~1e-16 (a crossing vertex of the design
+    // [2.25, 2.5]–[7.5, 1] with the seam [6.25, 5.5]–[0.5, 0.25]). The supporting lines cross at a rounding-level
+    // angle, so the "crossing" landed 1.4e-4 beyond b's end with t and u that disagree; the ends alone define the overlap.
+    const r = intersectSegments([2.25, 2.5], [7.5, 1], [2.6546242774566475, 2.3843930635838153], [2.7940414507772022, 2.344559585492228], 1e-4);
+    expect(r.kind).toBe('overlap');
+    expect(r.contacts.map((c) => c.end)).toEqual(['b0', 'b1']);
+  });
 });

@@ -54,13 +54,18 @@ export function intersectSegments(a0: Point, a1: Point, b0: Point, b1: Point, to
   onA(b0, 'b0', 0);
   onA(b1, 'b1', 1);
 
+  const first = contacts[0]?.point;
+  if (first !== undefined && contacts.some((c) => !near(c.point, first, tol2))) return { kind: 'overlap', contacts };
+  // Ends at two places within tolerance of the other segment make an overlap, and the segments stay within
+  // tolerance of each other all along it: a proper crossing there adds nothing. It is also ill-conditioned
+  // (the lines meet at an angle near rounding level, e.g. a route stroke laid along a line through a rounded
+  // crossing vertex), so its point and its parameters t and u need not agree; splitting at it moved a vertex
+  // by more than the tolerance and left the two segments cut in different orders.
   const crossing = properCrossing(a0, a1, b0, b1);
   if (crossing !== null && !contacts.some((c) => near(c.point, crossing.point, tol2))) contacts.push(crossing);
   if (contacts.length === 0) return { kind: 'none', contacts };
   if (contacts.length === 1 && contacts[0]!.end === null) return { kind: 'crossing', contacts };
-  const first = contacts[0]!.point;
-  const spread = contacts.some((c) => !near(c.point, first, tol2));
-  return { kind: spread ? 'overlap' : 'touch', contacts };
+  return { kind: contacts.length > 1 && contacts.some((c) => !near(c.point, contacts[0]!.point, tol2)) ? 'overlap' : 'touch', contacts };
 }
 
 /** The proper crossing of two segment interiors (strictly opposite orientations on both sides), or null. */

@@ -15,6 +15,8 @@ export interface NodedLines {
    * collapsed under snapping has a chain of one vertex.
    */
   readonly chains: readonly (readonly number[])[];
+  /** The snap grid holding the vertices (`xs`, `ys` are its arrays), so later strokes can snap to them. */
+  readonly grid: SnapGrid;
 }
 
 export interface TooManyCrossings {
@@ -132,7 +134,7 @@ export function nodePolylines(lines: readonly Polyline[], tolerance: number, max
   ends.forEach((chain, line) => {
     if (chains[line]!.length === 0 && chain.length > 0) chains[line]!.push(chain[0]!);
   });
-  return ok({ xs, ys, chains });
+  return ok({ xs, ys, chains, grid });
 }
 
 function append(chain: number[], vid: number): void {

@@ -4,6 +4,7 @@ import { err, ok, type Result } from '../result.ts';
 import { addChain, createAtoms, type Atoms } from './assemble.ts';
 import { MAX_CONTACTS, type DesignProblem } from './designProblem.ts';
 import { nodePolylines, type NodedLines } from './noding.ts';
+import { nodeStrokes } from './nodeStrokes.ts';
 import type { LineKind } from './planarGraph.types.ts';
 
 /** A design line handed to the noder: quilting lines, seams and (with edge travel) the block outline. */
@@ -30,10 +31,10 @@ export function blockOutline(design: Pick<Design, 'width' | 'height'>): Polyline
 }
 
 /**
- * Nodes the design's lines together with `strokes` (which split design lines where they meet them but
- * add no pieces of their own). The optional `start`/`end` points split any line they lie on (within the
- * tolerance) and stay vertices, so the planner can begin or end there. Design lines are snapped before
- * strokes, so strokes never move a design vertex. Assumes `checkDesign` passed.
+ * Nodes the design's lines, then lays `strokes` onto them (`nodeStrokes`: strokes cut design lines at new
+ * vertices only and add no pieces of their own). The optional `start`/`end` points split any line they lie on
+ * (within the tolerance) and stay vertices, so the planner can begin or end there. The design part is noded
+ * exactly as without strokes, so strokes never move or add a design vertex. Assumes `checkDesign` passed.
  */
 export function prepareGraph(design: Design, strokes: readonly Polyline[], tolerance: number): Result<PreparedGraph, DesignProblem> {
   const lines: DesignLine[] = [
@@ -42,20 +43,33 @@ export function prepareGraph(design: Design, strokes: readonly Polyline[], toler
   ];
   if (design.edgeTravel) lines.push({ points: blockOutline(design), kind: 'edge', source: -1 });
   const markers: Polyline[] = [design.start, design.end].flatMap((p) => (p === undefined ? [] : [[p]]));
-  const all = [...lines.map((l) => l.points), ...markers, ...strokes];
-  const noded = nodePolylines(all, tolerance, MAX_CONTACTS);
-  if (!noded.ok) {
-    return err({ kind: 'too-many-crossings', message: `the lines meet in more than ${noded.error.cap} places`, cap: noded.error.cap });
+  const noded = nodePolylines([...lines.map((l) => l.points), ...markers], tolerance, MAX_CONTACTS);
+  if (!noded.ok) return err(tooMany(noded.error.cap));
+  let chains = noded.value.chains;
+  let atoms = atomsOf(lines, chains, noded.value.xs.length);
+  let strokeChains: readonly (readonly number[])[] = [];
+  if (strokes.length > 0) {
+    // Strokes never re-node the design: its vertices and atoms stay those of buildPlanarGraph (see nodeStrokes).
+    const laid = nodeStrokes(noded.value, atoms, strokes, tolerance, MAX_CONTACTS, (cut) => atomsOf(lines, cut, noded.value.xs.length));
+    if (!laid.ok) return err(tooMany(laid.error.cap));
+    ({ lineChains: chains, atoms, strokeChains } = laid.value);
   }
-  const { chains, xs } = noded.value;
-  const atoms = createAtoms(xs.length + chains.length);
-  const keep = new Uint8Array(xs.length);
-  lines.forEach((line, i) => {
+  const keep = new Uint8Array(noded.value.xs.length);
+  lines.forEach((_, i) => {
     const chain = chains[i]!;
-    addChain(atoms, chain, line.kind, line.source);
     keep[chain[0]!] = 1;
     keep[chain[chain.length - 1]!] = 1;
   });
   for (let m = 0; m < markers.length; m++) keep[chains[lines.length + m]![0]!] = 1;
-  return ok({ noded: noded.value, atoms, keep, strokeChains: chains.slice(lines.length + markers.length) });
+  return ok({ noded: noded.value, atoms, keep, strokeChains });
+}
+
+function atomsOf(lines: readonly DesignLine[], chains: readonly (readonly number[])[], vertices: number): Atoms {
+  const atoms = createAtoms(vertices + chains.length);
+  lines.forEach((line, i) => addChain(atoms, chains[i]!, line.kind, line.source));
+  return atoms;
+}
+
+function tooMany(cap: number): DesignProblem {
+  return { kind: 'too-many-crossings', message: `the lines meet in more than ${cap} places`, cap };
 }

@@ -34,10 +34,11 @@ export interface TracedRoute {
 }
 
 /**
- * Traces `design.route` onto the design's planar graph. The route strokes are noded together with the
- * design lines (same tolerance as `buildPlanarGraph`), so a stroke meets design lines only at vertices
- * and every on-line piece covers whole edges. Strokes add no edges; where they cut a design line the
- * cut is a degree-2 vertex, so odd points, pieces and lengths equal those of `buildPlanarGraph(design)`.
+ * Traces `design.route` onto the design's planar graph. The design lines are noded exactly as by
+ * `buildPlanarGraph` (same tolerance), then the route strokes are laid onto them (graph/nodeStrokes), so a
+ * stroke meets design lines only at vertices and every on-line piece covers whole edges. Strokes add no
+ * edges; where they cut a design line the cut is a new degree-2 vertex, so vertices, odd points, pieces and
+ * lengths equal those of `buildPlanarGraph(design)`, and a planned route replays onto the very same edges.
  * A stroke part that lies on no design line (within the tolerance) becomes an `offLine` piece.
  * A stroke that snaps to a single point yields no pieces. Validates the route like the other lines.
  */

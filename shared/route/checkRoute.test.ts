@@ -68,4 +68,34 @@ describe('checkRoute', () => {
     const r = checkRoute({ ...base([]), route: [[[1, 1], [1, 1]]] });
     expect(r.ok).toBe(false);
   });
+  describe('replaying a planned route (pinned regressions)', () => {
+    // Planned strokes fed back as the route must reproduce the planner's figures: no unstitched or off-line pieces.
+    const replay = (input: DesignInput) => {
+      const design = designSchema.parse(input);
+      const plan = planDesign(design);
+      if (!plan.ok) throw new Error(plan.error.message);
+      const own = checkRoute({ ...design, route: plan.value.route.map((s) => [...s.points]) });
+      if (!own.ok) throw new Error(own.error.message);
+      return { plan: plan.value, own: own.value };
+    };
+    const cases: [string, DesignInput][] = [
+      // A stroke along a line through a rounded crossing vertex: the near-collinear pair gave a spurious crossing 1.4e-4 away.
+      ['a stroke laid along a line through a rounded crossing', { version: 1, units: 'in', width: 12, height: 12, seams: [[[6.25, 5.5], [0.5, 0.25], [0, 0]]], lines: [[[2.5, 6.25], [2.75, 0]], [[2.25, 2.5], [7.5, 1]]], edgeTravel: false }],
+      // A line turning back sharply across a seam: its crossing vertex lies within the tolerance of the returning segment,
+      // so re-noding the design with the route cut that segment there (a found seed of the float property below).
+      ['a sharp turn back across a seam', { version: 1, units: 'in', width: 12, height: 12, lines: [[[7.844192043878138, 11.551876293495297], [4.627526041120291, 10.53265846800059], [9.535716128535569, 5.642491799779236], [3.603271521627903, 10.966686096042395]]], seams: [[[0.6792055461555719, 1.1023602252826095], [11.121270454488695, 5.14618597459048], [0.25316309463232756, 8.551803577691317]]] }],
+    ];
+    for (const [name, input] of cases) {
+      it(`reproduces the planner's figures: ${name}`, () => {
+        const { plan, own } = replay(input);
+        expect(own.unstitched.count).toBe(0);
+        expect(own.offLineLength).toBe(0);
+        expect(own.warnings).toEqual([]);
+        expect(own.passes).toBe(plan.passes);
+        for (const key of ['stitchLength', 'retraceLength', 'ditchLength', 'edgeLength'] as const) {
+          expect(Math.abs(own[key] - plan[key])).toBeLessThanOrEqual(1e-9 * Math.max(1, plan[key]));
+        }
+      });
+    }
+  });
 });

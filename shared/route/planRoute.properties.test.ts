@@ -4,30 +4,38 @@ import { designSchema, type Design } from '../design/design.schema.ts';
 import type { Point } from '../geometry/point.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
+import { checkRoute } from './checkRoute.ts';
+import { planDesign } from './planDesign.ts';
 import { planRoute, type PlanOptions, type RoutePlan } from './planRoute.ts';
 
 const coord = fc.integer({ min: 0, max: 48 }).map((k) => k / 4);
-const point = fc.tuple(coord, coord) as fc.Arbitrary<Point>;
-const polyline = fc.array(point, { minLength: 2, maxLength: 4 }).filter((l) => l.some((p) => p[0] !== l[0]![0] || p[1] !== l[0]![1]));
-const designArb: fc.Arbitrary<Design> = fc
-  .record({
-    lines: fc.array(polyline, { minLength: 1, maxLength: 7 }),
-    seams: fc.array(polyline, { maxLength: 3 }),
-    edgeTravel: fc.boolean(),
-    ends: fc.constantFrom('free', 'corner-closed', 'corner-to-corner'),
-  })
-  .map(({ lines, seams, edgeTravel, ends }) =>
-    designSchema.parse({
-      version: 1,
-      units: 'in',
-      width: 12,
-      height: 12,
-      lines,
-      seams,
-      edgeTravel,
-      ...(ends === 'corner-closed' ? { start: [0, 0], end: [0, 0] } : ends === 'corner-to-corner' ? { start: [0, 0], end: [12, 12] } : {}),
-    }),
-  );
+/** Any double in the block: crossings and near-coincidences at rounding level, unlike the 1/4 in grid. */
+const floatCoord = fc.double({ min: 0, max: 12, noNaN: true });
+const designArb = designArbOf(coord);
+
+function designArbOf(c: fc.Arbitrary<number>): fc.Arbitrary<Design> {
+  const point = fc.tuple(c, c) as fc.Arbitrary<Point>;
+  const polyline = fc.array(point, { minLength: 2, maxLength: 4 }).filter((l) => l.some((p) => p[0] !== l[0]![0] || p[1] !== l[0]![1]));
+  return fc
+    .record({
+      lines: fc.array(polyline, { minLength: 1, maxLength: 7 }),
+      seams: fc.array(polyline, { maxLength: 3 }),
+      edgeTravel: fc.boolean(),
+      ends: fc.constantFrom('free', 'corner-closed', 'corner-to-corner'),
+    })
+    .map(({ lines, seams, edgeTravel, ends }) =>
+      designSchema.parse({
+        version: 1,
+        units: 'in',
+        width: 12,
+        height: 12,
+        lines,
+        seams,
+        edgeTravel,
+        ...(ends === 'corner-closed' ? { start: [0, 0], end: [0, 0] } : ends === 'corner-to-corner' ? { start: [0, 0], end: [12, 12] } : {}),
+      }),
+    );
+}
 
 function graphOf(design: Design): PlanarGraph {
   const r = buildPlanarGraph(design);
@@ -143,5 +151,22 @@ describe('planRoute properties (fast-check)', () => {
       }),
       { seed: 34, numRuns: 40 },
     );
+  });
+  it('replays: checkRoute of the planned strokes stitches every quilting line exactly once with the planner\'s figures', () => {
+    // The planned strokes go back in as the quilter's route (plain polylines), traced by graph/traceRoute.
+    const replays = (design: Design): void => {
+      const plan = planDesign(design);
+      if (!plan.ok) throw new Error(plan.error.message);
+      const own = checkRoute({ ...design, route: plan.value.route.map((s) => [...s.points]) });
+      if (!own.ok) throw new Error(own.error.message);
+      expect(own.value.unstitched.count).toBe(0);
+      expect(own.value.offLineLength).toBe(0);
+      expect(own.value.warnings).toEqual([]);
+      expect(own.value.passes).toBe(plan.value.passes);
+      expect(own.value.oddPoints).toBe(plan.value.oddPoints);
+      for (const key of ['stitchLength', 'retraceLength', 'ditchLength', 'edgeLength'] as const) expect(close(own.value[key], plan.value[key])).toBe(true);
+    };
+    fc.assert(fc.property(designArb, replays), { seed: 35, numRuns: 60 });
+    fc.assert(fc.property(designArbOf(floatCoord), replays), { seed: 36, numRuns: 100 });
   });
 });

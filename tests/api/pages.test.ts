@@ -21,6 +21,13 @@ describe('pages', () => {
     });
   }
 
+  it('serves island forms with the submit button disabled until they hydrate (no native submit of a password)', async () => {
+    const res = await new TestClient().get('/sign-in');
+    const form = /<form[^>]*aria-label="Sign in"[^>]*>/.exec(res.text)?.[0] ?? '';
+    expect(form).toContain('method="post"');
+    expect(res.text).toMatch(/<button type="submit" disabled=""/);
+  });
+
   it('sends a signed-in visitor from /sign-in to the requested local page, never to another site', async () => {
     const a = await createAccount();
     expect((await a.client.get('/sign-in?next=/account')).headers.get('location')).toBe('/account');

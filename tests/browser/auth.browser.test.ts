@@ -3,7 +3,7 @@
 // (launching is the slow part); cookies are cleared between tests. Screenshots: $TEST_OUTPUT_DIR/screenshots/.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { DEFAULT_PASSWORD, createAccount, uniqueEmail } from '../helpers/accounts.ts';
-import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
+import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
 import { closeTestDb } from '../helpers/db.ts';
 
 let browser: TestBrowser;
@@ -24,6 +24,7 @@ describe('account flow in the browser', () => {
     const { page } = browser;
     const email = uniqueEmail('browser');
     await page.goto('/sign-up');
+    await waitForIslands(page);
     await page.getByLabel('Display name').fill('Hollis Fairweather');
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
@@ -44,6 +45,7 @@ describe('account flow in the browser', () => {
     // A guarded page sends us to sign-in, and back to it afterwards.
     await page.goto('/account');
     await page.waitForURL('**/sign-in?next=%2Faccount');
+    await waitForIslands(page);
     await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill('not-the-password');
     await page.getByLabel('Password').press('Enter');
@@ -52,6 +54,7 @@ describe('account flow in the browser', () => {
     await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
     await page.getByLabel('Password').press('Enter');
     await page.waitForURL('**/account');
+    await waitForIslands(page);
     expect(await page.getByLabel('Display name').inputValue()).toBe('Hollis Fairweather');
     await screenshot(page, '05-account');
 
@@ -67,10 +70,12 @@ describe('account flow in the browser', () => {
     const admin = await createAccount({ role: 'admin', displayName: 'Juniper Admin' });
     const member = await createAccount({ displayName: `Marlowe Stitch ${Date.now()}` });
     await page.goto('/sign-in?next=/admin/accounts');
+    await waitForIslands(page);
     await page.getByLabel('E-mail').fill(admin.email);
     await page.getByLabel('Password').fill(admin.password);
     await page.getByRole('button', { name: 'Sign in' }).click();
     await page.waitForURL('**/admin/accounts');
+    await waitForIslands(page);
     await page.getByRole('searchbox', { name: 'Search by name or e-mail' }).fill(member.displayName);
     await page.getByRole('button', { name: 'Search' }).click();
     await page.getByRole('combobox', { name: `Role of ${member.displayName}` }).selectOption('teacher');

@@ -50,3 +50,12 @@ export async function screenshot(page: Page, name: string): Promise<string> {
   await page.screenshot({ path: file, fullPage: true });
   return file;
 }
+
+/**
+ * Waits until every React island on the page has hydrated (Astro removes the `ssr` attribute from
+ * <astro-island> then). Call it after goto() and before typing into island forms: until then their
+ * submit buttons are disabled.
+ */
+export async function waitForIslands(page: Page, timeoutMs = 30_000): Promise<void> {
+  await page.waitForFunction(() => document.querySelectorAll('astro-island[ssr]').length === 0, undefined, { timeout: timeoutMs });
+}

@@ -35,7 +35,7 @@ export default function AccountSettings(props: Props) {
   );
   return (
     <div className="grid gap-6 md:grid-cols-2">
-      <form onSubmit={profile.onSubmit} noValidate className={section} aria-labelledby="profile-heading">
+      <form method="post" onSubmit={profile.onSubmit} noValidate className={section} aria-labelledby="profile-heading">
         <h2 id="profile-heading" className="text-xl font-bold">
           Profile
         </h2>
@@ -43,9 +43,9 @@ export default function AccountSettings(props: Props) {
         <FormAlert tone="success" message={profile.success} />
         <TextField label="Display name" name="displayName" defaultValue={props.displayName} autoComplete="name" required maxLength={80} error={profile.fields['displayName']} />
         <UnitsChoice value={props.units} error={profile.fields['units']} />
-        <SubmitButton busy={profile.busy}>Save profile</SubmitButton>
+        <SubmitButton busy={profile.busy} ready={profile.ready}>Save profile</SubmitButton>
       </form>
-      <form onSubmit={email.onSubmit} noValidate className={section} aria-labelledby="email-heading">
+      <form method="post" onSubmit={email.onSubmit} noValidate className={section} aria-labelledby="email-heading">
         <h2 id="email-heading" className="text-xl font-bold">
           Sign-in e-mail
         </h2>
@@ -53,9 +53,9 @@ export default function AccountSettings(props: Props) {
         <FormAlert tone="success" message={email.success} />
         <TextField label="E-mail" name="email" type="email" defaultValue={props.email} autoComplete="email" required maxLength={254} error={email.fields['email']} />
         <TextField label="Current password" name="currentPassword" type="password" autoComplete="current-password" required maxLength={256} error={email.fields['currentPassword']} />
-        <SubmitButton busy={email.busy}>Change e-mail</SubmitButton>
+        <SubmitButton busy={email.busy} ready={email.ready}>Change e-mail</SubmitButton>
       </form>
-      <form onSubmit={password.onSubmit} noValidate className={`${section} md:col-span-2 md:max-w-[calc(50%-0.75rem)]`} aria-labelledby="password-heading">
+      <form method="post" onSubmit={password.onSubmit} noValidate className={`${section} md:col-span-2 md:max-w-[calc(50%-0.75rem)]`} aria-labelledby="password-heading">
         <h2 id="password-heading" className="text-xl font-bold">
           Password
         </h2>
@@ -63,7 +63,7 @@ export default function AccountSettings(props: Props) {
         <FormAlert tone="success" message={password.success} />
         <TextField label="Current password" name="currentPassword" type="password" autoComplete="current-password" required maxLength={256} error={password.fields['currentPassword']} />
         <TextField label="New password" name="newPassword" type="password" autoComplete="new-password" required minLength={10} maxLength={256} hint="At least 10 characters." error={password.fields['newPassword']} />
-        <SubmitButton busy={password.busy}>Change password</SubmitButton>
+        <SubmitButton busy={password.busy} ready={password.ready}>Change password</SubmitButton>
       </form>
     </div>
   );

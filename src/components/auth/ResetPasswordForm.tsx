@@ -16,11 +16,11 @@ export default function ResetPasswordForm({ token }: { token: string }) {
   );
   return (
     <div className="flex flex-col gap-4">
-      <form onSubmit={form.onSubmit} noValidate className="flex flex-col gap-4" aria-label="Choose a new password">
+      <form method="post" onSubmit={form.onSubmit} noValidate className="flex flex-col gap-4" aria-label="Choose a new password">
         <FormAlert tone="error" message={form.error ?? form.fields['token'] ?? null} />
         <FormAlert tone="success" message={form.success} />
         <TextField label="New password" name="password" type="password" autoComplete="new-password" required minLength={10} maxLength={256} hint="At least 10 characters." error={form.fields['password']} />
-        <SubmitButton busy={form.busy} busyText="Saving…">
+        <SubmitButton busy={form.busy} ready={form.ready} busyText="Saving…">
           Set new password
         </SubmitButton>
       </form>

@@ -10,12 +10,12 @@ export default function SignInForm({ next }: { next: string }) {
     return 'Signed in. Opening your page…';
   });
   return (
-    <form onSubmit={form.onSubmit} noValidate className="flex flex-col gap-4" aria-label="Sign in">
+    <form method="post" onSubmit={form.onSubmit} noValidate className="flex flex-col gap-4" aria-label="Sign in">
       <FormAlert tone="error" message={form.error} />
       <FormAlert tone="success" message={form.success} />
       <TextField label="E-mail" name="email" type="email" autoComplete="email" required maxLength={254} error={form.fields['email']} />
       <TextField label="Password" name="password" type="password" autoComplete="current-password" required maxLength={256} error={form.fields['password']} />
-      <SubmitButton busy={form.busy} busyText="Signing in…">
+      <SubmitButton busy={form.busy} ready={form.ready} busyText="Signing in…">
         Sign in
       </SubmitButton>
     </form>

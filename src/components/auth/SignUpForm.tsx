@@ -16,14 +16,14 @@ export default function SignUpForm() {
     },
   );
   return (
-    <form onSubmit={form.onSubmit} noValidate className="flex flex-col gap-4" aria-label="Create an account">
+    <form method="post" onSubmit={form.onSubmit} noValidate className="flex flex-col gap-4" aria-label="Create an account">
       <FormAlert tone="error" message={form.error} />
       <FormAlert tone="success" message={form.success} />
       <TextField label="Display name" name="displayName" autoComplete="name" required maxLength={80} hint="Shown to your guild and your students." error={form.fields['displayName']} />
       <TextField label="E-mail" name="email" type="email" autoComplete="email" required maxLength={254} error={form.fields['email']} />
       <TextField label="Password" name="password" type="password" autoComplete="new-password" required minLength={10} maxLength={256} hint="At least 10 characters. A short sentence works well." error={form.fields['password']} />
       <UnitsChoice value="in" error={form.fields['units']} />
-      <SubmitButton busy={form.busy} busyText="Creating your account…">
+      <SubmitButton busy={form.busy} ready={form.ready} busyText="Creating your account…">
         Create account
       </SubmitButton>
     </form>

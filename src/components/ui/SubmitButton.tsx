@@ -1,5 +1,7 @@
 interface Props {
   busy: boolean;
+  /** False until the island has hydrated (see useJsonForm). */
+  ready?: boolean;
   children: string;
   busyText?: string;
   tone?: 'primary' | 'quiet';
@@ -10,9 +12,9 @@ export const buttonClass = {
   quiet: 'inline-flex items-center justify-center rounded-md border border-denim-500 px-4 py-2 font-semibold text-denim-700 hover:bg-muslin-100 disabled:opacity-60',
 };
 
-export function SubmitButton({ busy, children, busyText = 'Please wait…', tone = 'primary' }: Props) {
+export function SubmitButton({ busy, ready = true, children, busyText = 'Please wait…', tone = 'primary' }: Props) {
   return (
-    <button type="submit" disabled={busy} aria-busy={busy} className={buttonClass[tone]}>
+    <button type="submit" disabled={busy || !ready} aria-busy={busy} className={buttonClass[tone]}>
       {busy ? busyText : children}
     </button>
   );

@@ -1,4 +1,4 @@
-import { useState, type FormEvent } from 'react';
+import { useEffect, useState, type FormEvent } from 'react';
 import { sendJson } from './submitJson.ts';
 
 export interface JsonFormState {
@@ -19,6 +19,10 @@ export function useJsonForm<T>(
   onSuccess: (data: T, form: HTMLFormElement) => string | null | void,
 ) {
   const [state, setState] = useState<JsonFormState>({ busy: false, error: null, success: null, fields: {} });
+  // False in the server-rendered HTML and until this island has hydrated: the submit button stays
+  // disabled, so an early click or Enter cannot fall back to a native submit of the form.
+  const [ready, setReady] = useState(false);
+  useEffect(() => setReady(true), []);
   async function onSubmit(event: FormEvent<HTMLFormElement>) {
     event.preventDefault();
     const form = event.currentTarget;
@@ -34,7 +38,7 @@ export function useJsonForm<T>(
     const message = onSuccess(outcome.data, form) ?? null;
     setState({ busy: false, error: null, success: message, fields: {} });
   }
-  return { ...state, onSubmit };
+  return { ...state, ready, onSubmit };
 }
 
 /** A FormData text value ('' when missing). */

@@ -134,6 +134,12 @@ describe('block workbench', () => {
     await row.waitFor();
     expect(await row.textContent()).toContain('12 × 12 in');
     await screenshot(page, 'workbench-08-list');
+
+    // Delete, then undo from the notice: the design comes back (soft delete + restore).
+    await page.getByRole('button', { name: 'Delete Heron Bend nine-patch' }).click();
+    await page.getByText('No designs yet.').waitFor();
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await row.waitFor();
     expect(errors).toEqual([]);
   });
 });

@@ -58,6 +58,8 @@ export function DesignEditor({ designId }: DesignEditorProps) {
 }
 
 const NO_STROKES: readonly RouteStroke[] = [];
+const NO_ORDER: readonly number[] = [];
+const NO_POINTS: readonly (readonly [number, number])[] = [];
 
 function Workbench({ designId, doc, design }: { designId: string; doc: DesignDocument; design: Design }) {
   const history = useEditHistory(doc.design, doc.setDesign, doc.generation);
@@ -250,7 +252,7 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
               <EditorStage width={size.width} height={size.height} units={design.units} view={vp.view} onViewChange={vp.setView} onPointer={ctl.onPointer} onDoubleClick={ctl.onDoubleClick} cursor={ctl.cursor}>
                 <BlockLayer design={design} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} showGrid={showGrid} />
                 <SeamLayer seams={design.seams} view={vp.view} theme={theme} patch={tool === 'motif' ? patch : null} selected={selectedSeams} />
-                <QuiltingLineLayer lines={design.lines} view={vp.view} theme={theme} selected={selectedLines} pieceOfLine={pieces} oddPoints={check.check?.oddPointPositions ?? []} start={design.start} end={design.end} ownOrder={tool === 'order' ? ctl.ownOrder : []} dimmed={shownStrokes !== null} />
+                <QuiltingLineLayer lines={design.lines} view={vp.view} theme={theme} selected={selectedLines} pieceOfLine={pieces} oddPoints={check.check?.oddPointPositions ?? NO_POINTS} start={design.start} end={design.end} ownOrder={tool === 'order' ? ctl.ownOrder : NO_ORDER} dimmed={shownStrokes !== null} stageWidth={size.width} stageHeight={size.height} />
                 {shownStrokes && <RouteLayer strokes={shownStrokes} view={vp.view} theme={theme} needle={player.needle} />}
                 <OverlayLayer view={vp.view} theme={theme} preview={tool === 'motif' && motif?.ok ? motif.lines : ctl.preview} snapped={ctl.snapped?.point ?? null} guides={guides} gap={check.check?.gap ?? null} />
                 <RulerLayer units={design.units} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} />

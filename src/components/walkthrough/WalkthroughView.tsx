@@ -59,9 +59,9 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
   }, [sp, steps.length]);
 
   return (
-    <div className="flex flex-col gap-6" data-testid="walkthrough">
-      <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_28rem]">
-        <div className="h-[40vh] min-h-72 lg:h-[65vh] print:hidden">
+    <div className="@container flex flex-col gap-6" data-testid="walkthrough">
+      <div className="grid gap-4 @4xl:grid-cols-[minmax(0,1fr)_28rem]">
+        <div className="h-[40vh] min-h-72 @4xl:h-[65vh] print:hidden">
           <WalkthroughCanvas design={design} strokes={route} step={step} patch={patch} needle={sp.needle} />
         </div>
         <div className="flex flex-col gap-4">

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import type { Units } from '../../../shared/design/design.schema.ts';
 import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
 import { needleAt, type NeedlePosition, type RouteStroke } from '../route/routePlayback.ts';
@@ -35,6 +35,9 @@ export function useStepPlayer(steps: readonly Step[], strokes: readonly RouteStr
   const [stepIndex, setStepIndex] = useState(() => clamp(initialStep));
   const [pauseAtStepEnd, setPauseAtStepEnd] = useState(true);
   const { seek, pause, play, playing, distance } = player;
+  // True from a continuous play until the quilter takes over (step buttons, scrub): the step follows the needle,
+  // including the last update when the player stops itself at the route's end.
+  const following = useRef(false);
 
   // Resume: put the needle at the saved step once (this effect runs after the player's own reset to 0).
   useEffect(() => {
@@ -43,22 +46,23 @@ export function useStepPlayer(steps: readonly Step[], strokes: readonly RouteStr
   }, [player.playback]);
 
   useEffect(() => {
-    if (!playing) return;
     const span = spans[stepIndex];
     if (!span) return;
-    const eps = 1e-9 * Math.max(1, player.playback.total);
-    if (pauseAtStepEnd) {
-      if (steps[stepIndex]!.strokes.length > 0 && distance >= span.end - eps) {
-        pause();
-        seek(span.end);
-      }
-    } else {
+    if (following.current && !pauseAtStepEnd) {
       const at = findStepAt(steps, spans, distance, player.playback.total);
       if (at !== stepIndex) setStepIndex(at);
+      if (!playing) following.current = false;
+      return;
+    }
+    const eps = 1e-9 * Math.max(1, player.playback.total);
+    if (playing && steps[stepIndex]!.strokes.length > 0 && distance >= span.end - eps) {
+      pause();
+      seek(span.end);
     }
   }, [distance, playing, pauseAtStepEnd, spans, stepIndex, steps, pause, seek, player.playback.total]);
 
   const goTo = useCallback((index: number) => {
+    following.current = false;
     const i = clamp(index);
     pause();
     setStepIndex(i);
@@ -75,17 +79,20 @@ export function useStepPlayer(steps: readonly Step[], strokes: readonly RouteStr
     if (i !== stepIndex) setStepIndex(i);
     const eps = 1e-9 * Math.max(1, player.playback.total);
     if (i !== stepIndex || distance >= span.end - eps || distance < span.start - eps) seek(span.start);
+    following.current = !pauseAtStepEnd;
     play();
-  }, [playing, pause, stepIndex, steps, spans, distance, seek, play, player.playback.total]);
+  }, [playing, pause, stepIndex, steps, spans, distance, seek, play, player.playback.total, pauseAtStepEnd]);
 
   const replay = useCallback(() => {
     const span = spans[stepIndex];
     if (!span) return;
     seek(span.start);
+    following.current = false;
     if (steps[stepIndex]!.strokes.length > 0) play();
   }, [spans, stepIndex, steps, seek, play]);
 
   const scrub = useCallback((d: number) => {
+    following.current = false;
     pause();
     seek(d);
     setStepIndex(findStepAt(steps, spans, d, player.playback.total));

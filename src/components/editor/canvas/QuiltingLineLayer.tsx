@@ -1,8 +1,10 @@
-import { Circle, Group, Layer, Rect, RegularPolygon, Shape, Text } from 'react-konva';
+import { useMemo } from 'react';
+import { Circle, Group, Layer, RegularPolygon, Shape, Text } from 'react-konva';
 import type { Point, Polyline } from '../../../../shared/geometry/point.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';
+import { LineBitmap, type LineGroup } from './LineBitmap.tsx';
 
 export interface QuiltingLineLayerProps {
   readonly lines: readonly Polyline[];
@@ -18,17 +20,33 @@ export interface QuiltingLineLayerProps {
   readonly ownOrder: readonly number[];
   /** Dim the lines (while a route is shown on top). */
   readonly dimmed: boolean;
+  readonly stageWidth: number;
+  readonly stageHeight: number;
 }
+
+/** Above this many points the lines are drawn as a bitmap that pans and zooms without restroking (see LineBitmap). */
+export const BITMAP_POINTS = 4000;
 
 /** Quilting lines, coloured by piece, with the selection, odd points, start/end marks and the own-order numbers. */
 export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
-  const { lines, view, theme, selected, pieceOfLine, oddPoints, start, end, ownOrder, dimmed } = props;
+  const { lines, view, theme, selected, pieceOfLine, oddPoints, start, end, ownOrder, dimmed, stageWidth, stageHeight } = props;
   const px = 1 / view.scale;
-  const groups = groupByPiece(lines, pieceOfLine);
+  const groups = useMemo(() => groupByPiece(lines, pieceOfLine), [lines, pieceOfLine]);
+  const asBitmap = useMemo(() => lines.reduce((n, l) => n + l.length, 0) + oddPoints.length * 4 > BITMAP_POINTS, [lines, oddPoints]);
+  const bitmapGroups = useMemo<LineGroup[]>(
+    () => (asBitmap ? [...groups.map(([piece, group]) => ({ color: piece < 0 ? theme.line : theme.pieces[piece % theme.pieces.length]!, width: 2, lines: group })), { color: theme.oddPoint, width: 2, lines: [], markers: oddPoints }] : []),
+    [asBitmap, groups, theme, oddPoints],
+  );
   return (
+    <>
+    {asBitmap && (
+      <Layer listening={false} opacity={dimmed ? 0.35 : 1}>
+        <LineBitmap groups={bitmapGroups} view={view} stageWidth={stageWidth} stageHeight={stageHeight} />
+      </Layer>
+    )}
     <Layer listening={false} opacity={dimmed ? 0.35 : 1}>
       <Group x={view.x} y={view.y} scaleX={view.scale} scaleY={view.scale}>
-        {groups.map(([piece, group]) => (
+        {!asBitmap && groups.map(([piece, group]) => (
           <Shape
             key={piece}
             sceneFunc={(ctx, shape) => {
@@ -55,9 +73,19 @@ export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
             lineCap="round"
           />
         )}
-        {oddPoints.map(([x, y], i) => (
-          <Rect key={`odd${i}`} x={x - 5 * px} y={y - 5 * px} width={10 * px} height={10 * px} stroke={theme.oddPoint} strokeWidth={2} strokeScaleEnabled={false} />
-        ))}
+        {oddPoints.length > 0 && !asBitmap && (
+          // One shape for all odd points: a dense design can have thousands, and one node each would stall panning.
+          <Shape
+            sceneFunc={(ctx, shape) => {
+              ctx.beginPath();
+              for (const [x, y] of oddPoints) ctx.rect(x - 5 * px, y - 5 * px, 10 * px, 10 * px);
+              ctx.strokeShape(shape);
+            }}
+            stroke={theme.oddPoint}
+            strokeWidth={2}
+            strokeScaleEnabled={false}
+          />
+        )}
         {start && <Circle x={start[0]} y={start[1]} radius={7 * px} fill={theme.guide} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />}
         {end && <RegularPolygon x={end[0]} y={end[1]} sides={4} radius={8 * px} fill={theme.preview} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />}
         {ownOrder.map((li, k) => {
@@ -66,6 +94,7 @@ export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
         })}
       </Group>
     </Layer>
+    </>
   );
 }
 

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { Circle, Group, Layer, Label, RegularPolygon, Shape, Tag, Text } from 'react-konva';
+import { Circle, Group, Layer, Label, Shape, Tag, Text } from 'react-konva';
 import type { StrokeKind } from '../../../../shared/route/routeStrokes.ts';
 import { arrowMarks, passStarts, type NeedlePosition, type RouteStroke } from '../../route/routePlayback.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
@@ -31,6 +31,9 @@ function strokeStyle(kind: StrokeKind, theme: CanvasTheme): { color: string; das
 }
 
 const KINDS: readonly StrokeKind[] = ['stitch', 'retrace', 'ditch', 'edge'];
+
+/** Above this many passes the labels would cover the block; the check card still counts them. */
+const MAX_PASS_LABELS = 60;
 
 /**
  * A route on the canvas: strokes styled by kind, direction arrows, pass numbers at each pass start and the needle.
@@ -78,10 +81,32 @@ export function RouteLayer({ strokes, view, theme, needle, focusPass = null }: R
             lineJoin="round"
           />
         )}
-        {arrows.map((a, i) => (
-          <RegularPolygon key={i} x={a.point[0]} y={a.point[1]} sides={3} radius={5 * px} rotation={(a.angle * 180) / Math.PI + 90} fill={strokeStyle(a.kind, theme).color} opacity={needle ? 0.4 : 0.9} />
-        ))}
-        {labels.map((l) => (
+        {KINDS.map((kind) => {
+          const mine = arrows.filter((a) => a.kind === kind);
+          if (mine.length === 0) return null;
+          // One shape per kind for all arrows: routes over dense designs have thousands of them.
+          return (
+            <Shape
+              key={`arrows-${kind}`}
+              sceneFunc={(ctx, shape) => {
+                ctx.beginPath();
+                const r = 5 * px;
+                for (const { point: [x, y], angle } of mine) {
+                  const c = Math.cos(angle);
+                  const s = Math.sin(angle);
+                  ctx.moveTo(x + c * r, y + s * r);
+                  ctx.lineTo(x - c * r - s * r * 0.8, y - s * r + c * r * 0.8);
+                  ctx.lineTo(x - c * r + s * r * 0.8, y - s * r - c * r * 0.8);
+                  ctx.closePath();
+                }
+                ctx.fillShape(shape);
+              }}
+              fill={strokeStyle(kind, theme).color}
+              opacity={needle ? 0.4 : 0.9}
+            />
+          );
+        })}
+        {labels.length <= MAX_PASS_LABELS && labels.map((l) => (
           <Label key={l.pass} x={l.point[0]} y={l.point[1]} opacity={focusPass === null || focusPass === l.pass ? 1 : 0.3}>
             <Tag fill={theme.paper} stroke={theme.stitch} strokeWidth={1} strokeScaleEnabled={false} cornerRadius={3 * px} pointerDirection="down" pointerWidth={6 * px} pointerHeight={5 * px} />
             <Text text={`Pass ${l.pass}`} fontSize={12 * px} padding={3 * px} fill={theme.stitch} fontStyle="bold" />

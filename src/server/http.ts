@@ -18,6 +18,8 @@ export type ErrorCode =
   | 'invalid_token'
   | 'rate_limited'
   | 'last_admin'
+  | 'engine_timeout'
+  | 'engine_busy'
   | 'internal';
 
 export type FieldErrors = Readonly<Record<string, string>>;

@@ -53,20 +53,20 @@ export function designProblemResponse(p: DesignProblem): Response {
 }
 
 /**
- * Engine outcomes outside ErrorCode (src/server/http.ts), same body shape: `engine_timeout` (422: the design
- * is too dense to finish within the cap; retrying will not help), `engine_busy` (503 + Retry-After: every
- * worker busy and the queue full; retry soon).
+ * Engine outcomes: `engine_timeout` (422: the design is too dense to finish within the cap; retrying will not
+ * help), `engine_busy` (503 + Retry-After: every worker busy and the queue full; retry soon).
  */
 export function engineFailureResponse(f: PoolFailure): Response {
   switch (f.kind) {
     case 'timeout':
-      return json(
-        { error: { code: 'engine_timeout', message: `The route engine stopped after ${f.ms / 1000} s: this design is too dense to check or plan on the server. Split it into smaller blocks or simplify its curves.` } },
+      return problem(
         422,
+        'engine_timeout',
+        `The route engine stopped after ${f.ms / 1000} s: this design is too dense to check or plan on the server. Split it into smaller blocks or simplify its curves.`,
       );
     case 'busy':
     case 'closed':
-      return json({ error: { code: 'engine_busy', message: 'The route engine is busy with other designs. Try again in a moment.' } }, 503, { 'retry-after': '2' });
+      return problem(503, 'engine_busy', 'The route engine is busy with other designs. Try again in a moment.', undefined, { 'retry-after': '2' });
     case 'failed':
       console.error('[engine] task failed:', f.message);
       return problem(500, 'internal', 'Something went wrong on our side. Please try again.');

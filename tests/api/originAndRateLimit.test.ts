@@ -57,6 +57,16 @@ describe('rate limits', () => {
     expect((await new TestClient().post('/api/session', { email: a.email, password: a.password })).status).toBe(200);
   });
 
+  it('a caller who varies X-Forwarded-For still meets the per-account limit (50 failures per 15 minutes)', async () => {
+    const a = await createAccount();
+    const attempt = (i: number, password: string) =>
+      new TestClient().request('POST', '/api/session', { body: { email: a.email, password }, headers: { 'x-forwarded-for': `203.0.113.${i % 250}` } });
+    for (let i = 0; i < 50; i += 1) expect((await attempt(i, `wrong-password-${i}`)).status).toBe(401);
+    const blocked = await attempt(99, a.password);
+    expect(blocked.status).toBe(429);
+    expect(blocked.body.error.code).toBe('rate_limited');
+  });
+
   it('a successful sign-in clears earlier failures', async () => {
     const a = await createAccount();
     for (let i = 0; i < 9; i += 1) await new TestClient().post('/api/session', { email: a.email, password: 'wrong-password' });

@@ -6,7 +6,7 @@ import { signInSchema } from '../../server/accounts/account.schema.ts';
 import { checkCredentials } from '../../server/accounts/account.service.ts';
 import { toAccountJson } from '../../server/accounts/accountJson.ts';
 import { requireUser } from '../../server/auth/guards.ts';
-import { SIGN_IN_RULE, checkRateLimit, clearRateLimit, consumeRateLimit } from '../../server/auth/rateLimit.ts';
+import { SIGN_IN_ACCOUNT_RULE, SIGN_IN_RULE, checkRateLimit, clearRateLimit, consumeRateLimit } from '../../server/auth/rateLimit.ts';
 import { rateLimitedResponse } from '../../server/auth/rateLimitResponse.ts';
 import { createSession, deleteSessionCookie, generateSessionToken, invalidateSession, setSessionCookie } from '../../server/auth/session.ts';
 import { clientIp } from '../../server/clientIp.ts';
@@ -22,15 +22,20 @@ export const POST = (async (context) => {
   if (!body.ok) return body.error;
   const { email, password } = body.value;
   // Only failed attempts count, so a guild member signing in often is never locked out.
-  const key = `sign-in:${clientIp(context)}:${email.toLowerCase()}`;
-  const gate = await checkRateLimit(db, key, SIGN_IN_RULE);
-  if (!gate.allowed) return rateLimitedResponse('sign-in attempts', gate.retryAt);
+  const limits = [
+    { key: `sign-in:${clientIp(context)}:${email.toLowerCase()}`, rule: SIGN_IN_RULE },
+    { key: `sign-in-account:${email.toLowerCase()}`, rule: SIGN_IN_ACCOUNT_RULE },
+  ];
+  for (const { key, rule } of limits) {
+    const gate = await checkRateLimit(db, key, rule);
+    if (!gate.allowed) return rateLimitedResponse('sign-in attempts', gate.retryAt);
+  }
   const account = await checkCredentials(db, email, password);
   if (!account.ok) {
-    await consumeRateLimit(db, key, SIGN_IN_RULE);
+    for (const { key, rule } of limits) await consumeRateLimit(db, key, rule);
     return problem(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
   }
-  await clearRateLimit(db, key);
+  for (const { key } of limits) await clearRateLimit(db, key);
   const token = generateSessionToken();
   const session = await createSession(db, token, account.value.id);
   setSessionCookie(context.cookies, context.url, token, session.expiresAt);

@@ -13,6 +13,11 @@ export interface RateLimitRule {
 /** 10 sign-in failures per 15 minutes and 5 reset requests per hour, per IP address and e-mail. */
 export const SIGN_IN_RULE: RateLimitRule = { limit: 10, windowMs: 15 * 60 * 1000 };
 export const RESET_RULE: RateLimitRule = { limit: 5, windowMs: 60 * 60 * 1000 };
+/**
+ * 50 sign-in failures per 15 minutes per e-mail from any address. The client address comes from
+ * X-Forwarded-For, which a caller can vary; this wider limit still caps guessing against one account.
+ */
+export const SIGN_IN_ACCOUNT_RULE: RateLimitRule = { limit: 50, windowMs: 15 * 60 * 1000 };
 
 export type RateLimitCheck = { readonly allowed: true } | { readonly allowed: false; readonly retryAt: Date };
 

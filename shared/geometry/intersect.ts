@@ -1,6 +1,5 @@
 import { orient2d } from 'robust-predicates';
 import type { Point } from './point.ts';
-import { closestParameter, pointSegmentDistanceSquared } from './distance.ts';
 
 /** Which segment end a contact sits on, or null for a proper crossing of two interiors. */
 export type SegmentEnd = 'a0' | 'a1' | 'b0' | 'b1';
@@ -29,6 +28,24 @@ export interface SegmentIntersection {
   readonly contacts: readonly SegmentContact[];
 }
 
+/** Contact codes in a `ContactBuffer`: the end lying on the other segment, or CROSSING. */
+export const END_A0 = 0;
+export const END_A1 = 1;
+export const END_B0 = 2;
+export const END_B1 = 3;
+export const CROSSING = 4;
+const END_NAMES: readonly SegmentEnd[] = ['a0', 'a1', 'b0', 'b1'];
+
+/**
+ * Room for the contacts of one segment pair (at most 5): contact k is [code, t, u, x, y] at 5k. Hot loops (the
+ * noder) reuse one buffer instead of allocating contact objects per pair.
+ */
+export type ContactBuffer = Float64Array;
+export const CONTACT_STRIDE = 5;
+export function createContactBuffer(): ContactBuffer {
+  return new Float64Array(5 * CONTACT_STRIDE);
+}
+
 /**
  * Intersects two closed segments with tolerance `tolerance` (design units, ≥ 0).
  * An end within `tolerance` of the other segment counts as lying on it (T-junctions, touching ends,
@@ -37,35 +54,79 @@ export interface SegmentIntersection {
  * point itself is computed in floating point from the same determinants.
  */
 export function intersectSegments(a0: Point, a1: Point, b0: Point, b1: Point, tolerance: number): SegmentIntersection {
-  const tol2 = tolerance * tolerance;
+  const buf = createContactBuffer();
+  const count = intersectSegmentsInto(a0[0], a0[1], a1[0], a1[1], b0[0], b0[1], b1[0], b1[1], tolerance, buf);
   const contacts: SegmentContact[] = [];
-  const onB = (p: Point, end: SegmentEnd, t: number): void => {
-    if (pointSegmentDistanceSquared(p[0], p[1], b0[0], b0[1], b1[0], b1[1]) <= tol2) {
-      contacts.push({ point: p, t, u: closestParameter(p, b0, b1), end });
-    }
-  };
-  const onA = (p: Point, end: SegmentEnd, u: number): void => {
-    if (pointSegmentDistanceSquared(p[0], p[1], a0[0], a0[1], a1[0], a1[1]) <= tol2) {
-      contacts.push({ point: p, t: closestParameter(p, a0, a1), u, end });
-    }
-  };
-  onB(a0, 'a0', 0);
-  onB(a1, 'a1', 1);
-  onA(b0, 'b0', 0);
-  onA(b1, 'b1', 1);
+  for (let k = 0; k < count; k++) {
+    const o = k * CONTACT_STRIDE;
+    const code = buf[o]!;
+    const point: Point = code === END_A0 ? a0 : code === END_A1 ? a1 : code === END_B0 ? b0 : code === END_B1 ? b1 : [buf[o + 3]!, buf[o + 4]!];
+    contacts.push({ point, t: buf[o + 1]!, u: buf[o + 2]!, end: code === CROSSING ? null : END_NAMES[code]! });
+  }
+  if (count === 0) return { kind: 'none', contacts };
+  if (count === 1 && contacts[0]!.end === null) return { kind: 'crossing', contacts };
+  const tol2 = tolerance * tolerance;
+  const [x0, y0] = contacts[0]!.point;
+  const spread = contacts.some(({ point: [x, y] }) => (x - x0) * (x - x0) + (y - y0) * (y - y0) > tol2);
+  return { kind: spread ? 'overlap' : 'touch', contacts };
+}
 
-  const first = contacts[0]?.point;
-  if (first !== undefined && contacts.some((c) => !near(c.point, first, tol2))) return { kind: 'overlap', contacts };
-  // Ends at two places within tolerance of the other segment make an overlap, and the segments stay within
-  // tolerance of each other all along it: a proper crossing there adds nothing. It is also ill-conditioned
-  // (the lines meet at an angle near rounding level, e.g. a route stroke laid along a line through a rounded
-  // crossing vertex), so its point and its parameters t and u need not agree; splitting at it moved a vertex
-  // by more than the tolerance and left the two segments cut in different orders.
-  const crossing = properCrossing(a0, a1, b0, b1);
-  if (crossing !== null && !contacts.some((c) => near(c.point, crossing.point, tol2))) contacts.push(crossing);
-  if (contacts.length === 0) return { kind: 'none', contacts };
-  if (contacts.length === 1 && contacts[0]!.end === null) return { kind: 'crossing', contacts };
-  return { kind: contacts.length > 1 && contacts.some((c) => !near(c.point, contacts[0]!.point, tol2)) ? 'overlap' : 'touch', contacts };
+/**
+ * `intersectSegments` on scalars, writing the contacts into `out` (see ContactBuffer) and returning their count;
+ * allocation-free. Contacts come in the order a0, a1, b0, b1, crossing.
+ * Ends at two places within tolerance of the other segment make an overlap, and the segments stay within
+ * tolerance of each other all along it: a proper crossing there adds nothing. It is also ill-conditioned
+ * (the lines meet at an angle near rounding level, e.g. a route stroke laid along a line through a rounded
+ * crossing vertex), so its point and its parameters t and u need not agree; splitting at it moved a vertex
+ * by more than the tolerance and left the two segments cut in different orders. So no crossing is added then.
+ */
+export function intersectSegmentsInto(
+  ax0: number, ay0: number, ax1: number, ay1: number,
+  bx0: number, by0: number, bx1: number, by1: number,
+  tolerance: number,
+  out: ContactBuffer,
+): number {
+  const tol2 = tolerance * tolerance;
+  let n = 0;
+  if (distanceSquared(ax0, ay0, bx0, by0, bx1, by1) <= tol2) n = put(out, n, END_A0, 0, parameter(ax0, ay0, bx0, by0, bx1, by1), ax0, ay0);
+  if (distanceSquared(ax1, ay1, bx0, by0, bx1, by1) <= tol2) n = put(out, n, END_A1, 1, parameter(ax1, ay1, bx0, by0, bx1, by1), ax1, ay1);
+  if (distanceSquared(bx0, by0, ax0, ay0, ax1, ay1) <= tol2) n = put(out, n, END_B0, parameter(bx0, by0, ax0, ay0, ax1, ay1), 0, bx0, by0);
+  if (distanceSquared(bx1, by1, ax0, ay0, ax1, ay1) <= tol2) n = put(out, n, END_B1, parameter(bx1, by1, ax0, ay0, ax1, ay1), 1, bx1, by1);
+  for (let k = 1; k < n; k++) {
+    const o = k * CONTACT_STRIDE;
+    const dx = out[o + 3]! - out[3]!;
+    const dy = out[o + 4]! - out[4]!;
+    if (dx * dx + dy * dy > tol2) return n; // an overlap
+  }
+  const o1 = orient2d(ax0, ay0, ax1, ay1, bx0, by0);
+  const o2 = orient2d(ax0, ay0, ax1, ay1, bx1, by1);
+  if (!(o1 > 0 && o2 < 0) && !(o1 < 0 && o2 > 0)) return n;
+  const o3 = orient2d(bx0, by0, bx1, by1, ax0, ay0);
+  const o4 = orient2d(bx0, by0, bx1, by1, ax1, ay1);
+  if (!(o3 > 0 && o4 < 0) && !(o3 < 0 && o4 > 0)) return n;
+  // orient2d(b0, b1, a(t)) is affine in t, so it vanishes at t = o3 / (o3 − o4); likewise for u.
+  const t = o3 / (o3 - o4);
+  const u = o1 / (o1 - o2);
+  const x = ax0 + (ax1 - ax0) * t;
+  const y = ay0 + (ay1 - ay0) * t;
+  for (let k = 0; k < n; k++) {
+    const o = k * CONTACT_STRIDE;
+    const dx = out[o + 3]! - x;
+    const dy = out[o + 4]! - y;
+    if (dx * dx + dy * dy <= tol2) return n;
+  }
+  return put(out, n, CROSSING, t, u, x, y);
+}
+
+/** Writes contact n into `out`; returns n + 1. */
+function put(out: ContactBuffer, n: number, code: number, t: number, u: number, x: number, y: number): number {
+  const o = n * CONTACT_STRIDE;
+  out[o] = code;
+  out[o + 1] = t;
+  out[o + 2] = u;
+  out[o + 3] = x;
+  out[o + 4] = y;
+  return n + 1;
 }
 
 /** The proper crossing of two segment interiors (strictly opposite orientations on both sides), or null. */
@@ -76,14 +137,30 @@ export function properCrossing(a0: Point, a1: Point, b0: Point, b1: Point): Segm
   const o3 = orient2d(b0[0], b0[1], b1[0], b1[1], a0[0], a0[1]);
   const o4 = orient2d(b0[0], b0[1], b1[0], b1[1], a1[0], a1[1]);
   if (!(o3 > 0 && o4 < 0) && !(o3 < 0 && o4 > 0)) return null;
-  // orient2d(b0, b1, a(t)) is affine in t, so it vanishes at t = o3 / (o3 − o4); likewise for u.
   const t = o3 / (o3 - o4);
   const u = o1 / (o1 - o2);
   return { point: [a0[0] + (a1[0] - a0[0]) * t, a0[1] + (a1[1] - a0[1]) * t], t, u, end: null };
 }
 
-function near(p: Point, q: Point, tol2: number): boolean {
-  const dx = p[0] - q[0];
-  const dy = p[1] - q[1];
-  return dx * dx + dy * dy <= tol2;
+/** Parameter in [0, 1] of the point of segment a→b closest to p (0 for a degenerate segment); as closestParameter. */
+function parameter(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {
+  const dx = bx - ax;
+  const dy = by - ay;
+  const len2 = dx * dx + dy * dy;
+  if (len2 === 0) return 0;
+  const t = ((px - ax) * dx + (py - ay) * dy) / len2;
+  return t < 0 ? 0 : t > 1 ? 1 : t;
+}
+
+/** Squared distance from p to the segment a–b; as pointSegmentDistanceSquared. */
+function distanceSquared(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {
+  const dx = bx - ax;
+  const dy = by - ay;
+  const len2 = dx * dx + dy * dy;
+  let t = len2 === 0 ? 0 : ((px - ax) * dx + (py - ay) * dy) / len2;
+  if (t < 0) t = 0;
+  else if (t > 1) t = 1;
+  const ex = ax + t * dx - px;
+  const ey = ay + t * dy - py;
+  return ex * ex + ey * ey;
 }

@@ -84,30 +84,41 @@ export function assembleGraph(xs: readonly number[], ys: readonly number[], atom
     } else if (deg > 0) keep[v] = 1;
   }
 
+  // Chains of atoms between kept vertices, in flat arrays: chain c runs from vertex chainFrom[c] over the atoms
+  // chainAtoms[chainOff[c] .. chainOff[c+1]).
   const used = new Uint8Array(nA);
-  const chains: { verts: number[]; atoms: number[] }[] = [];
+  const chainAtoms = new Int32Array(nA);
+  const chainFrom: number[] = [];
+  const chainOff: number[] = [0];
+  let filled = 0;
+  const otherEnd = (a: number, v: number): number => (atoms.u[a] === v ? atoms.v[a]! : atoms.u[a]!);
   const walk = (from: number, first: number): void => {
-    const verts = [from];
-    const list: number[] = [];
+    const begin = filled;
     let a = first;
     let cur = from;
     for (;;) {
       used[a] = 1;
-      list.push(a);
-      const next = atoms.u[a] === cur ? atoms.v[a]! : atoms.u[a]!;
-      verts.push(next);
-      if (keep[next]) break;
+      chainAtoms[filled++] = a;
+      const next = otherEnd(a, cur);
+      if (keep[next]) {
+        cur = next;
+        break;
+      }
       const s = start[next]!;
       a = adj[s] === a ? adj[s + 1]! : adj[s]!;
       cur = next;
     }
-    if (verts[0] === verts[verts.length - 1]) {
+    chainFrom.push(from);
+    if (cur === from) {
       // A closed chain has ≥ 3 atoms (two atoms between the same vertices were merged), so the middle is a bend.
-      const mid = verts.length >> 1;
-      keep[verts[mid]!] = 1;
-      chains.push({ verts: verts.slice(0, mid + 1), atoms: list.slice(0, mid) });
-      chains.push({ verts: verts.slice(mid), atoms: list.slice(mid) });
-    } else chains.push({ verts, atoms: list });
+      const mid = (filled - begin + 1) >> 1;
+      let at = from;
+      for (let k = begin; k < begin + mid; k++) at = otherEnd(chainAtoms[k]!, at);
+      keep[at] = 1;
+      chainOff.push(begin + mid);
+      chainFrom.push(at);
+    }
+    chainOff.push(filled);
   };
   for (let v = 0; v < nV; v++) {
     if (!keep[v]) continue;
@@ -119,33 +130,41 @@ export function assembleGraph(xs: readonly number[], ys: readonly number[], atom
     walk(atoms.u[a]!, a);
   }
 
+  // One shared Point per vertex (points are readonly), so edges and vertices do not copy coordinates.
+  const pointOf: (Point | undefined)[] = new Array<Point | undefined>(nV);
+  const point = (v: number): Point => (pointOf[v] ??= [xs[v]!, ys[v]!]);
   const newId = new Int32Array(nV).fill(-1);
   const vertices: Point[] = [];
   for (let v = 0; v < nV; v++) {
     if (keep[v] && start[v + 1]! > start[v]!) {
       newId[v] = vertices.length;
-      vertices.push([xs[v]!, ys[v]!]);
+      vertices.push(point(v));
     }
   }
   const atomEdge = new Int32Array(nA);
   const atomPos = new Int32Array(nA);
   const atomForward = new Uint8Array(nA);
-  const edges: GraphEdge[] = chains.map((chain, id) => {
-    const points: Point[] = chain.verts.map((v) => [xs[v]!, ys[v]!]);
+  const edges: GraphEdge[] = new Array<GraphEdge>(chainFrom.length);
+  for (let id = 0; id < chainFrom.length; id++) {
+    let cur = chainFrom[id]!;
+    const points: Point[] = [point(cur)];
     let length = 0;
-    chain.atoms.forEach((a, pos) => {
+    const begin = chainOff[id]!;
+    for (let k = begin; k < chainOff[id + 1]!; k++) {
+      const a = chainAtoms[k]!;
       atomEdge[a] = id;
-      atomPos[a] = pos;
-      atomForward[a] = atoms.u[a] === chain.verts[pos] ? 1 : 0;
-      const p = points[pos]!;
-      const q = points[pos + 1]!;
-      length += Math.hypot(q[0] - p[0], q[1] - p[1]);
-    });
-    const u = newId[chain.verts[0]!]!;
-    const v = newId[chain.verts[chain.verts.length - 1]!]!;
+      atomPos[a] = k - begin;
+      atomForward[a] = atoms.u[a] === cur ? 1 : 0;
+      const next = otherEnd(a, cur);
+      length += Math.hypot(xs[next]! - xs[cur]!, ys[next]! - ys[cur]!);
+      points.push(point(next));
+      cur = next;
+    }
+    const u = newId[chainFrom[id]!]!;
+    const v = newId[cur]!;
     if (u < 0 || v < 0) throw new Error('graph/assemble: an edge ends at a vertex that was not kept');
-    const first = chain.atoms[0]!;
-    return { id, u, v, kind: atoms.kind[first]!, length, points, source: atoms.source[first]! };
-  });
+    const first = chainAtoms[begin]!;
+    edges[id] = { id, u, v, kind: atoms.kind[first]!, length, points, source: atoms.source[first]! };
+  }
   return { graph: { vertices, edges }, atomEdge, atomPos, atomForward };
 }

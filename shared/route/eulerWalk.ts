@@ -1,9 +1,12 @@
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
 
-/** One traversal of a planar-graph edge: `forward` means from edge.u to edge.v. */
-export interface Traversal {
-  readonly edge: number;
-  readonly forward: boolean;
+/**
+ * A walk over planar-graph edges in order: traversal k runs over edge `edges[k]`, from edge.u to edge.v when
+ * `forward[k]` is 1. Typed arrays, since a dense block's walk has tens of thousands of traversals.
+ */
+export interface EulerWalk {
+  readonly edges: Int32Array;
+  readonly forward: Uint8Array;
 }
 
 /**
@@ -14,28 +17,29 @@ export interface Traversal {
  * Every Euler walk of the same multigraph has the same length, so the choice at each vertex only shapes the route:
  * we take the unused copy with the smallest turning angle from the direction the needle arrived in (straight on
  * first), which keeps sharp turns few. Ties go to the copy listed first (stitching copies are listed first).
+ * O(Σ deg²) for the choices, O(copies) otherwise; no allocation per step.
  */
-export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], start: number): Traversal[] {
+export function findEulerWalk(graph: PlanarGraph, copies: ArrayLike<number>, start: number): EulerWalk {
   const n = graph.vertices.length;
   const m = copies.length;
   const dirs = edgeDirections(graph);
   const cu = new Int32Array(m);
   const cv = new Int32Array(m);
   const degree = new Int32Array(n + 1);
-  copies.forEach((e, c) => {
-    const { u, v } = graph.edges[e]!;
+  for (let c = 0; c < m; c++) {
+    const { u, v } = graph.edges[copies[c]!]!;
     cu[c] = u;
     cv[c] = v;
     degree[u]!++;
     if (v !== u) degree[v]!++;
-  });
+  }
   const offset = new Int32Array(n + 1);
   for (let v = 0; v < n; v++) offset[v + 1] = offset[v]! + degree[v]!;
   const live = new Int32Array(n);
   const slot = new Int32Array(offset[n]!);
   const posU = new Int32Array(m);
   const posV = new Int32Array(m);
-  copies.forEach((_, c) => {
+  for (let c = 0; c < m; c++) {
     const u = cu[c]!;
     const v = cv[c]!;
     posU[c] = offset[u]! + live[u]!;
@@ -44,7 +48,7 @@ export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], sta
       posV[c] = offset[v]! + live[v]!;
       slot[offset[v]! + live[v]!++] = c;
     }
-  });
+  }
   const removeAt = (vertex: number, c: number): void => {
     const pos = vertex === cu[c] ? posU[c]! : posV[c]!;
     const lastPos = offset[vertex]! + --live[vertex]!;
@@ -54,20 +58,28 @@ export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], sta
     else posV[moved] = pos;
   };
 
-  const stackV: number[] = [start];
-  const stackC: number[] = [-1];
-  const stackF: boolean[] = [true];
-  const out: Traversal[] = [];
-  while (stackV.length > 0) {
-    const v = stackV[stackV.length - 1]!;
-    const cin = stackC[stackC.length - 1]!;
+  // The stack holds (vertex, copy that reached it, direction); it is never deeper than m + 1.
+  const stackV = new Int32Array(m + 1);
+  const stackC = new Int32Array(m + 1);
+  const stackF = new Uint8Array(m + 1);
+  let top = 0;
+  stackV[0] = start;
+  stackC[0] = -1;
+  stackF[0] = 1;
+  // Traversals come off the stack last first; fill the output from the back.
+  const outEdges = new Int32Array(m);
+  const outForward = new Uint8Array(m);
+  let written = 0;
+  while (top >= 0) {
+    const v = stackV[top]!;
+    const cin = stackC[top]!;
     if (live[v]! > 0) {
       // Arrival direction at v: opposite of the direction that leaves v back along the incoming edge.
       let ax = 0;
       let ay = 0;
       if (cin >= 0) {
         const e = copies[cin]!;
-        const atU = stackF[stackF.length - 1] === false;
+        const atU = stackF[top] === 0;
         ax = -dirs[4 * e + (atU ? 0 : 2)]!;
         ay = -dirs[4 * e + (atU ? 1 : 3)]!;
       }
@@ -88,39 +100,46 @@ export function findEulerWalk(graph: PlanarGraph, copies: readonly number[], sta
       removeAt(bu, best);
       if (bv !== bu) removeAt(bv, best);
       const forward = bu === v;
-      stackV.push(forward ? bv : bu);
-      stackC.push(best);
-      stackF.push(forward);
+      top++;
+      stackV[top] = forward ? bv : bu;
+      stackC[top] = best;
+      stackF[top] = forward ? 1 : 0;
     } else {
-      stackV.pop();
-      const c = stackC.pop()!;
-      const f = stackF.pop()!;
-      if (c >= 0) out.push({ edge: copies[c]!, forward: f });
+      const c = stackC[top]!;
+      if (c >= 0) {
+        written++;
+        outEdges[m - written] = copies[c]!;
+        outForward[m - written] = stackF[top]!;
+      }
+      top--;
     }
   }
-  if (out.length !== m) throw new Error(`route/eulerWalk: walk used ${out.length} of ${m} edges; the multigraph is not connected or has wrong parity`);
-  return out.reverse();
+  if (written !== m) throw new Error(`route/eulerWalk: walk used ${written} of ${m} edges; the multigraph is not connected or has wrong parity`);
+  return { edges: outEdges, forward: outForward };
 }
 
 /** Unit leaving directions per edge: [ux, uy] leaving u along the edge, [vx, vy] leaving v back along it. */
 function edgeDirections(graph: PlanarGraph): Float64Array {
   const dirs = new Float64Array(4 * graph.edges.length);
-  graph.edges.forEach((e, i) => {
-    const p = e.points;
-    const [ux, uy] = firstStep(p, 0, 1);
-    const [vx, vy] = firstStep(p, p.length - 1, -1);
-    dirs.set([ux, uy, vx, vy], 4 * i);
-  });
+  for (let i = 0; i < graph.edges.length; i++) {
+    const p = graph.edges[i]!.points;
+    firstStep(p, 0, 1, dirs, 4 * i);
+    firstStep(p, p.length - 1, -1, dirs, 4 * i + 2);
+  }
   return dirs;
 }
 
-function firstStep(p: PlanarGraph['edges'][number]['points'], from: number, step: 1 | -1): [number, number] {
+/** Writes the unit direction from p[from] to the first distinct point stepping by `step` into out[at], out[at+1] (0, 0 if none). */
+function firstStep(p: PlanarGraph['edges'][number]['points'], from: number, step: 1 | -1, out: Float64Array, at: number): void {
   const [x0, y0] = p[from]!;
   for (let i = from + step; i >= 0 && i < p.length; i += step) {
     const dx = p[i]![0] - x0;
     const dy = p[i]![1] - y0;
     const len = Math.hypot(dx, dy);
-    if (len > 0) return [dx / len, dy / len];
+    if (len > 0) {
+      out[at] = dx / len;
+      out[at + 1] = dy / len;
+      return;
+    }
   }
-  return [0, 0];
 }

@@ -58,14 +58,17 @@ export function findMinTJoin(
   const dummies = k === 0 ? 0 : freeEnds;
   if ((k + dummies) % 2 === 1) throw new Error(`route/minTJoin: ${k} terminals and ${freeEnds} free ends cannot be paired`);
   if (k === 0) return { pairs: [], paths: [], openEnds: [], cost: 0 };
-  const indexOf = new Map<number, number>();
-  terminals.forEach((t, i) => indexOf.set(t, i));
-  if (indexOf.size !== k) throw new Error('route/minTJoin: terminals must be distinct');
+  // Terminal index per vertex (−1: not a terminal).
+  const indexOf = new Int32Array(search.vertexCount).fill(-1);
+  terminals.forEach((t, i) => {
+    if (indexOf[t] !== -1) throw new Error('route/minTJoin: terminals must be distinct');
+    indexOf[t] = i;
+  });
 
   const barred = new Uint8Array(k);
   for (const v of notFree) {
-    const i = indexOf.get(v);
-    if (i !== undefined) barred[i] = 1;
+    const i = indexOf[v]!;
+    if (i >= 0) barred[i] = 1;
   }
   const reach = new Int32Array(k).fill(Math.min(k - 1, FIRST_NEIGHBOURS));
   const radius = new Float64Array(k);
@@ -90,7 +93,7 @@ export function findMinTJoin(
 function searchStale(
   search: PathSearch,
   terminals: readonly number[],
-  indexOf: Map<number, number>,
+  indexOf: Int32Array,
   reach: Int32Array,
   stale: Uint8Array,
   radius: Float64Array,
@@ -108,8 +111,8 @@ function searchStale(
       continue;
     }
     radius[i] = search.run([terminals[i]!], (v, d) => {
-      const j = indexOf.get(v);
-      if (j === undefined || j === i) return false;
+      const j = indexOf[v]!;
+      if (j < 0 || j === i) return false;
       candidates.set(i < j ? i * k + j : j * k + i, d);
       return ++found >= want;
     });

@@ -1,5 +1,5 @@
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
-import { findEulerWalk, type Traversal } from './eulerWalk.ts';
+import { findEulerWalk, type EulerWalk } from './eulerWalk.ts';
 import { joinComponents } from './joinPieces.ts';
 import { findMinTJoin, timed, type PlannerStats } from './minTJoin.ts';
 import type { RouteGroup } from './routeGroups.ts';
@@ -8,7 +8,7 @@ import { UnionFind } from './unionFind.ts';
 
 /** How one pass was planned. */
 export interface GroupPlan {
-  readonly walk: Traversal[];
+  readonly walk: EulerWalk;
   /** Graph edge ids of the travel copies (each copy once per traversal). */
   readonly travelCopies: readonly number[];
   /** Σ integer travel cost of the chosen route and of the lower bound (min T-join). */
@@ -33,28 +33,34 @@ export interface GroupPlan {
 export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGroup, start: number, end: number, stats?: PlannerStats): GroupPlan {
   const required = group.quiltingEdges;
   const freeEnds = ((start < 0 ? 1 : 0) + (end < 0 ? 1 : 0)) as 0 | 1 | 2;
+  const parity = new Uint8Array(graph.vertices.length);
+  const flipped: number[] = [];
+  const flip = (v: number): void => {
+    if (parity[v] === 0) flipped.push(v);
+    parity[v]! ^= 1;
+  };
   const terminalsOf = (extra: readonly number[]): number[] => {
-    const parity = new Map<number, number>();
-    const flip = (v: number): void => {
-      parity.set(v, (parity.get(v) ?? 0) ^ 1);
-    };
-    for (const e of required) {
-      flip(graph.edges[e]!.u);
-      flip(graph.edges[e]!.v);
-    }
-    for (const e of extra) {
-      flip(graph.edges[e]!.u);
-      flip(graph.edges[e]!.v);
+    for (const list of [required, extra]) {
+      for (const e of list) {
+        flip(graph.edges[e]!.u);
+        flip(graph.edges[e]!.v);
+      }
     }
     if (start >= 0) flip(start);
     if (end >= 0) flip(end);
-    return [...parity].filter(([, p]) => p === 1).map(([v]) => v).sort((a, b) => a - b);
+    const out: number[] = [];
+    for (const v of flipped) {
+      if (parity[v] === 1) out.push(v);
+      parity[v] = 0;
+    }
+    flipped.length = 0;
+    return out.sort((a, b) => a - b);
   };
 
-  const onLines = new Set<number>();
-  for (const e of required) onLines.add(graph.edges[e]!.u).add(graph.edges[e]!.v);
+  const onLines = new Uint8Array(graph.vertices.length);
+  for (const e of required) onLines[graph.edges[e]!.u] = onLines[graph.edges[e]!.v] = 1;
   // With one end fixed off the quilting lines and the other free, the free end must not be that same point.
-  const notFree = freeEnds === 1 ? [start, end].filter((v) => v >= 0 && !onLines.has(v)) : [];
+  const notFree = freeEnds === 1 ? [start, end].filter((v) => v >= 0 && !onLines[v]) : [];
   const join = findMinTJoin(search, terminalsOf([]), freeEnds, stats, notFree);
   const joinEdges = join.paths.flat();
   const lowerBound = { lowerBoundCost: join.cost, lowerBoundEdges: joinEdges };
@@ -66,8 +72,8 @@ export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGr
   // The route must reach a fixed start or end even when it lies off the quilting lines (a block corner): such an
   // end counts as one more piece to join.
   const mustReach = [...group.vertices];
-  for (const v of [start, end]) if (v >= 0 && !mustReach.includes(v)) mustReach.push(v);
-  const joined = componentsOf(graph, [...required, ...joinEdges]);
+  for (const v of [start, end]) if (v >= 0 && !onLines[v] && !mustReach.includes(v)) mustReach.push(v);
+  const joined = componentsOf(graph, required, joinEdges);
   if (countRoots(joined, mustReach) > 1) {
     const pieces = componentsOf(graph, required);
     const tree = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => pieces.find(v)));
@@ -90,10 +96,16 @@ export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGr
   }
 
   const walkStart = start >= 0 ? start : pickStart(openEnds, end, graph, required);
-  const walk = timed(stats, 'walkMs', () => findEulerWalk(graph, [...required, ...travelCopies], walkStart));
-  if (end >= 0 && walk.length > 0) {
-    const last = walk[walk.length - 1]!;
-    const at = last.forward ? graph.edges[last.edge]!.v : graph.edges[last.edge]!.u;
+  const walk = timed(stats, 'walkMs', () => {
+    const copies = new Int32Array(required.length + travelCopies.length);
+    copies.set(required);
+    copies.set(travelCopies, required.length);
+    return findEulerWalk(graph, copies, walkStart);
+  });
+  const steps = walk.edges.length;
+  if (end >= 0 && steps > 0) {
+    const last = graph.edges[walk.edges[steps - 1]!]!;
+    const at = walk.forward[steps - 1] === 1 ? last.v : last.u;
     if (at !== end) throw new Error(`route/planGroup: walk ends at ${at}, not at the fixed end ${end}`);
   }
   return { walk, travelCopies, travelCost, method, ...lowerBound };
@@ -107,9 +119,9 @@ function pickStart(openEnds: readonly number[], end: number, graph: PlanarGraph,
   return graph.edges[required[0]!]!.u;
 }
 
-function componentsOf(graph: PlanarGraph, edges: readonly number[]): UnionFind {
+function componentsOf(graph: PlanarGraph, ...lists: (readonly number[])[]): UnionFind {
   const uf = new UnionFind(graph.vertices.length);
-  for (const e of edges) uf.union(graph.edges[e]!.u, graph.edges[e]!.v);
+  for (const edges of lists) for (const e of edges) uf.union(graph.edges[e]!.u, graph.edges[e]!.v);
   return uf;
 }
 

@@ -41,35 +41,38 @@ export function findRouteGroups(graph: PlanarGraph, travel: TravelGraph): RouteG
     touched[e.u] = 1;
     touched[e.v] = 1;
   }
-  const groupIndex = new Map<number, number>();
+  // Groups are numbered in the order of their lowest touched vertex.
+  const groupOfRoot = new Int32Array(n).fill(-1);
+  const pieceSeen = new Uint8Array(n);
   const edgeLists: number[][] = [];
   const vertexLists: number[][] = [];
-  const pieceRoots: Set<number>[] = [];
+  const pieceCounts: number[] = [];
   for (let v = 0; v < n; v++) {
     if (!touched[v]) continue;
     const root = groups.find(v);
-    let g = groupIndex.get(root);
-    if (g === undefined) {
-      g = edgeLists.length;
-      groupIndex.set(root, g);
+    let g = groupOfRoot[root]!;
+    if (g < 0) {
+      g = groupOfRoot[root] = edgeLists.length;
       edgeLists.push([]);
       vertexLists.push([]);
-      pieceRoots.push(new Set());
+      pieceCounts.push(0);
     }
     vertexLists[g]!.push(v);
-    pieceRoots[g]!.add(pieces.find(v));
+    const piece = pieces.find(v);
+    if (!pieceSeen[piece]) {
+      pieceSeen[piece] = 1;
+      pieceCounts[g]!++;
+    }
   }
-  for (const e of graph.edges) if (e.kind === 'quilting') edgeLists[groupIndex.get(groups.find(e.u))!]!.push(e.id);
+  for (const e of graph.edges) if (e.kind === 'quilting') edgeLists[groupOfRoot[groups.find(e.u)]!]!.push(e.id);
   const oddVertices: number[] = [];
-  degree.forEach((d, v) => {
-    if (d % 2 === 1) oddVertices.push(v);
-  });
-  const groupOfVertex = new Int32Array(n).fill(-1);
-  for (let v = 0; v < n; v++) groupOfVertex[v] = groupIndex.get(groups.find(v)) ?? -1;
+  for (let v = 0; v < n; v++) if (degree[v]! % 2 === 1) oddVertices.push(v);
+  const groupOfVertex = new Int32Array(n);
+  for (let v = 0; v < n; v++) groupOfVertex[v] = groupOfRoot[groups.find(v)]!;
   let pieceCount = 0;
   const out = edgeLists.map((quiltingEdges, g) => {
-    pieceCount += pieceRoots[g]!.size;
-    return { quiltingEdges, vertices: vertexLists[g]!, pieceCount: pieceRoots[g]!.size };
+    pieceCount += pieceCounts[g]!;
+    return { quiltingEdges, vertices: vertexLists[g]!, pieceCount: pieceCounts[g]! };
   });
   return { pieceCount, groups: out, oddVertices, groupOfVertex };
 }

@@ -1,7 +1,7 @@
 import type { Point } from '../geometry/point.ts';
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
 import { assertNever } from '../assertNever.ts';
-import type { Traversal } from './eulerWalk.ts';
+import type { EulerWalk } from './eulerWalk.ts';
 
 /** What the needle does along a stroke: stitch a quilting line, or travel (retrace, ditch, edge). */
 export type StrokeKind = 'stitch' | 'retrace' | 'ditch' | 'edge';
@@ -32,7 +32,7 @@ export interface RouteLengths {
  */
 export function buildStrokes(
   graph: PlanarGraph,
-  walk: readonly Traversal[],
+  walk: EulerWalk,
   pass: number,
   stitched: Uint8Array,
   totals: RouteLengths,
@@ -45,7 +45,9 @@ export function buildStrokes(
   const flush = (): void => {
     if (kind !== null) strokes.push({ pass, kind, points, length, edges });
   };
-  for (const { edge, forward } of walk) {
+  for (let w = 0; w < walk.edges.length; w++) {
+    const edge = walk.edges[w]!;
+    const forward = walk.forward[w] === 1;
     const e = graph.edges[edge]!;
     const k = strokeKindOf(e.kind, stitched, edge);
     addLength(totals, k, e.length);

@@ -14,6 +14,11 @@ export class PathSearch {
   private heapVal: Int32Array;
   private heapSize = 0;
 
+  /** Number of vertices of the travel graph. */
+  get vertexCount(): number {
+    return this.graph.vertexCount;
+  }
+
   constructor(private readonly graph: TravelGraph) {
     const n = graph.vertexCount;
     this.dist = new Float64Array(n).fill(Infinity);

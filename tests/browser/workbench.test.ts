@@ -124,6 +124,21 @@ describe('block workbench', () => {
     await page.getByText('Kept: the planned route.').waitFor();
     await screenshot(page, 'workbench-06-after-reload');
 
+    // A motif placed into the bottom-right square: live preview, then one undo step adds all its lines.
+    await page.getByRole('button', { name: /Motif in a patch/ }).click();
+    await clickAt(page, 10, 10);
+    await page.getByText(/\d+ lines in the preview/).waitFor();
+    await screenshot(page, 'workbench-06b-motif-preview');
+    await page.getByRole('button', { name: 'Place motif' }).click();
+    await page.waitForFunction(() => !/ 3 quilting lines/.test(document.querySelector('[data-testid="block-canvas"]')?.getAttribute('aria-label') ?? ''));
+
+    // My own stitching order: click two lines in turn; the card shows the order's own figures.
+    await page.getByRole('button', { name: /My stitching order/ }).click();
+    await clickAt(page, 2, 2);
+    await clickAt(page, 6, 6);
+    await page.getByRole('heading', { name: 'My stitching order', exact: true }).waitFor();
+    await screenshot(page, 'workbench-06c-own-order');
+
     await page.setViewportSize({ width: 834, height: 1112 });
     await page.waitForTimeout(300);
     await screenshot(page, 'workbench-07-tablet');

@@ -97,18 +97,19 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
   const check = useRouteCheck(designId, design);
   const pieces = useMemo(() => findLinePieces(design), [design]);
   const routes = useRoutePlan(designId, design, doc.version);
-  const shownStrokes = routes.plan?.route ?? (routes.saved?.current ? routes.saved.strokes : null);
+  const shownStrokes = routes.plan?.route ?? (routes.saved && routes.savedIsCurrent ? routes.saved.strokes : null);
   const player = useRoutePlayer(shownStrokes ?? NO_STROKES, design.units === 'in' ? 2 : 5);
 
   const selected = ctl.selection;
   const selectedLines = useMemo(() => new Set(selected?.target === 'lines' ? selected.indices : []), [selected]);
   const selectedSeams = useMemo(() => new Set(selected?.target === 'seams' ? selected.indices : []), [selected]);
 
-  function chooseTool(t: ToolId) {
+  const { clearOwnOrder } = ctl;
+  const chooseTool = useCallback((t: ToolId) => {
     setTool(t);
-    if (t === 'order') ctl.clearOwnOrder();
+    if (t === 'order') clearOwnOrder();
     setAnnounce(`${TOOLS.find((x) => x.id === t)?.label ?? t} tool`);
-  }
+  }, [clearOwnOrder]);
 
   function deleteSelection() {
     if (!selected) return;

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { ShortcutAction } from './shortcuts.ts';
 
 /** The drawing and marking tools of the workbench (our own names; see GLOSSARY.md). */
@@ -21,7 +22,7 @@ export interface ToolbarProps {
 }
 
 /** The tool rail: one pressed button per tool, with its key in the accessible name. */
-export function Toolbar({ tool, onTool }: ToolbarProps) {
+export const Toolbar = memo(function Toolbar({ tool, onTool }: ToolbarProps) {
   return (
     <div role="toolbar" aria-label="Drawing tools" aria-orientation="vertical" className="flex flex-row flex-wrap gap-1 lg:flex-col">
       {TOOLS.map((t) => (
@@ -40,4 +41,4 @@ export function Toolbar({ tool, onTool }: ToolbarProps) {
       ))}
     </div>
   );
-}
+});

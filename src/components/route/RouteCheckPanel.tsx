@@ -1,4 +1,4 @@
-import type { ReactNode } from 'react';
+import { memo, type ReactNode } from 'react';
 import type { Units } from '../../../shared/design/design.schema.ts';
 import { formatDistance, formatMinutes } from '../designs/formatFigures.ts';
 import type { GapView, RouteCheckView, RouteFigures, ThreadBudgetView } from './routeCheckView.ts';
@@ -12,7 +12,7 @@ export interface RouteCheckPanelProps {
 }
 
 /** The route check card: passes, stops, odd points, pieces, lengths, thread budget, gap check and warnings. */
-export function RouteCheckPanel({ check, state, message, units }: RouteCheckPanelProps) {
+export const RouteCheckPanel = memo(function RouteCheckPanel({ check, state, message, units }: RouteCheckPanelProps) {
   return (
     <section aria-label="Route check" aria-busy={state === 'checking'} className="rounded border border-muslin-300 bg-white p-3">
       <div className="flex items-baseline justify-between gap-2">
@@ -49,7 +49,7 @@ export function RouteCheckPanel({ check, state, message, units }: RouteCheckPane
       )}
     </section>
   );
-}
+});
 
 const GAP_WORDS: Readonly<Record<GapView['status'], (limit: string) => string>> = {
   within: (l) => `: within the batting’s ${l} limit.`,

@@ -17,7 +17,7 @@ export interface RoutePanelProps {
 /** Plan route, the route preview player, and keeping the planned or own route. */
 export function RoutePanel({ routes, player, units, canKeep, hasOwnRoute, onClearOwn }: RoutePanelProps) {
   const { plan, saved, busy, message } = routes;
-  const showing = plan ? 'planned' : saved?.current ? saved.kind : null;
+  const showing = plan ? 'planned' : saved && routes.savedIsCurrent ? saved.kind : null;
   return (
     <section aria-label="Route" className="rounded border border-muslin-300 bg-white p-3 text-sm">
       <div className="flex items-center justify-between gap-2">
@@ -35,7 +35,7 @@ export function RoutePanel({ routes, player, units, canKeep, hasOwnRoute, onClea
       {!plan && saved && (
         <p className="mt-1">
           Kept: the {saved.kind === 'planned' ? 'planned route' : 'your own stitching order'}
-          {saved.current ? '.' : ', for an earlier version of this design. Plan again to see it for the current lines.'}
+          {routes.savedIsCurrent ? '.' : ', for an earlier version of this design. Plan again to see it for the current lines.'}
         </p>
       )}
       {showing && (

@@ -6,6 +6,8 @@ import { planAnswerSchema, savedRouteAnswerSchema, type PlanAnswer, type SavedRo
 export interface RoutePlanState {
   readonly plan: PlanAnswer | null;
   readonly saved: SavedRoute | null;
+  /** The kept route matches the lines on screen (kept for this version, nothing edited since). */
+  readonly savedIsCurrent: boolean;
   readonly busy: 'planning' | 'keeping' | null;
   readonly message: string | null;
   /** Runs the planner on the design as it is on screen. */
@@ -20,6 +22,7 @@ export function useRoutePlan(designId: string, design: Design | null, savedVersi
   const [saved, setSaved] = useState<SavedRoute | null>(null);
   const [busy, setBusy] = useState<RoutePlanState['busy']>(null);
   const [message, setMessage] = useState<string | null>(null);
+  const [keptFor, setKeptFor] = useState<Design | null>(null);
 
   useEffect(() => {
     void (async () => {
@@ -29,6 +32,11 @@ export function useRoutePlan(designId: string, design: Design | null, savedVersi
       if (parsed.success) setSaved(parsed.data.route);
     })();
   }, [designId]);
+
+  // The kept route was made for the design as loaded (or as it was when kept); any later edit makes it stale.
+  useEffect(() => {
+    if (design && keptFor === null) setKeptFor(design);
+  }, [design, keptFor]);
 
   // A planned route belongs to the design it was planned for: any edit makes it stale.
   useEffect(() => setPlan(null), [design]);
@@ -55,8 +63,10 @@ export function useRoutePlan(designId: string, design: Design | null, savedVersi
     if (!res.ok) return setMessage(res.error.message);
     const parsed = savedRouteAnswerSchema.safeParse(res.value);
     if (parsed.success) setSaved(parsed.data.route);
+    setKeptFor(design);
     setMessage(kind === 'planned' ? 'Kept the planned route.' : 'Kept your stitching order.');
   }, [designId, design, savedVersion]);
 
-  return { plan, saved, busy, message, planRoute: () => void planRoute(), keep: (k) => void keep(k) };
+  const savedIsCurrent = saved !== null && saved.current && saved.designVersion <= savedVersion && design === keptFor;
+  return { plan, saved, savedIsCurrent, busy, message, planRoute: () => void planRoute(), keep: (k) => void keep(k) };
 }

@@ -5,6 +5,7 @@ import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';
 import { LineBitmap, type LineGroup } from './LineBitmap.tsx';
+import { buildPlayback, needleAt } from '../../route/routePlayback.ts';
 
 export interface QuiltingLineLayerProps {
   readonly lines: readonly Polyline[];
@@ -109,7 +110,9 @@ function groupByPiece(lines: readonly Polyline[], pieceOfLine: readonly number[]
   return [...map.entries()];
 }
 
+/** Where the order number goes: halfway along the line. */
 function midpointOf(line: Polyline | undefined): Point | null {
-  if (!line || line.length === 0) return null;
-  return line[Math.floor((line.length - 1) / 2)] ?? null;
+  if (!line || line.length < 2) return null;
+  const playback = buildPlayback([{ pass: 1, kind: 'stitch', points: line }]);
+  return needleAt(playback, playback.total / 2)?.point ?? null;
 }

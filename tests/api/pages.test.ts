@@ -10,7 +10,7 @@ describe('pages', () => {
   it('home page says what Threadway does and offers sign-up to anonymous visitors', async () => {
     const res = await new TestClient().get('/');
     expect(res.status).toBe(200);
-    for (const words of ['continuous', 'binding', 'batting', 'bobbin', 'Quilt-as-you-go', 'href="/sign-up"']) expect(res.text).toContain(words);
+    for (const words of ['continuous', 'binding', 'batting', 'bobbin', 'walkthrough', 'href="/sign-up"']) expect(res.text).toContain(words);
   });
 
   for (const path of ['/sign-in', '/sign-up', '/forgot-password', '/reset-password']) {

@@ -81,7 +81,7 @@ export function rosterToCsv(entries: readonly RosterEntry[]): string {
     String(e.lessonsFinished),
     String(e.lessonCount),
     e.current?.lessonTitle ?? '',
-    e.current ? String(e.current.stepIndex) : '',
+    e.current ? String(displayStep(e.current)) : '',
     e.current ? String(e.current.totalSteps) : '',
     e.lastActiveAt ?? '',
     String(e.photos),
@@ -94,3 +94,7 @@ function csvCell(value: string): string {
   return /[",\r\n]/.test(safe) ? `"${safe.replace(/"/g, '""')}"` : safe;
 }
 
+/** The step a person reads: progress stores a 0-based index, screens and the CSV count from 1. */
+export function displayStep(p: { stepIndex: number; totalSteps: number }): number {
+  return Math.min(p.stepIndex + 1, Math.max(p.totalSteps, 1));
+}

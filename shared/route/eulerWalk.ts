@@ -22,7 +22,7 @@ export interface EulerWalk {
 export function findEulerWalk(graph: PlanarGraph, copies: ArrayLike<number>, start: number): EulerWalk {
   const n = graph.vertices.length;
   const m = copies.length;
-  const dirs = edgeDirections(graph);
+  const dirs = copyDirections(graph, copies);
   const cu = new Int32Array(m);
   const cv = new Int32Array(m);
   const degree = new Int32Array(n + 1);
@@ -78,18 +78,16 @@ export function findEulerWalk(graph: PlanarGraph, copies: ArrayLike<number>, sta
       let ax = 0;
       let ay = 0;
       if (cin >= 0) {
-        const e = copies[cin]!;
         const atU = stackF[top] === 0;
-        ax = -dirs[4 * e + (atU ? 0 : 2)]!;
-        ay = -dirs[4 * e + (atU ? 1 : 3)]!;
+        ax = -dirs[4 * cin + (atU ? 0 : 2)]!;
+        ay = -dirs[4 * cin + (atU ? 1 : 3)]!;
       }
       let best = -1;
       let bestCos = -Infinity;
       for (let q = offset[v]!; q < offset[v]! + live[v]!; q++) {
         const c = slot[q]!;
-        const e = copies[c]!;
         const leavesFromU = cu[c] === v;
-        const cos = ax * dirs[4 * e + (leavesFromU ? 0 : 2)]! + ay * dirs[4 * e + (leavesFromU ? 1 : 3)]!;
+        const cos = ax * dirs[4 * c + (leavesFromU ? 0 : 2)]! + ay * dirs[4 * c + (leavesFromU ? 1 : 3)]!;
         if (cos > bestCos + 1e-12 || (Math.abs(cos - bestCos) <= 1e-12 && c < best)) {
           best = c;
           bestCos = cos;
@@ -118,13 +116,16 @@ export function findEulerWalk(graph: PlanarGraph, copies: ArrayLike<number>, sta
   return { edges: outEdges, forward: outForward };
 }
 
-/** Unit leaving directions per edge: [ux, uy] leaving u along the edge, [vx, vy] leaving v back along it. */
-function edgeDirections(graph: PlanarGraph): Float64Array {
-  const dirs = new Float64Array(4 * graph.edges.length);
-  for (let i = 0; i < graph.edges.length; i++) {
-    const p = graph.edges[i]!.points;
-    firstStep(p, 0, 1, dirs, 4 * i);
-    firstStep(p, p.length - 1, -1, dirs, 4 * i + 2);
+/**
+ * Unit leaving directions per copy (of its edge): [ux, uy] leaving u along the edge, [vx, vy] leaving v back along
+ * it. Per copy, not per graph edge, so a pass over a few edges of a large graph costs only its own size.
+ */
+function copyDirections(graph: PlanarGraph, copies: ArrayLike<number>): Float64Array {
+  const dirs = new Float64Array(4 * copies.length);
+  for (let c = 0; c < copies.length; c++) {
+    const p = graph.edges[copies[c]!]!.points;
+    firstStep(p, 0, 1, dirs, 4 * c);
+    firstStep(p, p.length - 1, -1, dirs, 4 * c + 2);
   }
   return dirs;
 }

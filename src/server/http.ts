@@ -3,6 +3,7 @@
 // path ("email", "items.0.name") to a message a person can act on.
 import type { z } from 'zod';
 import { err, ok, type Result } from '../../shared/result.ts';
+import { readBytesCapped } from './readBody.ts';
 
 export type ErrorCode =
   | 'invalid_input'
@@ -57,13 +58,11 @@ export async function readJson<S extends z.ZodType>(
   if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type.trim())) {
     return err(problem(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
   }
-  const declared = Number(request.headers.get('content-length') ?? '0');
-  if (declared > limit) return err(tooLarge(limit));
-  const text = await readTextCapped(request, limit);
-  if (text === null) return err(tooLarge(limit));
+  const bytes = await readBytesCapped(request, limit);
+  if (bytes === null) return err(tooLarge(limit));
   let data: unknown;
   try {
-    data = JSON.parse(text);
+    data = JSON.parse(new TextDecoder('utf-8', { fatal: false }).decode(bytes));
   } catch {
     return err(problem(400, 'invalid_json', 'The request body is not valid JSON.'));
   }
@@ -90,31 +89,3 @@ function tooLarge(limit: number): Response {
   return problem(413, 'payload_too_large', `The request body is larger than ${Math.round(limit / 1024)} KiB.`);
 }
 
-/** The body as text, or null once it grows past `limit` bytes (the stream is cancelled there). */
-async function readTextCapped(request: Request, limit: number): Promise<string | null> {
-  if (!request.body) return '';
-  const reader = request.body.getReader();
-  const chunks: Uint8Array[] = [];
-  let size = 0;
-  for (;;) {
-    const { done, value } = await reader.read();
-    if (done) break;
-    size += value.byteLength;
-    if (size > limit) {
-      await reader.cancel();
-      return null;
-    }
-    chunks.push(value);
-  }
-  return new TextDecoder('utf-8', { fatal: false }).decode(concat(chunks, size));
-}
-
-function concat(chunks: readonly Uint8Array[], size: number): Uint8Array {
-  const out = new Uint8Array(size);
-  let at = 0;
-  for (const c of chunks) {
-    out.set(c, at);
-    at += c.byteLength;
-  }
-  return out;
-}

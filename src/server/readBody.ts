@@ -1,5 +1,5 @@
 // Reads a raw request body up to a byte cap; null once it grows past the cap (the stream is cancelled there,
-// so an oversized upload is never held in memory whole).
+// so an oversized upload or JSON body is never held in memory whole). Used by readJson and photo uploads.
 export async function readBytesCapped(request: Request, limit: number): Promise<Uint8Array | null> {
   const declared = Number(request.headers.get('content-length') ?? '0');
   if (declared > limit) return null;

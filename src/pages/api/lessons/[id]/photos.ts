@@ -8,7 +8,7 @@ import { requireUser } from '../../../../server/auth/guards.ts';
 import { findLessonAccess, isManager } from '../../../../server/classes/classAccess.ts';
 import { MAX_UPLOAD_BYTES, photoProblemMessage, processPhoto } from '../../../../server/photos/photoImage.ts';
 import { MAX_PHOTOS_PER_LESSON, countPhotos, listPhotos, storePhoto } from '../../../../server/photos/photo.service.ts';
-import { readBytesCapped } from '../../../../server/photos/readBody.ts';
+import { readBytesCapped } from '../../../../server/readBody.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

@@ -20,7 +20,8 @@ export default defineConfig({
           environment: 'node',
           testTimeout: 120_000,
           hookTimeout: 120_000,
-          fileParallelism: false,
+          // One file at a time: browser and API files share one server and database.
+          poolOptions: { forks: { singleFork: true } },
         },
       },
     ],

@@ -66,7 +66,7 @@ function check(design: Design): object {
   const checked = checkRoute(design);
   if (!checked.ok) fail(checked.error.message);
   const c = checked.value;
-  return { command: 'check', units: design.units, ...c };
+  return { command: 'check', ...c };
 }
 
 const [command, file, ...rest] = process.argv.slice(2);

@@ -46,8 +46,8 @@ const SEEDS = 300;
 
 describe(`planRoute against networkx on ${SEEDS} seeded random designs`, () => {
   it('has the same passes and lower bound, and travel equal to the networkx optimum wherever the bound is exact', () => {
-    const instances = [];
-    const plans = [];
+    const instances: unknown[] = [];
+    const plans: ReturnType<typeof planRoute>[] = [];
     for (let seed = 1; seed <= SEEDS; seed++) {
       const design = designSchema.parse(randomDesign(seed));
       const built = buildPlanarGraph(design);

@@ -4,6 +4,7 @@ import type { Design } from '../../../shared/design/design.schema.ts';
 import type { Point } from '../../../shared/geometry/point.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
 import type { GapCheck } from '../../../shared/gap/gapCheck.ts';
+import type { DesignCheck } from '../../../shared/route/checkDesign.ts';
 import type { RouteCheck } from '../../../shared/route/checkRoute.ts';
 import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
 import type { Stroke } from '../../../shared/route/routeStrokes.ts';
@@ -48,16 +49,7 @@ export interface DesignSummary extends PlanFigures {
 }
 
 /** Route check of a design as the API returns it (no planar graph, no strokes). */
-export interface DesignCheckReport {
-  readonly units: Design['units'];
-  readonly pieces: number;
-  readonly pieceDetails: readonly { readonly length: number; readonly oddPoints: number }[];
-  readonly oddPoints: { readonly count: number; readonly points: readonly Point[] };
-  readonly onePassWithoutTravel: boolean;
-  readonly passesWithoutTravel: number;
-  readonly passesWithTravel: number;
-  readonly stitchLength: number;
-}
+export type DesignCheckReport = Omit<DesignCheck, 'plan'>;
 
 export interface CheckAnswer {
   readonly check: DesignCheckReport;

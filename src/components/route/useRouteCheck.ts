@@ -22,6 +22,12 @@ export function useRouteCheck(designId: string, design: Design | null): RouteChe
 
   useEffect(() => {
     if (!design) return;
+    // No quilting lines yet: nothing to check (the engine refuses an empty design), and the card says so.
+    if (design.lines.length === 0) {
+      controller.current?.abort();
+      setResult({ check: null, state: 'idle', message: null });
+      return;
+    }
     setResult((r) => ({ ...r, state: 'checking' }));
     const timer = setTimeout(async () => {
       controller.current?.abort();

@@ -5,6 +5,7 @@ import { sql } from 'kysely';
 import { connectDatabase } from '../connect.ts';
 import { hashPassword } from '../../src/server/auth/password.ts';
 import type { Role, UnitsPreference } from '../schema.ts';
+import { seedGuildContent } from './guildContent.ts';
 
 interface DemoFile {
   password: string;
@@ -29,4 +30,6 @@ for (const account of demo.accounts) {
   added += 1;
 }
 console.log(`[seed] demo guild: ${added} account(s) added, ${demo.accounts.length - added} already present`);
+const content = await seedGuildContent(db, demo.accounts.map((a) => a.email), new Date());
+console.log(`[seed] demo content: ${content.designs} design(s), ${content.templates} template(s), ${content.classes} class(es), ${content.enrollments} enrollment(s) added`);
 await db.destroy();

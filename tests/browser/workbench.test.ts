@@ -124,6 +124,15 @@ describe('block workbench', () => {
     await page.getByText('Kept: the planned route.').waitFor();
     await screenshot(page, 'workbench-06-after-reload');
 
+    // Block settings: a batting spacing limit of 2 in makes the gap check compare; one undo step takes it back.
+    await page.getByText('Block settings', { exact: true }).click();
+    await page.getByLabel('Batting spacing limit (in)').fill('2');
+    await page.getByLabel('Batting spacing limit (in)').press('Enter');
+    await page.waitForFunction(() => /(over|within) the batting’s 2 in limit/.test(document.querySelector('section[aria-label="Route check"] [data-figure="gap"]')?.textContent ?? ''), undefined, { timeout: 20_000 });
+    await page.getByLabel('Stitches per inch (SPI)').fill('2');
+    await page.getByLabel('Stitches per inch (SPI)').press('Enter');
+    await page.getByText(/^Not accepted/).waitFor();
+
     // A motif placed into the bottom-right square: live preview, then one undo step adds all its lines.
     await page.getByRole('button', { name: /Motif in a patch/ }).click();
     await clickAt(page, 10, 10);
@@ -138,6 +147,14 @@ describe('block workbench', () => {
     await clickAt(page, 6, 6);
     await page.getByRole('heading', { name: 'My stitching order', exact: true }).waitFor();
     await screenshot(page, 'workbench-06c-own-order');
+
+    // Saved versions: go back to version 1, the nine-patch without quilting lines.
+    await page.locator('[data-save-status="saved"]').waitFor({ timeout: 20_000 });
+    await page.getByText('Saved versions', { exact: true }).click();
+    await page.getByRole('button', { name: 'Go back to version 1' }).click();
+    await page.waitForFunction(() => / 0 quilting lines/.test(document.querySelector('[data-testid="block-canvas"]')?.getAttribute('aria-label') ?? ''));
+    await page.getByText(/Went back to version 1/).waitFor();
+    await screenshot(page, 'workbench-06d-settings-and-versions');
 
     await page.setViewportSize({ width: 834, height: 1112 });
     await page.waitForTimeout(300);

@@ -25,7 +25,9 @@ import { readCanvasTheme } from './canvasTheme.ts';
 import { findLinePieces } from './linePieces.ts';
 import { buildMotifParams, defaultMotifValues } from './motifForm.ts';
 import { MotifPanel } from './MotifPanel.tsx';
+import { BlockSettingsPanel } from './BlockSettingsPanel.tsx';
 import { SaveIndicator } from './SaveIndicator.tsx';
+import { SavedVersionsPanel } from './SavedVersionsPanel.tsx';
 import { ShortcutList } from './ShortcutList.tsx';
 import { matchShortcut, type ShortcutAction } from './shortcuts.ts';
 import { Toolbar, TOOLS, type ToolId } from './Toolbar.tsx';
@@ -278,7 +280,9 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
             />
           )}
           <RouteCheckPanel check={check.check} state={check.state} message={check.message} units={design.units} />
+          <BlockSettingsPanel design={design} dispatch={history.dispatch} />
           <RoutePanel routes={routes} player={player} units={design.units} canKeep={doc.status.kind === 'saved'} hasOwnRoute={Boolean(own)} onClearOwn={() => { ctl.clearOwnOrder(); history.dispatch({ kind: 'setRoute', route: null }); }} />
+          <SavedVersionsPanel designId={designId} baseVersion={doc.version} canGoBack={doc.status.kind === 'saved'} onRestored={doc.replaceFromServer} onConflict={doc.openConflict} />
         </aside>
       </div>
     </div>

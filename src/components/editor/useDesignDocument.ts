@@ -29,6 +29,10 @@ export interface DesignDocument {
   /** Conflict: take the server's copy (drops my edits) or send mine over it. */
   resolveConflict(choice: 'reload' | 'keep-mine'): void;
   saveNow(): void;
+  /** Replaces the document with the server's answer (going back to a saved version): undo history restarts. */
+  replaceFromServer(record: DesignRecord): void;
+  /** A 409 from elsewhere (going back): opens the same conflict choice a save's 409 opens. */
+  openConflict(server: DesignRecord | null): void;
 }
 
 /**
@@ -221,5 +225,24 @@ export function useDesignDocument(designId: string): DesignDocument {
     void save();
   }, [save]);
 
-  return { load, design, title, version, status, serverCopy, generation, setDesign, setTitle, resolveConflict, saveNow };
+  const replaceFromServer = useCallback((record: DesignRecord) => {
+    const st = s.current;
+    clearTimeout(st.timer);
+    Object.assign(st, { version: record.version, design: record.design, title: record.title, notes: record.notes, revision: 0, savedRevision: 0, conflict: false, attempt: 0, refused: false });
+    clearDraft(window.localStorage, designId);
+    setServerCopy(null);
+    setVersion(record.version);
+    setDesignState(record.design);
+    setTitleState(record.title);
+    setGeneration((g) => g + 1);
+    setStatus({ kind: 'saved' });
+  }, [designId]);
+
+  const openConflict = useCallback((server: DesignRecord | null) => {
+    s.current.conflict = true;
+    setServerCopy(server);
+    setStatus({ kind: 'conflict', serverVersion: server?.version ?? s.current.version });
+  }, []);
+
+  return { load, design, title, version, status, serverCopy, generation, setDesign, setTitle, resolveConflict, saveNow, replaceFromServer, openConflict };
 }

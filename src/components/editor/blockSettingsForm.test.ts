@@ -1,0 +1,41 @@
+import { describe, expect, it } from 'vitest';
+import { applyCommand } from '../../../shared/design/commands.ts';
+import type { Design } from '../../../shared/design/design.schema.ts';
+import { defaultOf, settingCommand } from './blockSettingsForm.ts';
+
+const block: Design = { version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [], edgeTravel: true, thread: { spi: 12 } };
+
+describe('settingCommand', () => {
+  it('sets the batting spacing as one setThread command and keeps the other thread settings', () => {
+    const r = settingCommand(block, 'battingSpacing', '2');
+    expect(r).toEqual({ ok: true, command: { kind: 'setThread', thread: { spi: 12, battingSpacing: 2 } } });
+  });
+
+  it('empty text goes back to the default; the last setting removed clears the thread settings', () => {
+    expect(settingCommand(block, 'spi', ' ')).toEqual({ ok: true, command: { kind: 'setThread', thread: null } });
+  });
+
+  it('unchanged value commits nothing', () => {
+    expect(settingCommand(block, 'spi', '12')).toEqual({ ok: true, command: null });
+  });
+
+  it('refuses what the schema refuses, with a message and no command', () => {
+    expect(settingCommand(block, 'spi', '2').ok).toBe(false); // schema: SPI 4–30
+    expect(settingCommand(block, 'bindingBand', '-1').ok).toBe(false);
+    expect(settingCommand(block, 'tieOffTail', 'abc').ok).toBe(false);
+  });
+
+  it('binding band goes through setBindingBand and undoes to the default', () => {
+    const r = settingCommand(block, 'bindingBand', '0.25');
+    if (!r.ok || !r.command) throw new Error('expected a command');
+    const applied = applyCommand(block, r.command);
+    expect(applied.design.bindingBand).toBe(0.25);
+    expect(applyCommand(applied.design, applied.inverse).design.bindingBand).toBeUndefined();
+  });
+
+  it('defaults: 1/8 in binding band is 0.3175 cm (1 in = 2.54 cm exactly, NIST SP 811); SPI default is from memory', () => {
+    expect(defaultOf('bindingBand', { units: 'cm' }).value).toBeCloseTo(0.3175, 10);
+    expect(defaultOf('spi', block)).toEqual({ value: 10, fromMemory: true });
+    expect(defaultOf('battingSpacing', block).value).toBeNull();
+  });
+});

@@ -1,0 +1,64 @@
+import { applyCommand, type DesignCommand } from '../../../shared/design/commands.ts';
+import { bindingBandOf, designSchema, type Design, type ThreadSettings } from '../../../shared/design/design.schema.ts';
+import { THREAD_DEFAULTS } from '../../../shared/route/threadBudget.ts';
+
+/** A number the quilter may set for the block; `thread` keys live in `design.thread`, `bindingBand` on the design. */
+export type BlockSettingKey = keyof ThreadSettings | 'bindingBand';
+
+export interface BlockSettingField {
+  readonly key: BlockSettingKey;
+  readonly label: string;
+  /** 'design' = the design's own units; otherwise a fixed unit shown after the label. */
+  readonly unit: 'design' | 'in' | 'yd' | 'stitches/min' | 'per inch';
+  readonly step: string;
+}
+
+export const BLOCK_SETTING_FIELDS: readonly BlockSettingField[] = [
+  { key: 'battingSpacing', label: 'Batting spacing limit', unit: 'design', step: 'any' },
+  { key: 'spi', label: 'Stitches per inch (SPI)', unit: 'per inch', step: '1' },
+  { key: 'sandwichThickness', label: 'Sandwich thickness', unit: 'in', step: 'any' },
+  { key: 'tieOffTail', label: 'Tie-off tail', unit: 'in', step: 'any' },
+  { key: 'bobbinCapacity', label: 'Bobbin capacity', unit: 'yd', step: 'any' },
+  { key: 'stitchesPerMinute', label: 'Sewing speed', unit: 'stitches/min', step: '10' },
+  { key: 'bindingBand', label: 'Binding band width', unit: 'design', step: 'any' },
+];
+
+/** The value the route check uses when the field is empty, and whether that default is from memory. */
+export function defaultOf(key: BlockSettingKey, design: Pick<Design, 'units' | 'bindingBand'>): { readonly value: number | null; readonly fromMemory: boolean } {
+  if (key === 'bindingBand') return { value: bindingBandOf({ units: design.units }), fromMemory: false };
+  if (key === 'battingSpacing') return { value: null, fromMemory: false };
+  const d = THREAD_DEFAULTS[key];
+  return { value: d.value, fromMemory: d.source.startsWith('from memory') };
+}
+
+/** The design's own value for the field, or null when it uses the default. */
+export function ownValueOf(key: BlockSettingKey, design: Design): number | null {
+  if (key === 'bindingBand') return design.bindingBand ?? null;
+  return design.thread?.[key] ?? null;
+}
+
+export type SettingInput = { readonly ok: true; readonly command: DesignCommand | null } | { readonly ok: false; readonly message: string };
+
+/**
+ * Turns what the quilter typed into ONE command (or null when nothing changes), validated with the design
+ * schema: empty text goes back to the default; text that is not a number, or a number the schema refuses,
+ * gives a message and no command.
+ */
+export function settingCommand(design: Design, key: BlockSettingKey, text: string): SettingInput {
+  const trimmed = text.trim();
+  const value = trimmed === '' ? null : Number(trimmed);
+  if (value !== null && !Number.isFinite(value)) return { ok: false, message: 'Enter a number, or leave it empty for the default.' };
+  if (value === ownValueOf(key, design)) return { ok: true, command: null };
+  const command = key === 'bindingBand' ? { kind: 'setBindingBand' as const, value } : threadCommand(design.thread ?? {}, key, value);
+  const checked = designSchema.safeParse(applyCommand(design, command).design);
+  if (checked.success) return { ok: true, command };
+  const issue = checked.error.issues[0];
+  return { ok: false, message: issue ? `Not accepted: ${issue.message.toLowerCase()}.` : 'Not accepted.' };
+}
+
+function threadCommand(thread: ThreadSettings, key: keyof ThreadSettings, value: number | null): DesignCommand {
+  const next: Record<string, number> = {};
+  for (const [k, v] of Object.entries(thread)) if (k !== key && v !== undefined) next[k] = v;
+  if (value !== null) next[key] = value;
+  return { kind: 'setThread', thread: Object.keys(next).length > 0 ? (next as ThreadSettings) : null };
+}

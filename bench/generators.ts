@@ -5,18 +5,10 @@
  */
 import type { Design } from '../shared/design/design.schema.ts';
 import type { Point, Polyline } from '../shared/geometry/point.ts';
+import { seededRandom } from '../shared/seededRandom.ts';
 
-/** mulberry32: a small 32-bit seeded PRNG (Tommy Ettinger's public-domain generator), uniform in [0, 1). */
-export function mulberry32(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+/** mulberry32 (see shared/seededRandom.ts), under the name the benches and reference tests use. */
+export const mulberry32 = seededRandom;
 
 function block(lines: Polyline[], seams: Polyline[], edgeTravel: boolean, size = 12): Design {
   return { version: 1, units: 'in', width: size, height: size, seams, lines, edgeTravel };

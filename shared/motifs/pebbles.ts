@@ -4,7 +4,7 @@ import type { Point } from '../geometry/point.ts';
 import type { Polygon } from '../layouts/patch.ts';
 import { chordErrorSchema, positiveNumber, type MotifLines } from './motif.types.ts';
 import { distanceToOutline, isInsideOrOn } from './polygon.ts';
-import { seededRandom } from './seededRandom.ts';
+import { seededRandom } from '../seededRandom.ts';
 
 export const pebblesParamsSchema = z
   .object({

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import blossomFixed from 'edmonds-blossom-fixed';
 import { findMinCostPerfectMatching } from './minWeightMatching.ts';
-import { makeRandom } from './testRandom.ts';
+import { seededRandom as makeRandom } from '../seededRandom.ts';
 
 /**
  * Independent exact oracle: bitmask DP over subsets, f(mask) = min_j c(i,j) + f(mask∖{i,j}) with i the lowest

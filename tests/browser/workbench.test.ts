@@ -154,6 +154,7 @@ describe('block workbench', () => {
     await page.getByRole('button', { name: 'Go back to version 1' }).click();
     await page.waitForFunction(() => / 0 quilting lines/.test(document.querySelector('[data-testid="block-canvas"]')?.getAttribute('aria-label') ?? ''));
     await page.getByText(/Went back to version 1/).waitFor();
+    expect(await page.getByLabel('Batting spacing limit (in)').inputValue()).toBe('');
     await screenshot(page, 'workbench-06d-settings-and-versions');
 
     await page.setViewportSize({ width: 834, height: 1112 });

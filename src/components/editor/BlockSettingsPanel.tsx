@@ -7,17 +7,19 @@ export interface BlockSettingsPanelProps {
   readonly design: Design;
   /** Every change goes through the shared history as ONE command. */
   readonly dispatch: (cmd: DesignCommand) => void;
+  /** Bumped when the document is replaced wholesale (reload, going back): drafts and messages are dropped. */
+  readonly generation: number;
 }
 
 /** Batting, thread and edge numbers the route check and thread budget use; empty fields use the default. */
-export function BlockSettingsPanel({ design, dispatch }: BlockSettingsPanelProps) {
+export function BlockSettingsPanel({ design, dispatch, generation }: BlockSettingsPanelProps) {
   return (
     <details className="rounded border border-muslin-300 bg-white p-3 text-sm">
       <summary className="cursor-pointer font-semibold">Block settings</summary>
       <p className="mt-1 text-xs text-denim-700">Leave a field empty to use the default. Press Enter or leave the field to apply.</p>
       <div className="mt-2 flex flex-col gap-2">
         {BLOCK_SETTING_FIELDS.map((f) => (
-          <SettingInput key={f.key} field={f} design={design} dispatch={dispatch} />
+          <SettingInput key={f.key} field={f} design={design} dispatch={dispatch} generation={generation} />
         ))}
         <label className="flex items-center gap-2">
           <input type="checkbox" checked={design.edgeTravel} onChange={(e) => dispatch({ kind: 'setEdgeTravel', value: e.target.checked })} />
@@ -28,7 +30,7 @@ export function BlockSettingsPanel({ design, dispatch }: BlockSettingsPanelProps
   );
 }
 
-function SettingInput({ field, design, dispatch }: { field: BlockSettingField; design: Design; dispatch: (cmd: DesignCommand) => void }) {
+function SettingInput({ field, design, dispatch, generation }: { field: BlockSettingField; design: Design; dispatch: (cmd: DesignCommand) => void; generation: number }) {
   const id = useId();
   const own = ownValueOf(field.key, design);
   const [text, setText] = useState(own === null ? '' : String(own));
@@ -37,7 +39,7 @@ function SettingInput({ field, design, dispatch }: { field: BlockSettingField; d
   useEffect(() => {
     setText(own === null ? '' : String(own));
     setMessage(null);
-  }, [own]);
+  }, [own, generation]);
   const d = defaultOf(field.key, design);
   const unit = field.unit === 'design' ? design.units : field.unit;
   const hint = d.value === null ? 'No default: set it to compare gaps.' : `Default ${d.value} ${unit}${d.fromMemory ? ' (default, from memory)' : ' (default)'}`;

@@ -280,7 +280,7 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
             />
           )}
           <RouteCheckPanel check={check.check} state={check.state} message={check.message} units={design.units} />
-          <BlockSettingsPanel design={design} dispatch={history.dispatch} />
+          <BlockSettingsPanel design={design} dispatch={history.dispatch} generation={doc.generation} />
           <RoutePanel routes={routes} player={player} units={design.units} canKeep={doc.status.kind === 'saved'} hasOwnRoute={Boolean(own)} onClearOwn={() => { ctl.clearOwnOrder(); history.dispatch({ kind: 'setRoute', route: null }); }} />
           <SavedVersionsPanel designId={designId} baseVersion={doc.version} canGoBack={doc.status.kind === 'saved'} onRestored={doc.replaceFromServer} onConflict={doc.openConflict} />
         </aside>

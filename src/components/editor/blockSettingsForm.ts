@@ -9,13 +9,13 @@ export interface BlockSettingField {
   readonly key: BlockSettingKey;
   readonly label: string;
   /** 'design' = the design's own units; otherwise a fixed unit shown after the label. */
-  readonly unit: 'design' | 'in' | 'yd' | 'stitches/min' | 'per inch';
+  readonly unit: 'design' | 'in' | 'yd' | 'stitches/min' | 'SPI';
   readonly step: string;
 }
 
 export const BLOCK_SETTING_FIELDS: readonly BlockSettingField[] = [
   { key: 'battingSpacing', label: 'Batting spacing limit', unit: 'design', step: 'any' },
-  { key: 'spi', label: 'Stitches per inch (SPI)', unit: 'per inch', step: '1' },
+  { key: 'spi', label: 'Stitches per inch', unit: 'SPI', step: '1' },
   { key: 'sandwichThickness', label: 'Sandwich thickness', unit: 'in', step: 'any' },
   { key: 'tieOffTail', label: 'Tie-off tail', unit: 'in', step: 'any' },
   { key: 'bobbinCapacity', label: 'Bobbin capacity', unit: 'yd', step: 'any' },

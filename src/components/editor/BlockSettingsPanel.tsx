@@ -42,7 +42,7 @@ function SettingInput({ field, design, dispatch, generation }: { field: BlockSet
   }, [own, generation]);
   const d = defaultOf(field.key, design);
   const unit = field.unit === 'design' ? design.units : field.unit;
-  const hint = d.value === null ? 'No default: set it to compare gaps.' : `Default ${d.value} ${unit}${d.fromMemory ? ' (default, from memory)' : ' (default)'}`;
+  const hint = d.value === null ? 'No default: set it to compare gaps.' : `Default ${d.value} ${unit}${d.fromMemory ? ' (from memory)' : ''}`;
 
   function commit() {
     const r = settingCommand(design, field.key, text);

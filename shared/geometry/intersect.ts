@@ -1,5 +1,6 @@
 import { orient2d } from 'robust-predicates';
 import type { Point } from './point.ts';
+import { pointSegmentDistanceSquared } from './distance.ts';
 
 /** Which segment end a contact sits on, or null for a proper crossing of two interiors. */
 export type SegmentEnd = 'a0' | 'a1' | 'b0' | 'b1';
@@ -88,10 +89,10 @@ export function intersectSegmentsInto(
 ): number {
   const tol2 = tolerance * tolerance;
   let n = 0;
-  if (distanceSquared(ax0, ay0, bx0, by0, bx1, by1) <= tol2) n = put(out, n, END_A0, 0, parameter(ax0, ay0, bx0, by0, bx1, by1), ax0, ay0);
-  if (distanceSquared(ax1, ay1, bx0, by0, bx1, by1) <= tol2) n = put(out, n, END_A1, 1, parameter(ax1, ay1, bx0, by0, bx1, by1), ax1, ay1);
-  if (distanceSquared(bx0, by0, ax0, ay0, ax1, ay1) <= tol2) n = put(out, n, END_B0, parameter(bx0, by0, ax0, ay0, ax1, ay1), 0, bx0, by0);
-  if (distanceSquared(bx1, by1, ax0, ay0, ax1, ay1) <= tol2) n = put(out, n, END_B1, parameter(bx1, by1, ax0, ay0, ax1, ay1), 1, bx1, by1);
+  if (pointSegmentDistanceSquared(ax0, ay0, bx0, by0, bx1, by1) <= tol2) n = put(out, n, END_A0, 0, parameter(ax0, ay0, bx0, by0, bx1, by1), ax0, ay0);
+  if (pointSegmentDistanceSquared(ax1, ay1, bx0, by0, bx1, by1) <= tol2) n = put(out, n, END_A1, 1, parameter(ax1, ay1, bx0, by0, bx1, by1), ax1, ay1);
+  if (pointSegmentDistanceSquared(bx0, by0, ax0, ay0, ax1, ay1) <= tol2) n = put(out, n, END_B0, parameter(bx0, by0, ax0, ay0, ax1, ay1), 0, bx0, by0);
+  if (pointSegmentDistanceSquared(bx1, by1, ax0, ay0, ax1, ay1) <= tol2) n = put(out, n, END_B1, parameter(bx1, by1, ax0, ay0, ax1, ay1), 1, bx1, by1);
   for (let k = 1; k < n; k++) {
     const o = k * CONTACT_STRIDE;
     const dx = out[o + 3]! - out[3]!;
@@ -152,15 +153,3 @@ function parameter(px: number, py: number, ax: number, ay: number, bx: number, b
   return t < 0 ? 0 : t > 1 ? 1 : t;
 }
 
-/** Squared distance from p to the segment a–b; as pointSegmentDistanceSquared. */
-function distanceSquared(px: number, py: number, ax: number, ay: number, bx: number, by: number): number {
-  const dx = bx - ax;
-  const dy = by - ay;
-  const len2 = dx * dx + dy * dy;
-  let t = len2 === 0 ? 0 : ((px - ax) * dx + (py - ay) * dy) / len2;
-  if (t < 0) t = 0;
-  else if (t > 1) t = 1;
-  const ex = ax + t * dx - px;
-  const ey = ay + t * dy - py;
-  return ex * ex + ey * ey;
-}

@@ -1,7 +1,7 @@
 import type { Point } from '../geometry/point.ts';
 import type { Polygon } from '../layouts/patch.ts';
 import { buildAxisFrame, type AxisFrame } from './axisFrame.ts';
-import { insetConvex } from './echo.ts';
+import { insetConvex } from './inset.ts';
 import { extentAlong, isConvex, orientedPositive, toleranceFor } from './polygon.ts';
 
 /**

@@ -4,15 +4,19 @@ import type { Polygon } from '../layouts/patch.ts';
 import { halfTurnAt, halfTurnSteps } from './axisFrame.ts';
 import { clipPolyline } from './clip.ts';
 import { buildLoopBand, type LoopBand } from './loopBand.ts';
-import { chordErrorSchema, positiveNumber, type MotifLines } from './motif.types.ts';
+import { chordErrorSchema, positiveNumber, separateSchema, type MotifLines } from './motif.types.ts';
+import { foldedRibbon } from './ribbonFolds.ts';
 import { directionOf, longAxisAngle } from './polygon.ts';
 
 export const ribbonCandyParamsSchema = z
   .object({
     kind: z.literal('ribbon-candy'),
-    /** Length of one loop along the axis, design units (rounded so the loops fill the axis exactly). */
+    /**
+     * Length of one loop along the axis, design units (rounded so the loops fill the axis exactly). Joined
+     * ribbon candy advances one pitch per stroke from side to side.
+     */
     pitch: positiveNumber,
-    /** Clear distance kept from the outline, design units. */
+    /** Separate ribbon candy only: clear distance kept from the outline, design units (joined candy turns on the sides). */
     margin: z.number().finite().min(0).default(0),
     /**
      * Axis direction in degrees. By default a triangle runs square from the side facing its point to the
@@ -21,6 +25,7 @@ export const ribbonCandyParamsSchema = z
      */
     angle: z.number().finite().optional(),
     chordError: chordErrorSchema,
+    separate: separateSchema,
   })
   .strict();
 export type RibbonCandyParams = z.output<typeof ribbonCandyParamsSchema>;
@@ -45,7 +50,21 @@ function planLoops(length: number, pitch: number, pointed: boolean): LoopPlan {
 }
 
 /**
- * Ribbon candy: one continuous line of loops swinging alternately to the left and right of the patch's
+ * Ribbon candy. Joined (the default): strokes from side to side whose turns touch the patch's sides and fold
+ * back on themselves (see `foldedRibbon`), so the line meets the seams or the edge at every turn. Separate
+ * (the older look): loops swinging left and right of the centre line, kept `margin` clear of the outline
+ * (see `separateLoops`).
+ */
+export function generateRibbonCandy(polygon: Polygon, params: RibbonCandyParams): MotifLines {
+  if (!params.separate) {
+    const band = chooseBand(polygon, { ...params, margin: 0 });
+    return { lines: band ? foldedRibbon(polygon, band, params.pitch, params.chordError) : [] };
+  }
+  return separateLoops(polygon, params);
+}
+
+/**
+ * Separate ribbon candy: one continuous line of loops swinging alternately to the left and right of the patch's
  * centre line while it moves along the axis. Loop k spans one slot [u_k, u_k+1] (pitch rounded to fill
  * the axis) and is half an ellipse standing on the centre line, as tall as the room allows (`LoopBand` keeps
  * the margin). So the loops grow where the patch widens and shrink where it
@@ -54,7 +73,7 @@ function planLoops(length: number, pitch: number, pointed: boolean): LoopPlan {
  * side to where it began (see `LoopPlan` for its length). The line is finally clipped to the patch, which
  * leaves it whole in a convex patch.
  */
-export function generateRibbonCandy(polygon: Polygon, params: RibbonCandyParams): MotifLines {
+function separateLoops(polygon: Polygon, params: RibbonCandyParams): MotifLines {
   const band = chooseBand(polygon, params);
   if (!band) return { lines: [] };
   const plan = planLoops(band.end - band.start, params.pitch, band.pointedEnd);
@@ -73,7 +92,7 @@ export function generateRibbonCandy(polygon: Polygon, params: RibbonCandyParams)
 }
 
 /** The band along the given axis, or along the default axis turned to end in a point. */
-function chooseBand(polygon: Polygon, params: RibbonCandyParams): LoopBand | null {
+function chooseBand(polygon: Polygon, params: Pick<RibbonCandyParams, 'angle' | 'margin'>): LoopBand | null {
   if (params.angle !== undefined) return buildLoopBand(polygon, directionOf(params.angle), params.margin);
   const angle = polygon.length === 3 ? baseToPointAngle(polygon) : longAxisAngle(polygon);
   const band = buildLoopBand(polygon, directionOf(angle), params.margin);

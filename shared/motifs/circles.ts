@@ -53,3 +53,40 @@ export function lensArea(p: Circle, q: Circle): number {
   const beta = Math.acos(Math.max(-1, Math.min(1, (d * d + s * s - r * r) / (2 * d * s))));
   return r * r * (alpha - Math.sin(2 * alpha) / 2) + s * s * (beta - Math.sin(2 * beta) / 2);
 }
+
+/**
+ * Area of the union of discs, exactly: by Green's theorem the area is ½∮(x dy − y dx) over the union's
+ * boundary, which is made of arcs of the circles lying outside every other disc. On circle (c, r) the arc
+ * from θ₁ to θ₂ contributes ½[r²(θ₂ − θ₁) + r(c_x(sin θ₂ − sin θ₁) − c_y(cos θ₂ − cos θ₁))]. `near(i)` lists
+ * the discs that may overlap disc i (a superset is fine).
+ */
+export function unionArea(discs: readonly Circle[], near: (i: number) => Iterable<number>): number {
+  let area = 0;
+  discs.forEach((p, i) => {
+    const { center: [cx, cy], radius: r } = p;
+    const cuts: number[] = [0, 2 * Math.PI];
+    const others: Circle[] = [];
+    let hidden = false;
+    for (const j of near(i)) {
+      if (j === i) continue;
+      const q = discs[j]!;
+      const d = Math.hypot(q.center[0] - cx, q.center[1] - cy);
+      if (d >= r + q.radius) continue;
+      // Inside another disc (the earlier of two equal ones keeps the boundary).
+      if (d + r <= q.radius && (d + r < q.radius || j < i)) hidden = true;
+      others.push(q);
+      for (const x of circleCircle(p, q)) cuts.push((Math.atan2(x[1] - cy, x[0] - cx) + 2 * Math.PI) % (2 * Math.PI));
+    }
+    if (hidden) return;
+    cuts.sort((a, b) => a - b);
+    for (let k = 1; k < cuts.length; k++) {
+      const [t1, t2] = [cuts[k - 1]!, cuts[k]!];
+      if (t2 - t1 <= 0) continue;
+      const mid = (t1 + t2) / 2;
+      const m: Point = [cx + r * Math.cos(mid), cy + r * Math.sin(mid)];
+      if (others.some((q) => Math.hypot(m[0] - q.center[0], m[1] - q.center[1]) < q.radius)) continue;
+      area += 0.5 * (r * r * (t2 - t1) + r * (cx * (Math.sin(t2) - Math.sin(t1)) - cy * (Math.cos(t2) - Math.cos(t1))));
+    }
+  });
+  return area;
+}

@@ -3,9 +3,10 @@ import type { Point } from '../geometry/point.ts';
 import { generatePebbles, packPebbles } from './pebbles.ts';
 import { distanceToOutline, isInsideOrOn } from './polygon.ts';
 
-const params = { kind: 'pebbles' as const, minRadius: 0.2, maxRadius: 0.6, gap: 0.05, seed: 7, chordError: 0.005 };
+// The separate (older) look: disjoint pebbles `gap` apart. Joined pebbles are tested in pebbleChain.test.ts.
+const params = { kind: 'pebbles' as const, minRadius: 0.2, maxRadius: 0.6, gap: 0.05, overlap: 0, seed: 7, chordError: 0.005, separate: true };
 
-describe('motifs/pebbles', () => {
+describe('motifs/pebbles (separate)', () => {
   const shapes: Point[][] = [
     [[0, 0], [6, 0], [6, 6], [0, 6]],
     [[0, 0], [8, 0], [0, 5]],

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { Point, Polyline } from '../geometry/point.ts';
 import { signedArea, type Polygon } from '../layouts/patch.ts';
 import { seededRandom } from '../seededRandom.ts';
-import { circleCircle, lensArea } from './circles.ts';
+import { circleCircle, unionArea } from './circles.ts';
 import { chordErrorSchema, positiveNumber, separateSchema, type MotifLines } from './motif.types.ts';
 import { packPebbleChain, PebbleGrid, sidesOf, type Pebble } from './pebblePack.ts';
 import { distanceToOutline, isInsideOrOn, orientedPositive, toleranceFor } from './polygon.ts';
@@ -51,12 +51,15 @@ export function generatePebbles(polygon: Polygon, params: PebblesParams): MotifL
   return { lines, coveredFraction: coveredFraction(polygon, pebbles) };
 }
 
-/** Share of the patch covered by the pebbles: Σ disc areas less each overlapping pair's lens. */
+/** Share of the patch the pebbles cover: the exact area of their union (see `unionArea`) over the patch's. */
 export function coveredFraction(polygon: Polygon, pebbles: readonly Pebble[]): number {
-  let covered = 0;
-  for (const p of pebbles) covered += Math.PI * p.radius * p.radius;
-  forNearPairs(pebbles, (p, q) => (covered -= lensArea(p, q)));
-  return covered / Math.abs(signedArea(polygon));
+  if (pebbles.length === 0) return 0;
+  const maxR = Math.max(...pebbles.map((p) => p.radius));
+  const grid = new PebbleGrid(2 * maxR);
+  const index = new Map(pebbles.map((p, i) => [p, i]));
+  pebbles.forEach((p) => grid.add(p));
+  const near = (i: number) => grid.near(pebbles[i]!.center, pebbles[i]!.radius + maxR).map((q) => index.get(q)!);
+  return unionArea(pebbles, near) / Math.abs(signedArea(polygon));
 }
 
 /**

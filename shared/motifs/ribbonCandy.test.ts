@@ -5,9 +5,11 @@ import { signedArea } from '../layouts/patch.ts';
 import { generateArches } from './arches.ts';
 import { generateRibbonCandy } from './ribbonCandy.ts';
 
-const base = { kind: 'ribbon-candy' as const, margin: 0, chordError: 0.005 };
+// These tests pin the separate (older) look: loops kept `margin` clear of the outline. Joined ribbon candy,
+// the default, is tested in ribbonFolds.test.ts.
+const base = { kind: 'ribbon-candy' as const, margin: 0, chordError: 0.005, separate: true };
 
-describe('motifs/ribbonCandy', () => {
+describe('motifs/ribbonCandy (separate)', () => {
   it('fills a 12 × 4 strip with one line of 12 loops alternating about the centre line', () => {
     const strip: Point[] = [[0, 0], [12, 0], [12, 4], [0, 4]];
     const { lines } = generateRibbonCandy(strip, { ...base, pitch: 1, margin: 0.25 });
@@ -54,7 +56,7 @@ function splitLoops(line: readonly Point[], axisX: number): { regular: Point[][]
 /** A loop's size: how far it swings across the axis (extent in x here). */
 const across = (loop: readonly Point[]): number => Math.max(...loop.map((p) => p[0])) - Math.min(...loop.map((p) => p[0]));
 
-describe('motifs/ribbonCandy in a triangle: loops sized to the width, one big loop in the point', () => {
+describe('motifs/ribbonCandy (separate) in a triangle: loops sized to the width, one big loop in the point', () => {
   it('is one continuous line from the middle of the base, loop after loop, closing its final loop in the point', () => {
     const { lines } = generateRibbonCandy(ISO, { ...base, pitch: 0.5, margin: M });
     expect(lines.length).toBe(1);
@@ -157,7 +159,7 @@ describe('motifs/ribbonCandy in a triangle: loops sized to the width, one big lo
   });
 });
 
-describe('motifs/ribbonCandy: one continuous line (fast-check, seeded)', () => {
+describe('motifs/ribbonCandy (separate): one continuous line (fast-check, seeded)', () => {
   it('comes back from the clip as a single polyline in any triangle or rectangle, any pitch, margin and axis', () => {
     const coord = fc.double({ min: 0, max: 20, noNaN: true });
     const point = fc.tuple(coord, coord) as fc.Arbitrary<Point>;
@@ -186,10 +188,10 @@ describe('motifs/ribbonCandy: one continuous line (fast-check, seeded)', () => {
   });
 });
 
-describe('motifs/arches', () => {
+describe('motifs/arches (separate)', () => {
   it('draws one continuous row per base line, arch tops one row spacing up', () => {
     const rect: Point[] = [[0, 0], [6, 0], [6, 4], [0, 4]];
-    const { lines } = generateArches(rect, { kind: 'arches', archWidth: 1, rowSpacing: 1, angle: 0, chordError: 0.005 });
+    const { lines } = generateArches(rect, { kind: 'arches', archWidth: 1, rowSpacing: 1, angle: 0, chordError: 0.005, separate: true });
     expect(lines.length).toBe(4);
     lines.forEach((row, r) => {
       const baseY = r + 1;

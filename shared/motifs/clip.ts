@@ -1,7 +1,7 @@
 import { intersectSegments } from '../geometry/intersect.ts';
 import type { Point, Polyline } from '../geometry/point.ts';
 import type { Polygon } from '../layouts/patch.ts';
-import { isInsideOrOn, toleranceFor } from './polygon.ts';
+import { distanceToOutline, isInsideOrOn, toleranceFor } from './polygon.ts';
 
 /**
  * Clips a polyline to a simple polygon (convex or not; closed set: pieces running along the outline
@@ -49,6 +49,8 @@ export function clipLines(lines: readonly Polyline[], polygon: Polygon): Polylin
 function cutParameters(a: Point, b: Point, polygon: Polygon, tol: number): number[] {
   const ts = [0, 1];
   const len = Math.hypot(b[0] - a[0], b[1] - a[1]);
+  // A segment shorter than a's distance to the outline cannot meet it (the common case, and a cheap test).
+  if (distanceToOutline(a, polygon) > len + 2 * tol) return ts;
   for (let i = 0; i < polygon.length; i++) {
     const hit = intersectSegments(a, b, polygon[i]!, polygon[(i + 1) % polygon.length]!, tol);
     for (const c of hit.contacts) ts.push(c.t);

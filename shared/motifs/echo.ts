@@ -78,16 +78,8 @@ export function buildEchoRings(polygon: Polygon, spacing: number, maxCount: numb
  * Separate: closed rings only, no legs and no half-step echo (the older look).
  */
 export function generateEcho(polygon: Polygon, params: EchoParams): MotifLines {
-  const outline = orientedPositive(polygon);
-  const rings = buildEchoRings(outline, params.spacing, params.maxCount, !params.separate);
+  const { rings, legs } = planEcho(polygon, params);
   if (params.separate) return { lines: rings.map((r) => [...r.points, r.points[0]!]) };
-  const corner = widestCorner(outline);
-  const along: Point = unit(outline[corner]!, outline[(corner + 1) % outline.length]!);
-  const legs: Leg[] = rings.map((r) => {
-    const around = r.parent < 0 ? outline : rings[r.parent]!.points;
-    const step = (r.depth - (r.parent < 0 ? 0 : rings[r.parent]!.depth)) * params.spacing;
-    return attachLeg(r.points, around, outline[corner]!, along, step);
-  });
   const children = rings.map((_, i) => rings.map((r, j) => (r.parent === i ? j : -1)).filter((j) => j >= 0));
   const lines: Polyline[] = [];
   const emit = (i: number, line: Point[]): void => {
@@ -107,6 +99,21 @@ export function generateEcho(polygon: Polygon, params: EchoParams): MotifLines {
     if (r.parent < 0) emit(i, [legs[i]!.from.point, legs[i]!.on.point]);
   });
   return { lines };
+}
+
+/** The echo rings and, unless `separate`, each ring's step-over leg (legs[i] joins ring i to its parent). */
+export function planEcho(polygon: Polygon, params: EchoParams): { rings: EchoRing[]; legs: Leg[] } {
+  const outline = orientedPositive(polygon);
+  const rings = buildEchoRings(outline, params.spacing, params.maxCount, !params.separate);
+  if (params.separate) return { rings, legs: [] };
+  const corner = widestCorner(outline);
+  const along: Point = unit(outline[corner]!, outline[(corner + 1) % outline.length]!);
+  const legs = rings.map((r) => {
+    const around = r.parent < 0 ? outline : rings[r.parent]!.points;
+    const step = (r.depth - (r.parent < 0 ? 0 : rings[r.parent]!.depth)) * params.spacing;
+    return attachLeg(r.points, around, outline[corner]!, along, step);
+  });
+  return { rings, legs };
 }
 
 /** Index of the outline corner with the widest interior angle below 180° (the first such on ties). */

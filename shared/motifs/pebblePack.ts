@@ -40,13 +40,10 @@ export function packPebbleChain(polygon: Polygon, options: ChainPackOptions): Pe
   const grid = new PebbleGrid(2 * options.maxRadius);
   const sides = sidesOf(outline);
   const reflex = reflexCorners(outline);
-  const fits = (c: Point, r: number): boolean => {
-    if (!isInsideOrOn(c, outline, 0) || distanceToOutline(c, outline) < r - eps) return false;
-    for (const p of grid.near(c, r + options.maxRadius)) {
-      if (Math.hypot(c[0] - p.center[0], c[1] - p.center[1]) < r + p.radius - options.overlap - eps) return false;
-    }
-    return true;
-  };
+  const fits = (c: Point, r: number): boolean =>
+    !grid.some(c, r + options.maxRadius, (p) => Math.hypot(c[0] - p.center[0], c[1] - p.center[1]) < r + p.radius - options.overlap - eps) &&
+    distanceToOutline(c, outline) >= r - eps &&
+    isInsideOrOn(c, outline, 0);
 
   const first = placeFirst(outline, sides, drawRadius(), options.minRadius, fits);
   if (!first) return [];
@@ -88,8 +85,10 @@ export function packPebbleChain(polygon: Polygon, options: ChainPackOptions): Pe
     }
     for (const v of reflex) candidates.push(...circleCircle(around, { center: v, radius: r }));
     // Nearest the first pebble first; the first that fits wins (fits is the costly test).
-    const ranked = candidates.map((c) => ({ c, d: Math.hypot(c[0] - seedPoint[0], c[1] - seedPoint[1]) })).sort((x, y) => x.d - y.d);
-    const best = ranked.find((x) => fits(x.c, r))?.c ?? null;
+    const far = candidates.map((c) => Math.hypot(c[0] - seedPoint[0], c[1] - seedPoint[1]));
+    const order = candidates.map((_, i) => i).sort((x, y) => far[x]! - far[y]!);
+    const found = order.find((i) => fits(candidates[i]!, r));
+    const best = found === undefined ? null : candidates[found]!;
     return best ? { center: best, radius: r } : null;
   }
 }
@@ -176,6 +175,20 @@ export class PebbleGrid {
     const list = this.#cells.get(key);
     if (list) list.push(p);
     else this.#cells.set(key, [p]);
+  }
+  /** Whether `test` holds for some pebble whose centre may lie within `reach` of c (stops at the first). */
+  some(c: Point, reach: number, test: (p: Pebble) => boolean): boolean {
+    const i0 = Math.floor((c[0] - reach) / this.#cell);
+    const i1 = Math.floor((c[0] + reach) / this.#cell);
+    const j0 = Math.floor((c[1] - reach) / this.#cell);
+    const j1 = Math.floor((c[1] + reach) / this.#cell);
+    for (let i = i0; i <= i1; i++) {
+      for (let j = j0; j <= j1; j++) {
+        const list = this.#cells.get(this.#key(i, j));
+        if (list) for (const p of list) if (test(p)) return true;
+      }
+    }
+    return false;
   }
   /** Pebbles whose centres may lie within `reach` of c (a superset). */
   near(c: Point, reach: number): Pebble[] {

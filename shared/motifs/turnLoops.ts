@@ -51,11 +51,14 @@ export function arcPoints(turn: Turn, from: Point, to: Point, chordError: number
   const steps = Math.max(2, Math.ceil(sweep / maxStep));
   const touchAt = ahead(angle(turn.touch));
   const out: { at: number; p: Point }[] = [];
+  const touches = touchAt > 0 && touchAt < sweep;
   for (let i = 1; i < steps; i++) {
     const at = (sweep * i) / steps;
+    // A step landing on the touching point (within rounding) gives way to the exact point.
+    if (touches && Math.abs(at - touchAt) < 1e-9) continue;
     const theta = angle(from) + turn.spin * at;
     out.push({ at, p: [cx + r * Math.cos(theta), cy + r * Math.sin(theta)] });
   }
-  if (touchAt > 0 && touchAt < sweep) out.push({ at: touchAt, p: turn.touch });
+  if (touches) out.push({ at: touchAt, p: turn.touch });
   return out.sort((x, y) => x.at - y.at).map((x) => x.p);
 }

@@ -13,7 +13,7 @@ export const ribbonCandyParamsSchema = z
     kind: z.literal('ribbon-candy'),
     /**
      * Length of one loop along the axis, design units (rounded so the loops fill the axis exactly). Joined
-     * ribbon candy advances one pitch per stroke from side to side.
+     * ribbon candy folds once on each side per pitch, so strokes running the same way are one pitch apart.
      */
     pitch: positiveNumber,
     /** Separate ribbon candy only: clear distance kept from the outline, design units (joined candy turns on the sides). */

@@ -11,9 +11,9 @@ const lineDistance = (p: Point, a: Point, b: Point) =>
   Math.abs((b[0] - a[0]) * (p[1] - a[1]) - (b[1] - a[1]) * (p[0] - a[0])) / Math.hypot(b[0] - a[0], b[1] - a[1]);
 
 describe('motifs/ribbonCandy (joined): turns on the sides', () => {
-  it('turns on the two long sides of a 12 × 4 strip, alternately, one pitch apart, folding in a loop between', () => {
+  it('turns on the two long sides of a 12 × 4 strip, alternately, half a pitch apart, folding in a loop between', () => {
     const strip: Point[] = [[0, 0], [12, 0], [12, 4], [0, 4]];
-    const { lines } = generateRibbonCandy(strip, { ...candy, pitch: 1 });
+    const { lines } = generateRibbonCandy(strip, { ...candy, pitch: 2 });
     expect(lines.length).toBe(1);
     const line = lines[0]!;
     // Turn k touches y = 4 (k even) or y = 0 (k odd) at x = k: 13 turns, the ends included.
@@ -39,14 +39,14 @@ describe('motifs/ribbonCandy (joined): turns on the sides', () => {
   it('turns on both legs of a flying-geese goose, the last turn in its point', () => {
     // Goose with its point at (3, 0) and base y = 3; axis from the base to the point (the 90° corner).
     const goose: Point[] = [[0, 3], [3, 0], [6, 3]];
-    const { lines } = generateRibbonCandy(goose, { ...candy, pitch: 0.5 });
+    const { lines } = generateRibbonCandy(goose, { ...candy, pitch: 1 });
     expect(lines.length).toBe(1);
     const line = lines[0]!;
     const left = (p: Point) => lineDistance(p, [0, 3], [3, 0]);
     const right = (p: Point) => lineDistance(p, [3, 0], [6, 3]);
     const onLeft = line.filter((p) => left(p) < 1e-9);
     const onRight = line.filter((p) => right(p) < 1e-9);
-    // Axis length 3 (base to point) at pitch 0.5: 6 strokes, 7 turns: 4 on one leg, 3 on the other (the point on both).
+    // Axis length 3 (base to point) at pitch 1 (two strokes per pitch): 6 strokes, 7 turns: 4 on one leg, 3 on the other (the point on both).
     expect(onLeft.length + onRight.length).toBe(8);
     expect(line[line.length - 1]![0]).toBeCloseTo(3, 9);
     expect(line[line.length - 1]![1]).toBeCloseTo(0, 9);
@@ -55,10 +55,10 @@ describe('motifs/ribbonCandy (joined): turns on the sides', () => {
 
   it('touches the outline at every turn in a square and a half-square triangle', () => {
     for (const shape of [[[0, 0], [6, 0], [6, 6], [0, 6]], [[0, 0], [6, 0], [0, 6]]] as Point[][]) {
-      const { lines } = generateRibbonCandy(shape, { ...candy, pitch: 0.75 });
+      const { lines } = generateRibbonCandy(shape, { ...candy, pitch: 1.5 });
       expect(lines.length).toBe(1);
       const onOutline = lines[0]!.filter((p) => distanceToOutline(p, shape) < 1e-9).length;
-      // round(6 / 0.75) = 8 strokes in the square, 9 turns; the triangle's axis is 6/√2 long: round(5.66) = 6 strokes, 7 turns.
+      // round(2·6 / 1.5) = 8 strokes in the square, 9 turns; the triangle's axis is 6/√2 long: round(5.66) = 6 strokes, 7 turns.
       expect(onOutline).toBeGreaterThanOrEqual(shape.length === 4 ? 9 : 7);
     }
   });

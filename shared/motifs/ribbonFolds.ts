@@ -6,16 +6,17 @@ import { distanceToOutline } from './polygon.ts';
 import { arcPoints, tangentBetween, type Turn } from './turnLoops.ts';
 
 /**
- * Radius of a fold loop as a share of the stroke pitch P: loops on one side stand 2P apart, so loops of
- * diameter P leave a loop's width between them (chosen by eye; common practice, no source). A loop is also
+ * Radius of a fold loop as a share of the stroke advance P (half the pitch): loops on one side stand 2P
+ * apart, so loops of diameter P leave a loop's width between them (chosen by eye; common practice, no source). A loop is also
  * kept within a quarter of the patch's width there, and shrinks to fit where the side meets another.
  */
 export const FOLD_RADIUS = 0.5;
 
 /**
  * Ribbon candy whose turns reach the sides, worked in the band's (u, v) frame (u along the axis):
- * turn k touches the side at T_k = (u_k, hi) for even k and (u_k, lo) for odd k, with u_k = start + k·P
- * (P the pitch rounded so the strokes fill the axis). At every turn but the first and the last the line folds
+ * turn k touches the side at T_k = (u_k, hi) for even k and (u_k, lo) for odd k, with u_k = start + k·P,
+ * where P is half the pitch, shortened so a whole number of strokes fills the axis (one pitch: a fold on
+ * each side). At every turn but the first and the last the line folds
  * back on itself: it runs round a loop — a circle tangent to the side at T_k, inside the patch — turning
  * backward, touches the side at T_k and crosses its own stroke before it leaves for the next turn, as a
  * ribbon folded back and forth does. Strokes are the straight common tangents of consecutive loops; the
@@ -25,7 +26,9 @@ export const FOLD_RADIUS = 0.5;
  */
 export function foldedRibbon(polygon: Polygon, band: LoopBand, pitch: number, chordError: number): Polyline[] {
   const length = band.end - band.start;
-  const strokes = Math.max(1, Math.round(length / pitch));
+  // One pitch holds two strokes (a fold on each side); the count is rounded up, so strokes running the same
+  // way stand at most one pitch apart.
+  const strokes = Math.max(1, Math.ceil((2 * length) / pitch - 1e-9));
   const p = length / strokes;
   const turns: Turn[] = [];
   for (let k = 0; k <= strokes; k++) {

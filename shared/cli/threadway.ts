@@ -1,39 +1,54 @@
 /**
  * Threadway command line, for batch use and scripting:
- *   npm run --silent threadway -- check FILE   route check of the design's own `route`
- *   npm run --silent threadway -- plan FILE    the planner's route
- * FILE is a design JSON (shared/design/design.schema.ts). Prints one JSON object to stdout; lengths are in the
- * design's units. A bad file or bad usage prints a message to stderr and exits with code 2.
+ *   npm run --silent threadway -- check FILE          route check of the design's own `route`
+ *   npm run --silent threadway -- plan FILE           the planner's route
+ *   npm run --silent threadway -- fill FILE FILLS     the design with motifs added to its patches
+ * FILE is a design JSON (shared/design/design.schema.ts); FILLS is `{ "fills": [{ "patch": "all" | n, "motif": {…} }] }`
+ * (shared/motifs/fillDesign.ts; patches numbered in reading order). check and plan print one JSON object of
+ * figures, fill prints the filled design (the same schema check and plan read); lengths are in the design's
+ * units. A bad file or bad usage prints a message naming the field to stderr and exits with code 2.
  */
 import { readFileSync } from 'node:fs';
 import { designSchema, type Design } from '../design/design.schema.ts';
+import { fillDesign, fillsSchema, type Fills } from '../motifs/fillDesign.ts';
 import { checkRoute } from '../route/checkRoute.ts';
 import { planDesign } from '../route/planDesign.ts';
 
-const USAGE = 'usage: threadway (check|plan) FILE';
+const USAGE = 'usage: threadway (check|plan) FILE | threadway fill FILE FILLS';
 
 function fail(message: string): never {
   process.stderr.write(`threadway: ${message}\n`);
   process.exit(2);
 }
 
-function readDesign(file: string): Design {
+function readJson(file: string): unknown {
   let text: string;
   try {
     text = readFileSync(file, 'utf8');
   } catch (e) {
     fail(`cannot read ${file}: ${(e as Error).message}`);
   }
-  let json: unknown;
   try {
-    json = JSON.parse(text);
+    return JSON.parse(text);
   } catch (e) {
     fail(`${file} is not valid JSON: ${(e as Error).message}`);
   }
-  const parsed = designSchema.safeParse(json);
+}
+
+function readDesign(file: string): Design {
+  const parsed = designSchema.safeParse(readJson(file));
   if (!parsed.success) {
     const issues = parsed.error.issues.slice(0, 10).map((i) => `  ${i.path.join('.') || '(design)'}: ${i.message}`);
     fail(`${file} is not a valid design:\n${issues.join('\n')}`);
+  }
+  return parsed.data;
+}
+
+function readFills(file: string): Fills {
+  const parsed = fillsSchema.safeParse(readJson(file));
+  if (!parsed.success) {
+    const issues = parsed.error.issues.slice(0, 10).map((i) => `  ${i.path.join('.') || '(fills file)'}: ${i.message}`);
+    fail(`${file} is not a valid fills file:\n${issues.join('\n')}`);
   }
   return parsed.data;
 }
@@ -69,7 +84,15 @@ function check(design: Design): object {
   return { command: 'check', ...c };
 }
 
+function fill(design: Design, fillsFile: string): Design {
+  const filled = fillDesign(design, readFills(fillsFile));
+  if (!filled.ok) fail(`${fillsFile}: ${filled.error.path}: ${filled.error.message}`);
+  return filled.value;
+}
+
 const [command, file, ...rest] = process.argv.slice(2);
-if ((command !== 'check' && command !== 'plan') || file === undefined || rest.length > 0) fail(USAGE);
+const arity = command === 'fill' ? 1 : 0;
+if ((command !== 'check' && command !== 'plan' && command !== 'fill') || file === undefined || rest.length !== arity) fail(USAGE);
 const design = readDesign(file);
-process.stdout.write(`${JSON.stringify(command === 'plan' ? plan(design) : check(design))}\n`);
+const output = command === 'fill' ? fill(design, rest[0]!) : command === 'plan' ? plan(design) : check(design);
+process.stdout.write(`${JSON.stringify(output)}\n`);

@@ -21,7 +21,7 @@ export interface JoinLeg {
   readonly toEnd: JoinEnd;
 }
 
-/** The shortest connection found between two neighbouring line groups. */
+/** The shortest connection found between two neighbouring passes (line groups not yet joined by travel). */
 export interface JoinProposal {
   /** Indices into `JoinSuggestions.groups`. */
   readonly groups: readonly [number, number];
@@ -31,12 +31,15 @@ export interface JoinProposal {
   readonly legs: readonly JoinLeg[];
   /** True when some leg is a new line the quilt will show (inside a patch); false when all hide in the binding band. */
   readonly visible: boolean;
-  /** Stops the join saves: line groups before less line groups after (a leg may touch a third group too). */
+  /** Stops the join saves: passes before less passes after (a leg may touch a third pass too). */
   readonly stopsSaved: number;
 }
 
 export interface JoinSuggestions {
-  /** The line groups (one pass each), with their quilting lines (indices into design.lines). */
+  /**
+   * The route's passes, each with its quilting lines (indices into design.lines): line groups that ditch,
+   * edge or retrace travel already connect make one pass and need no join.
+   */
   readonly groups: readonly { readonly lines: readonly number[] }[];
   /** Joins between neighbouring groups, shortest first. */
   readonly joins: readonly JoinProposal[];
@@ -45,7 +48,8 @@ export interface JoinSuggestions {
 const endOf = (kind: LineKind): JoinEnd => (kind === 'quilting' ? 'line' : kind);
 
 /**
- * Where to join the design's line groups so the route needs fewer stops. The needle may travel free along a
+ * Where to join the design's line groups so the route needs fewer stops (the engine half of the join
+ * helper; the glossary's *join*). The needle may travel free along a
  * travel part (seams in the ditch, the edge in the binding band when edge travel is on, lines already
  * stitched), so a connection is a chain of new lines between travel parts, and its length is the new
  * stitching it adds. For two groups A and B the shortest connection is exact over that model: each new line

@@ -7,9 +7,9 @@ import { ok, type Result } from '../result.ts';
 
 /**
  * A connected part of what the needle may run on: quilting lines, seams (ditch travel) and, with edge travel
- * on, the block edge. One holding quilting lines is a line group — one pass of the route, as the planner
- * counts passes (route/planRoute: one per group of pieces that travel lines connect); one without is
- * travel only (e.g. the seams and edge when no motif touches them).
+ * on, the block edge. One holding quilting lines is one pass of the route — its line groups are already
+ * joined by travel, as the planner counts passes (route/planRoute: one per group of pieces that travel lines
+ * connect); one without is travel only (e.g. the seams and edge when no motif touches them).
  */
 export interface TravelPart {
   /** Quilting lines in it (indices into design.lines); empty for a travel-only part. */
@@ -21,7 +21,7 @@ export interface TravelPart {
 export interface TravelParts {
   readonly graph: PlanarGraph;
   readonly parts: readonly TravelPart[];
-  /** Indices into `parts` of the line groups, in the order of their lowest vertex. */
+  /** Indices into `parts` of the parts holding quilting lines (one pass each), in the order of their lowest vertex. */
   readonly groups: readonly number[];
   /** Part of each graph vertex, −1 for a vertex only the edge reaches while edge travel is off. */
   readonly partOfVertex: Int32Array;
@@ -75,7 +75,7 @@ export function findTravelParts(design: Design): Result<TravelParts, DesignProbl
   return ok({ graph, parts, groups, partOfVertex });
 }
 
-/** Number of line groups (passes the planner needs) of a design; 0 when it has no quilting lines. */
+/** Number of passes the planner needs for a design (parts holding quilting lines); 0 when it has no quilting lines. */
 export function countLineGroups(design: Design): number {
   if (design.lines.length === 0) return 0;
   const found = findTravelParts(design);

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import type { Point, Polyline } from '../geometry/point.ts';
 import type { Polygon } from '../layouts/patch.ts';
 import { clipPolyline } from './clip.ts';
-import { angleSchema, positiveNumber, type MotifLines } from './motif.types.ts';
+import { angleSchema, positiveNumber, separateSchema, type MotifLines } from './motif.types.ts';
 import { directionOf, extentAlong } from './polygon.ts';
 
 export const straightLinesParamsSchema = z
@@ -12,6 +12,8 @@ export const straightLinesParamsSchema = z
     spacing: positiveNumber,
     /** Direction the lines run in, degrees (see angleSchema). */
     angle: angleSchema,
+    /** Accepted for every motif; straight lines end on the outline either way. */
+    separate: separateSchema,
   })
   .strict();
 export type StraightLinesParams = z.output<typeof straightLinesParamsSchema>;
@@ -24,6 +26,8 @@ export const crosshatchParamsSchema = z
     angle: angleSchema,
     /** Angle between the two sets, degrees (90 = square grid, 60 = diamonds). */
     crossAngle: z.number().finite().gt(0).lt(180).default(90),
+    /** Accepted for every motif; crosshatch ends on the outline either way. */
+    separate: separateSchema,
   })
   .strict();
 export type CrosshatchParams = z.output<typeof crosshatchParamsSchema>;

@@ -87,7 +87,7 @@ describe('threadway fill', () => {
     // Joined motifs: the filled block plans to one pass (seams in the ditch, edge travel on).
     const plan = planDesign(out);
     expect(plan.ok && plan.value.passes).toBe(1);
-  }, 60_000);
+  }, 120_000);
 
   it('fills every patch with "all"', async () => {
     const { design, patches } = block('nine-patch');
@@ -97,7 +97,7 @@ describe('threadway fill', () => {
     // One spiral per patch: nine lines, each starting on its own patch's outline.
     expect(out.lines.length).toBe(patches.length);
     expect(planDesign(out).ok).toBe(true);
-  }, 60_000);
+  }, 120_000);
 
   it('rejects bad fills files with exit code 2, naming the field', async () => {
     const design = write('nine.json', block('nine-patch').design);
@@ -118,5 +118,5 @@ describe('threadway fill', () => {
     const usage = await run('fill', design);
     expect(usage.status).toBe(2);
     expect(usage.stderr).toMatch(/usage/);
-  }, 60_000);
+  }, 180_000);
 });

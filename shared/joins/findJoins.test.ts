@@ -1,14 +1,10 @@
-import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
 import { applyCommand } from '../design/commands.ts';
 import { designSchema, type Design, type DesignInput } from '../design/design.schema.ts';
-import type { Point, Polyline } from '../geometry/point.ts';
-import { buildPiecedLayout } from '../layouts/piecedLayouts.ts';
-import { generateMotif } from '../motifs/motifs.ts';
+import type { Polyline } from '../geometry/point.ts';
 import { planDesign } from '../route/planDesign.ts';
 import { findJoins } from './findJoins.ts';
 import { commandForJoin } from './joinCommand.ts';
-import { findTravelParts } from './lineGroups.ts';
 
 const square = (x: number, y: number, s: number): Polyline => [[x, y], [x + s, y], [x + s, y + s], [x, y + s], [x, y]];
 const design = (lines: Polyline[], extra: Partial<DesignInput> = {}): Design =>
@@ -86,50 +82,4 @@ describe('joins/findJoins: two pieces a known distance apart', () => {
   });
 });
 
-describe('joins/findJoins against Shapely distances and networkx shortest paths (independent reference libraries)', () => {
-  it('matches the shortest connection for every neighbouring pair of separate pebble groups in a nine-patch', () => {
-    const layout = buildPiecedLayout('nine-patch', 12, 12);
-    const lines: Polyline[] = [];
-    for (const p of layout.patches.slice(0, 5)) {
-      const made = generateMotif(p.polygon, { kind: 'pebbles', minRadius: 0.5, maxRadius: 0.8, gap: 0.15, separate: true, chordError: 0.02 });
-      if (!made.ok) throw new Error('pebbles refused');
-      lines.push(...made.value.lines);
-    }
-    const d = design(lines, { seams: layout.seams, edgeTravel: false });
-    const parts = findTravelParts(d);
-    if (!parts.ok) throw new Error('parts');
-    const { joins, groups } = joinsOf(d);
-    expect(groups.length).toBe(passes(d));
-    expect(joins.length).toBeGreaterThanOrEqual(groups.length - 1);
-    for (const j of joins) {
-      expect(j.stopsSaved).toBeGreaterThanOrEqual(1);
-      expect(passes(applyCommand(d, commandForJoin(j)).design)).toBe(groups.length - j.stopsSaved);
-    }
-    // Reference: Shapely's exact distance between the parts' geometries, then networkx's Dijkstra over parts,
-    // passing only through parts without quilting lines. Edge runs are left out here (pebbles keep off the edge).
-    const script = `
-import json, sys
-import networkx as nx
-from shapely.geometry import MultiLineString
-d = json.load(sys.stdin)
-geoms = [MultiLineString([s for s in p['segments']]) for p in d['parts']]
-groups = d['groups']
-out = {}
-for a in range(len(groups)):
-    for b in range(a + 1, len(groups)):
-        g = nx.Graph()
-        for i in range(len(geoms)):
-            for j in range(i + 1, len(geoms)):
-                ok_i = i in (groups[a], groups[b]) or i not in groups
-                ok_j = j in (groups[a], groups[b]) or j not in groups
-                if ok_i and ok_j:
-                    g.add_edge(i, j, weight=geoms[i].distance(geoms[j]))
-        out[f"{a},{b}"] = nx.dijkstra_path_length(g, groups[a], groups[b])
-print(json.dumps(out))`;
-    const input = JSON.stringify({ groups: parts.value.groups, parts: parts.value.parts.map((p) => ({ segments: p.segments.map((s) => [s.a, s.b]) })) });
-    const reference = JSON.parse(execFileSync('/usr/bin/python3', ['-c', script], { input, maxBuffer: 1 << 26 }).toString()) as Record<string, number>;
-    for (const j of joins) expect(j.length).toBeCloseTo(reference[`${j.groups[0]},${j.groups[1]}`]!, 9);
-  }, 60_000);
-});
-
-export type { Point };
+// The exactness check against Shapely and networkx is tests/reference/joins.networkx.test.ts.

@@ -14,6 +14,8 @@ import { isInsideOrOn, toleranceFor } from './polygon.ts';
 
 /** Runs per motif: the issue asks for at least 2,000 (fast-check, seeded so a failure can be replayed). */
 const RUNS = 2000;
+/** Generous: a run takes 1–30 s alone, several times that on a loaded 2-core machine. */
+const SLOW = 300_000;
 
 /** A patch from a pieced layout at 12 in or 30 cm, with the layout options drawn too. */
 interface LayoutPatch {
@@ -106,7 +108,7 @@ describe(`motifs: every fill of a layout patch is inside it and one piece with i
   for (const kind of ['straight-lines', 'crosshatch', 'ribbon-candy', 'arches'] as const) {
     it(kind, () => {
       fc.assert(fc.property(caseFor(kind), ({ patch, params }) => void checkFill(patch, params)), { seed: 20260, numRuns: RUNS });
-    });
+    }, SLOW);
   }
 
   it(`echo: legs no longer than ${ECHO_LEG_FACTOR} × spacing`, () => {
@@ -125,7 +127,7 @@ describe(`motifs: every fill of a layout patch is inside it and one piece with i
     );
     // Every pieced patch is convex, where each leg is exactly one spacing (half to a half-step echo).
     expect(longest).toBeLessThanOrEqual(1 + 1e-6);
-  });
+  }, SLOW);
 
   it('pebbles: each pebble touches its nearest neighbour, within the set overlap', () => {
     fc.assert(
@@ -148,7 +150,7 @@ describe(`motifs: every fill of a layout patch is inside it and one piece with i
       }),
       { seed: 20262, numRuns: RUNS },
     );
-  });
+  }, SLOW);
 });
 
 describe('motifs: non-convex patches', () => {
@@ -168,7 +170,7 @@ describe('motifs: non-convex patches', () => {
       }),
       { seed: 7, numRuns: 300 },
     );
-  });
+  }, SLOW);
 
   it('refuses a patch with no area and reports invalid parameters with their paths', () => {
     expect(generateMotif([[0, 0], [1, 1], [2, 2]], { kind: 'straight-lines', spacing: 1 })).toEqual({ ok: false, error: { kind: 'degenerate-patch' } });

@@ -66,7 +66,7 @@ export function generateStraightLines(polygon: Polygon, params: Pick<StraightLin
 }
 
 /** Two straight-line sets at the same spacing, the second turned by `crossAngle` from the first. */
-export function generateCrosshatch(polygon: Polygon, params: Pick<CrosshatchParams, 'spacing' | 'angle' | 'crossAngle'>): MotifLines {
+export function generateCrosshatch(polygon: Polygon, params: Omit<CrosshatchParams, 'separate'>): MotifLines {
   const first = generateStraightLines(polygon, { spacing: params.spacing, angle: params.angle });
   const second = generateStraightLines(polygon, { spacing: params.spacing, angle: params.angle + params.crossAngle });
   return { lines: [...first.lines, ...second.lines] };

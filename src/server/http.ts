@@ -92,7 +92,8 @@ export async function readJson<S extends z.ZodType>(
 
 /** 400 for a zod failure: one message per field path (the first issue wins). */
 export function invalidInput(error: z.ZodError, message = 'Some fields need attention.'): Response {
-  const fields: Record<string, string> = {};
+  // No prototype: a field named "__proto__" by the client must become a key, not the object's prototype.
+  const fields: Record<string, string> = Object.create(null);
   for (const issue of error.issues) {
     const at = issue.path.map(String);
     if (issue.code === 'unrecognized_keys') {

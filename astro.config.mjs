@@ -10,11 +10,26 @@ import { fileURLToPath } from 'node:url';
 export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react()],
+  integrations: [
+    react(),
+    {
+      // Zod's eval probe would trip the page policy (no 'unsafe-eval'); see src/components/zodJitless.ts.
+      name: 'threadway-zod-jitless',
+      hooks: {
+        'astro:config:setup': ({ injectScript }) => {
+          injectScript('before-hydration', `import ${JSON.stringify(fileURLToPath(new URL('./src/components/zodJitless.ts', import.meta.url)))};`);
+        },
+      },
+    },
+  ],
   // allowedDomains: the Host names the Node adapter may put into Astro's request URL. Without them it
   // uses "localhost" with no port, so url.origin never equals a browser's Origin and checkOrigin refuses
   // every form post. Loopback for npm start / npm test; a deployment adds its host by setting
   // PUBLIC_ORIGIN when it builds.
+  // Astro hashes its own inline scripts (island hydration, client directives) and sends them in a CSP header on
+  // every page; src/server/securityHeaders.ts keeps those hashes as the only inline scripts allowed and adds the
+  // rest of the policy. (Stable as `security.csp` in later Astro versions.)
+  experimental: { csp: true },
   security: {
     checkOrigin: true,
     allowedDomains: [

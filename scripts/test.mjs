@@ -53,7 +53,8 @@ try {
   runTs('db/seed/index.ts', env);
   const mail = await startMailSink({ dir: mailDir });
   cleanups.push(() => mail.close());
-  const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
+  const s3Dir = path.join(scratch, 's3');
+  const s3 = await startS3Fake({ dir: s3Dir });
   cleanups.push(() => s3.close());
   Object.assign(env, s3.env);
   buildApp({ force: process.env.CI === 'true' });
@@ -75,6 +76,8 @@ try {
     TEST_OUTPUT_DIR: outputDir,
     CHROMIUM_PATH: '/usr/bin/chromium',
     PG_BIN: pgBin,
+    // Where the S3 fake keeps objects as files: tests age an object (its mtime is its LastModified).
+    S3_FAKE_DIR: s3Dir,
   };
   const jsonReport = path.join(outputDir, 'vitest.json');
   const args = [path.join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${jsonReport}`, ...process.argv.slice(2)];

@@ -1,12 +1,16 @@
-// Every request passes: catchErrors (outermost, so it also sees failures of the steps after it),
+// Every request passes: securityHeaders (outermost: CSP, framing, caching on every answer, errors included),
+// catchErrors (so it also sees failures of the steps after it),
 // originCheck (cross-site JSON API writes → 403), authenticate (session cookie → locals.user).
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { db } from './server/db.ts';
 import { problem } from './server/http.ts';
 import { isForeignApiRequest } from './server/originCheck.ts';
+import { withSecurityHeaders } from './server/securityHeaders.ts';
 import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from './server/auth/session.ts';
 // Loaded with the middleware, i.e. when the server takes its first request: starts the lesson-release e-mail sweep.
 import './server/classes/releaseSchedule.ts';
+// … and the sweep that removes photo objects an interrupted upload left behind.
+import './server/photos/orphanSchedule.ts';
 
 const isApi = (url: URL) => url.pathname === '/api' || url.pathname.startsWith('/api/');
 
@@ -50,4 +54,8 @@ const authenticate = defineMiddleware(async (context, next) => {
   return next();
 });
 
-export const onRequest = sequence(catchErrors, originCheck, authenticate);
+const securityHeaders = defineMiddleware(async (context, next) =>
+  withSecurityHeaders(await next(), { signedIn: Boolean(context.locals.user), dev: import.meta.env.DEV }),
+);
+
+export const onRequest = sequence(securityHeaders, catchErrors, originCheck, authenticate);

@@ -23,6 +23,24 @@ export interface DesignSvgOptions {
 const INK = { block: '#fbf8f2', outline: '#4a4a4a', seam: '#9a9a9a', band: '#efe6d6', stitch: '#263a7a', retrace: '#c2571a', ditch: '#8a6d1f', edge: '#7a2f5c', text: '#222222' } as const;
 
 /**
+ * An SVG split into its root element's attributes and its content, so a page can write the root element itself
+ * (with its own width and an accessible label, escaped by the page's template engine) around content built here.
+ * Every text inside `content` is escaped and every attribute value in it is a number or one of our own words.
+ */
+export interface SvgParts {
+  /** Width and height with units (`in`, `cm`) or in pixels (no unit). */
+  readonly width: string;
+  readonly height: string;
+  readonly viewBox: string;
+  readonly content: string;
+}
+
+/** The whole SVG document for `parts`. */
+export function svgDocument(parts: SvgParts): string {
+  return `<svg xmlns="http://www.w3.org/2000/svg" width="${parts.width}" height="${parts.height}" viewBox="${parts.viewBox}">\n${parts.content}\n</svg>`;
+}
+
+/**
  * A print-ready SVG of a design (and optionally its route) at true size: the root element's width/height carry
  * physical units (`in` or `cm`), the viewBox is in design units, so printing at 100% reproduces the block.
  * Seams are thin grey, quilting lines solid; with a route, travel strokes are dashed in their own colours,
@@ -31,6 +49,11 @@ const INK = { block: '#fbf8f2', outline: '#4a4a4a', seam: '#9a9a9a', band: '#efe
  * Pure: the same design and options always give the same string.
  */
 export function buildDesignSvg(design: Design, options: DesignSvgOptions = {}): string {
+  return svgDocument(designSvgParts(design, options));
+}
+
+/** buildDesignSvg as parts (see SvgParts). */
+export function designSvgParts(design: Design, options: DesignSvgOptions = {}): SvgParts {
   const { width: w, height: h, units } = design;
   const side = Math.max(w, h);
   const margin = side * 0.04;
@@ -41,9 +64,6 @@ export function buildDesignSvg(design: Design, options: DesignSvgOptions = {}): 
   const totalH = top + h + noteHeight;
   const stroke = side * 0.0025;
   const parts: string[] = [];
-  parts.push(
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${num(totalW)}${units}" height="${num(totalH)}${units}" viewBox="${num(-margin)} ${num(-top)} ${num(totalW)} ${num(totalH)}">`,
-  );
   if (options.title) parts.push(`<title>${escapeXml(options.title)}</title>`);
   parts.push(`<rect x="0" y="0" width="${num(w)}" height="${num(h)}" fill="${INK.block}"/>`);
   const band = bindingBandOf(design);
@@ -61,8 +81,12 @@ export function buildDesignSvg(design: Design, options: DesignSvgOptions = {}): 
     parts.push(`<text x="0" y="${num(-font * 0.8)}" font-family="sans-serif" font-size="${num(font * 1.2)}" fill="${INK.text}">${escapeXml(options.title)}</text>`);
   }
   parts.push(scaleNote(design, h + font * 1.6, font, stroke, options.remark));
-  parts.push('</svg>');
-  return parts.join('\n');
+  return {
+    width: `${num(totalW)}${units}`,
+    height: `${num(totalH)}${units}`,
+    viewBox: `${num(-margin)} ${num(-top)} ${num(totalW)} ${num(totalH)}`,
+    content: parts.join('\n'),
+  };
 }
 
 /**
@@ -70,27 +94,31 @@ export function buildDesignSvg(design: Design, options: DesignSvgOptions = {}): 
  * than 1/200 of the block's longer side to the previous kept point dropped (the end of a line is always kept).
  */
 export function buildDesignThumbnailSvg(design: Design, pixels = 96): string {
+  return svgDocument(designThumbnailSvgParts(design, pixels));
+}
+
+/** buildDesignThumbnailSvg as parts (see SvgParts). */
+export function designThumbnailSvgParts(design: Design, pixels = 96): SvgParts {
   const { width: w, height: h } = design;
   const side = Math.max(w, h);
   const keep = side / 200;
   const scale = pixels / side;
   const seams = design.seams.map((l) => thin(l, keep));
   const lines = design.lines.map((l) => thin(l, keep));
-  return [
-    `<svg xmlns="http://www.w3.org/2000/svg" width="${num(w * scale)}" height="${num(h * scale)}" viewBox="0 0 ${num(w)} ${num(h)}">`,
+  const content = [
     `<rect x="0" y="0" width="${num(w)}" height="${num(h)}" fill="${INK.block}" stroke="${INK.outline}" stroke-width="${num(side * 0.01)}"/>`,
     `<g fill="none" stroke-linecap="round" stroke-linejoin="round">`,
     pathGroup(seams, `stroke="${INK.seam}" stroke-width="${num(side * 0.006)}"`, 'seams'),
     pathGroup(lines, `stroke="${INK.stitch}" stroke-width="${num(side * 0.008)}"`, 'quilting-lines'),
     '</g>',
-    '</svg>',
   ].join('\n');
+  return { width: num(w * scale), height: num(h * scale), viewBox: `0 0 ${num(w)} ${num(h)}`, content };
 }
 
 function routeGroup(route: readonly SvgStroke[], stroke: number, side: number): string {
   const out: string[] = ['<g class="route">'];
   for (const s of route) {
-    out.push(`<path class="${s.kind}" data-pass="${s.pass}" d="${pathData(s.points)}" ${strokeStyle(s.kind, stroke)}/>`);
+    out.push(`<path class="${s.kind}" data-pass="${num(s.pass)}" d="${pathData(s.points)}" ${strokeStyle(s.kind, stroke)}/>`);
   }
   const size = side * 0.014;
   const arrows = route.map((s) => arrowAt(s.points, size)).filter((a): a is string => a !== null);
@@ -149,7 +177,7 @@ function passLabels(route: readonly SvgStroke[], font: number): string {
     const [x, y] = s.points[0]!;
     out.push(
       `<circle cx="${num(x)}" cy="${num(y)}" r="${num(font * 0.75)}" fill="#ffffff" stroke="${INK.stitch}" stroke-width="${num(font * 0.08)}"/>`,
-      `<text x="${num(x)}" y="${num(y)}" font-size="${num(font * 0.9)}" fill="${INK.stitch}">${s.pass}</text>`,
+      `<text x="${num(x)}" y="${num(y)}" font-size="${num(font * 0.9)}" fill="${INK.stitch}">${num(s.pass)}</text>`,
     );
   }
   out.push('</g>');

@@ -10,7 +10,7 @@ function post(body: BodyInit | null, headers: Record<string, string> = { 'conten
 
 async function failure(r: Awaited<ReturnType<typeof readJson>>) {
   if (r.ok) throw new Error('expected a failure');
-  return { status: r.error.status, body: (await r.error.json()) as { error: { code: string; fields?: Record<string, string> } } };
+  return { status: r.error.status, body: (await r.error.json()) as { error: { code: string; message: string; fields?: Record<string, string> } } };
 }
 
 describe('readJson', () => {
@@ -48,6 +48,30 @@ describe('readJson', () => {
     expect(f.body.error.code).toBe('invalid_input');
     expect(Object.keys(f.body.error.fields!).sort()).toEqual(['count', 'extra', 'name']);
     expect(Object.keys((await failure(await readJson(post('[1]'), schema))).body.error.fields!)).toEqual(['body']);
+  });
+  it('400 for bytes that are not UTF-8 (never stored as U+FFFD): a lone continuation byte, an overlong form, a truncated sequence, an encoded surrogate', async () => {
+    // RFC 3629 §3: 0x80 cannot start a character, C0 AF is an overlong "/", E2 82 stops short of "€", ED A0 80 is U+D800.
+    for (const bad of [[0x80], [0xc0, 0xaf], [0xe2, 0x82], [0xed, 0xa0, 0x80]]) {
+      const bytes = new Uint8Array([...new TextEncoder().encode('{"name":"a'), ...bad, ...new TextEncoder().encode('","count":1}')]);
+      const f = await failure(await readJson(post(bytes), schema));
+      expect(f.status).toBe(400);
+      expect(f.body.error.code).toBe('invalid_json');
+      expect(f.body.error.fields?.['body']).toMatch(/UTF-8/);
+    }
+  });
+  it('400 naming the field for text PostgreSQL cannot store: NUL, or half a surrogate pair written as a JSON escape', async () => {
+    for (const text of ['{"name":"a\\u0000","count":1}', '{"name":"\\ud800","count":1}']) {
+      const f = await failure(await readJson(post(text), schema));
+      expect(f.status).toBe(400);
+      expect(Object.keys(f.body.error.fields!)).toEqual(['name']);
+    }
+  });
+  it('413 says the limit in words, and what it protects when the endpoint says so', async () => {
+    const big = JSON.stringify({ name: 'a', count: 1, pad: 'x'.repeat(3000) });
+    const plain = await failure(await readJson(post(big), schema, 2048));
+    expect(plain.body.error.message).toBe('The request body is larger than 2 KB, the most this request may carry.');
+    const hinted = await failure(await readJson(post(big), schema, { bytes: 2048, hint: 'A note may have at most 2,000 characters.' }));
+    expect(hinted.body.error.message).toMatch(/2 KB.*A note may have at most 2,000 characters\.$/);
   });
 });
 

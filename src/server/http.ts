@@ -4,6 +4,7 @@
 import type { z } from 'zod';
 import { err, ok, type Result } from '../../shared/result.ts';
 import { readBytesCapped } from './readBody.ts';
+import { findUnstorableText, UNSTORABLE_MESSAGE } from './storableText.ts';
 
 export type ErrorCode =
   | 'invalid_input'
@@ -44,28 +45,46 @@ export function problem(status: number, code: ErrorCode, message: string, fields
 /** Largest JSON body the API reads (bytes). Account forms are tiny; design endpoints pass their own cap. */
 export const DEFAULT_BODY_LIMIT = 64 * 1024;
 
+/** A body cap with words for the 413: what the cap protects, e.g. the design limits (a number alone is bytes). */
+export interface BodyLimit {
+  readonly bytes: number;
+  /** A sentence after "The request body is larger than N MB…", e.g. the design limits in points and lines. */
+  readonly hint: string;
+}
+
 /**
  * Reads a JSON body and checks it against `schema`. Every failure is already the Response to send:
  * 415 when the body is not declared as JSON, 413 when it is larger than `limit` bytes, 400 for
- * unreadable JSON (`invalid_json`) or a body the schema refuses (`invalid_input`, with `fields`).
+ * unreadable JSON or bytes that are not UTF-8 (`invalid_json`), text PostgreSQL cannot store (NUL, a lone
+ * surrogate) or a body the schema refuses (`invalid_input`, with `fields`).
  */
 export async function readJson<S extends z.ZodType>(
   request: Request,
   schema: S,
-  limit = DEFAULT_BODY_LIMIT,
+  limit: number | BodyLimit = DEFAULT_BODY_LIMIT,
 ): Promise<Result<z.output<S>, Response>> {
   const type = request.headers.get('content-type') ?? '';
   if (!/^application\/(?:[\w.+-]+\+)?json\b/i.test(type.trim())) {
     return err(problem(415, 'unsupported_media_type', 'Send the request body as JSON (Content-Type: application/json).'));
   }
-  const bytes = await readBytesCapped(request, limit);
-  if (bytes === null) return err(tooLarge(limit));
+  const cap = typeof limit === 'number' ? { bytes: limit, hint: '' } : limit;
+  const bytes = await readBytesCapped(request, cap.bytes);
+  if (bytes === null) return err(tooLarge(cap));
+  let text: string;
+  try {
+    // fatal: bytes that are not UTF-8 are refused, never stored as U+FFFD.
+    text = new TextDecoder('utf-8', { fatal: true }).decode(bytes);
+  } catch {
+    return err(problem(400, 'invalid_json', 'The request body is not valid UTF-8 text.', { body: 'Send the JSON encoded as UTF-8.' }));
+  }
   let data: unknown;
   try {
-    data = JSON.parse(new TextDecoder('utf-8', { fatal: false }).decode(bytes));
+    data = JSON.parse(text);
   } catch {
-    return err(problem(400, 'invalid_json', 'The request body is not valid JSON.'));
+    return err(problem(400, 'invalid_json', 'The request body is not valid JSON.', { body: 'Not valid JSON.' }));
   }
+  const unstorable = findUnstorableText(data);
+  if (unstorable !== null) return err(problem(400, 'invalid_input', 'Some text cannot be stored.', { [unstorable]: UNSTORABLE_MESSAGE }));
   const parsed = schema.safeParse(data);
   if (!parsed.success) return err(invalidInput(parsed.error));
   return ok(parsed.data);
@@ -73,7 +92,8 @@ export async function readJson<S extends z.ZodType>(
 
 /** 400 for a zod failure: one message per field path (the first issue wins). */
 export function invalidInput(error: z.ZodError, message = 'Some fields need attention.'): Response {
-  const fields: Record<string, string> = {};
+  // No prototype: a field named "__proto__" by the client must become a key, not the object's prototype.
+  const fields: Record<string, string> = Object.create(null);
   for (const issue of error.issues) {
     const at = issue.path.map(String);
     if (issue.code === 'unrecognized_keys') {
@@ -85,7 +105,15 @@ export function invalidInput(error: z.ZodError, message = 'Some fields need atte
   return problem(400, 'invalid_input', message, fields);
 }
 
-function tooLarge(limit: number): Response {
-  return problem(413, 'payload_too_large', `The request body is larger than ${Math.round(limit / 1024)} KiB.`);
+/** "64 KB", "5 MB": binary units (1 MB = 1024 × 1024 bytes), as a person reads them. */
+export function sizeInWords(bytes: number): string {
+  if (bytes >= 1024 * 1024) return `${+(bytes / (1024 * 1024)).toFixed(1)} MB`;
+  if (bytes >= 1024) return `${+(bytes / 1024).toFixed(1)} KB`;
+  return `${bytes} bytes`;
+}
+
+function tooLarge(cap: { bytes: number; hint: string }): Response {
+  const message = `The request body is larger than ${sizeInWords(cap.bytes)}, the most this request may carry.${cap.hint ? ` ${cap.hint}` : ''}`;
+  return problem(413, 'payload_too_large', message, { body: `At most ${sizeInWords(cap.bytes)}.` });
 }
 

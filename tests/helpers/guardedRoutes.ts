@@ -29,6 +29,7 @@ export const guardedRoutes: GuardedRoute[] = [
   { kind: 'api', method: 'GET', path: '/api/designs', minRole: 'quilter' },
   { kind: 'api', method: 'POST', path: '/api/designs', minRole: 'quilter', body: {} },
   { kind: 'api', method: 'PATCH', path: `/api/admin/accounts/${SOME_UUID}`, minRole: 'admin', body: {} },
+  { kind: 'api', method: 'POST', path: '/api/admin/storage-sweep', minRole: 'admin' },
   { kind: 'page', method: 'GET', path: '/dashboard', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/account', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/admin/accounts', minRole: 'admin' },

@@ -1,6 +1,7 @@
 // Mounts the lesson walkthrough into the lesson page's mount point (#walkthrough-root), reading the lesson JSON
 // the page embeds in #walkthrough-data (the same document as GET /api/lessons/:id). The page's static block
 // preview stays until this runs, so the lesson still shows its block without JavaScript.
+import '../zodJitless.ts'; // first: before any schema is built (see the file)
 import { createRoot } from 'react-dom/client';
 import { LessonWalkthrough, lessonDataSchema } from './LessonWalkthrough.tsx';
 

@@ -1,13 +1,13 @@
 // Request bodies for classes, lessons, invitations and progress. Limits are stated here once.
 import { z } from 'zod';
+import { calendarDate, isoInstant } from '../inputRules.ts';
 
 const text = (max: number) => z.string().trim().min(1, 'Required.').max(max, `At most ${max} characters.`);
-const isoDate = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-01-15.').refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)), 'Not a real date.');
 
 const classFields = {
   title: text(200),
   description: z.string().trim().max(5000, 'At most 5000 characters.'),
-  startsOn: isoDate,
+  startsOn: calendarDate,
   /** Price in the smallest currency unit (cents); kept for a later payments feature. Null = free. */
   priceCents: z.number().int().min(0).max(10_000_000).nullable(),
   currency: z.string().regex(/^[A-Z]{3}$/, 'A three-letter currency code, e.g. USD.').nullable(),
@@ -23,7 +23,7 @@ export const updateClassSchema = z
 export const NOTES_MAX = 20_000;
 const lessonFields = {
   title: text(200),
-  releaseAt: z.iso.datetime({ offset: true, message: 'Use an ISO date and time, e.g. 2027-01-15T09:00:00Z.' }),
+  releaseAt: isoInstant,
   notes: z.string().max(NOTES_MAX, `At most ${NOTES_MAX} characters.`),
   templateVersionId: z.uuid('Choose a template version.'),
 };

@@ -1,16 +1,24 @@
 // Request shapes for /api/designs/… (zod). Designs themselves go through the shared designSchema, so the
 // server and the workbench refuse the same things (non-finite numbers, far-away points, 1-point lines, caps).
 import { z } from 'zod';
-import { designSchema } from '../../../shared/design/design.schema.ts';
+import { DESIGN_LIMITS, designSchema } from '../../../shared/design/design.schema.ts';
+import type { BodyLimit } from '../http.ts';
+import { pgInt } from '../inputRules.ts';
+import { isStorableText, UNSTORABLE_MESSAGE } from '../storableText.ts';
 import { DESIGN_SORTS } from './designList.repository.ts';
 
 /** Largest request body a design endpoint reads. A design at DESIGN_LIMITS.maxPoints (200,000 points) is
- * about 3–4 MB of JSON, so 5 MiB leaves room for the rest of the body; larger gets 413. */
-export const DESIGN_BODY_LIMIT = 5 * 1024 * 1024;
+ * about 3–4 MB of JSON, so 5 MiB leaves room for the rest of the body; larger gets 413 saying both limits. */
+export const DESIGN_BODY_LIMIT: BodyLimit = {
+  bytes: 5 * 1024 * 1024,
+  hint:
+    `A design may have at most ${DESIGN_LIMITS.maxPoints.toLocaleString('en-US')} points in ${DESIGN_LIMITS.maxLines.toLocaleString('en-US')} lines ` +
+    '(fewer when coordinates carry many decimals). Split it into smaller blocks or simplify its curves.',
+};
 
 const title = z.string().trim().min(1, 'Give the design a title.').max(200, 'Keep the title to 200 characters.');
 const notes = z.string().max(10_000, 'Keep notes to 10,000 characters.');
-const version = z.number().int().positive();
+const version = pgInt(1);
 
 export const createDesignSchema = z.object({ title, notes: notes.default(''), design: designSchema }).strict();
 
@@ -34,7 +42,7 @@ export const saveRouteSchema = z.discriminatedUnion('kind', [
 
 /** Query of GET /api/designs; paged like the other lists (page from 1, pageSize up to 100). */
 export const listQuerySchema = z.strictObject({
-  q: z.string().trim().max(200, 'Use at most 200 characters.').default(''),
+  q: z.string().trim().max(200, 'Use at most 200 characters.').refine(isStorableText, UNSTORABLE_MESSAGE).default(''),
   sort: z.enum(DESIGN_SORTS).default('updated'),
   /** Default: newest first for dates; A→Z for titles; fewest first for figures. */
   dir: z.enum(['asc', 'desc']).optional(),

@@ -1,5 +1,7 @@
 // Rows → the JSON the API sends. jsonb read back from Postgres is `unknown` until a schema accepts it:
 // a stored design that no longer parses is a broken invariant (we only ever store parsed designs), so it throws.
+// Figures are different: they are derived data (the engine can always compute them again), so a summary or a
+// saved route that fails its schema is logged and read as absent; one bad row never turns a list into a 500.
 import { z } from 'zod';
 import type { DesignRouteRow, DesignRow, DesignVersionRow } from '../../../db/schema.ts';
 import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
@@ -36,7 +38,7 @@ export const savedRouteSummarySchema = z.object({
 });
 export type SavedRouteSummary = z.infer<typeof savedRouteSummarySchema> & RouteFigures;
 
-const strokesSchema = z.array(
+export const savedRouteStrokesSchema = z.array(
   z.object({
     pass: z.number().int().positive(),
     kind: z.enum(['stitch', 'retrace', 'ditch', 'edge']),
@@ -49,6 +51,20 @@ function parseStored<S extends z.ZodType>(schema: S, value: unknown, what: strin
   const parsed = schema.safeParse(value);
   if (!parsed.success) throw new Error(`server/designs/designRecord: stored ${what} fails its schema: ${parsed.error.message}`);
   return parsed.data;
+}
+
+/** The value when it fits the schema; otherwise null, and the bad row is logged (derived data only). */
+function parseDerived<S extends z.ZodType>(schema: S, value: unknown, what: string): z.output<S> | null {
+  if (value === null || value === undefined) return null;
+  const parsed = schema.safeParse(value);
+  if (parsed.success) return parsed.data;
+  console.error(`[designs] stored ${what} fails its schema; read as absent: ${parsed.error.message}`);
+  return null;
+}
+
+/** A design's table figures (`design.summary`), or null when there are none or they do not parse. */
+export function storedSummary(row: { id: string; summary: unknown }): DesignSummary | null {
+  return parseDerived(designSummarySchema, row.summary, `summary of design ${row.id}`);
 }
 
 export function storedDesign(row: Pick<DesignRow, 'id' | 'data'>): Design {
@@ -73,7 +89,7 @@ export function toDesignJson(row: DesignRow): DesignJson {
     notes: row.notes,
     version: row.version,
     design: storedDesign(row),
-    summary: row.summary === null ? null : parseStored(designSummarySchema, row.summary, `summary of design ${row.id}`),
+    summary: storedSummary(row),
     createdAt: row.created_at.toISOString(),
     updatedAt: row.updated_at.toISOString(),
   };
@@ -89,14 +105,18 @@ export function toDesignVersionJson(row: DesignVersionRow) {
   };
 }
 
+/** The saved route as the API sends it; null (no saved route) when its strokes or figures do not parse. */
 export function toSavedRouteJson(row: DesignRouteRow, currentVersion: number) {
+  const strokes = parseDerived(savedRouteStrokesSchema, row.strokes, `route strokes of design ${row.design_id}`);
+  const summary = parseDerived(savedRouteSummarySchema, row.summary, `route summary of design ${row.design_id}`);
+  if (strokes === null || summary === null) return null;
   return {
     kind: row.kind,
     designVersion: row.design_version,
     /** False once the design was saved again after this route was computed. */
     current: row.design_version === currentVersion,
-    strokes: parseStored(strokesSchema, row.strokes, `route strokes of design ${row.design_id}`),
-    summary: parseStored(savedRouteSummarySchema, row.summary, `route summary of design ${row.design_id}`),
+    strokes,
+    summary,
     createdAt: row.created_at.toISOString(),
     updatedAt: row.updated_at.toISOString(),
   };

@@ -7,6 +7,8 @@ import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import type { TemplateVersionRow } from './template.repository.ts';
 import { routeFiguresSchema, routeStrokesSchema, type RouteFigures, type RouteStroke } from './routeSnapshot.schema.ts';
+import type { Summarize } from '../designs/design.service.ts';
+import { copiedDesignSummary, copiedRoute } from './copiedFigures.ts';
 
 export interface PublishableDesign {
   design: Design;
@@ -34,12 +36,12 @@ export async function loadPublishableDesign(db: Kysely<Database>, ownerId: strin
 
 /**
  * A new design owned by `ownerId` holding the version's drawing and route, marked with the version it came from
- * (design.copied_from_template_version_id). Returns the new design's id.
+ * (design.copied_from_template_version_id). The table figures are the planner's (copiedFigures.ts). Returns the id.
  */
-export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: string, v: TemplateVersionRow): Promise<string> {
+export async function copyVersionIntoDesigns(db: Kysely<Database>, summarize: Summarize, ownerId: string, v: TemplateVersionRow): Promise<string> {
   const design = designSchema.parse(v.design);
-  const route = routeStrokesSchema.parse(v.route);
-  const figures = routeFiguresSchema.parse(v.figures);
+  const route = copiedRoute(v.route, v.figures);
+  const summary = await copiedDesignSummary(design, v.figures, summarize);
   const title = `${v.title} (template v${v.version})`.slice(0, 200);
   const notes = `Copied from the template "${v.title}", version ${v.version}.`;
   const data = JSON.stringify(design);
@@ -52,16 +54,18 @@ export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: stri
         notes,
         data,
         thumbnail_svg: buildDesignThumbnailSvg(design),
-        summary: JSON.stringify(figures),
+        summary: summary === null ? null : JSON.stringify(summary),
         copied_from_template_version_id: v.id,
       })
       .returning(['id', 'version'])
       .executeTakeFirstOrThrow();
     await trx.insertInto('design_version').values({ design_id: created.id, version: created.version, title, notes, data }).execute();
-    await trx
-      .insertInto('design_route')
-      .values({ design_id: created.id, kind: 'planned', strokes: JSON.stringify(route), summary: JSON.stringify(figures), design_version: created.version })
-      .execute();
+    if (route) {
+      await trx
+        .insertInto('design_route')
+        .values({ design_id: created.id, kind: route.kind, strokes: JSON.stringify(route.strokes), summary: JSON.stringify(route.summary), design_version: created.version })
+        .execute();
+    }
     return created.id;
   });
 }

@@ -1,5 +1,7 @@
 // Request bodies and query strings for templates.
 import { z } from 'zod';
+import { pgInt } from '../inputRules.ts';
+import { isStorableText, UNSTORABLE_MESSAGE } from '../storableText.ts';
 
 export const difficultySchema = z.enum(['beginner', 'intermediate', 'advanced']);
 export const visibilitySchema = z.enum(['public', 'class', 'unlisted']);
@@ -39,7 +41,7 @@ export const SIZE_BUCKETS = {
 export type SizeBucket = keyof typeof SIZE_BUCKETS;
 
 export const galleryQuerySchema = z.object({
-  q: z.string().trim().max(100).optional(),
+  q: z.string().trim().max(100).refine(isStorableText, UNSTORABLE_MESSAGE).optional(),
   motif: motif.optional(),
   difficulty: difficultySchema.optional(),
   size: z.enum(['small', 'medium', 'large']).optional(),
@@ -47,4 +49,4 @@ export const galleryQuerySchema = z.object({
 });
 export type GalleryQuery = z.infer<typeof galleryQuerySchema>;
 
-export const copySchema = z.object({ version: z.number().int().min(1).optional() }).strict();
+export const copySchema = z.object({ version: pgInt(1).optional() }).strict();

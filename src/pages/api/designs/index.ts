@@ -8,7 +8,7 @@ import { createDesign } from '../../../server/designs/design.service.ts';
 import { createDesignSchema, DESIGN_BODY_LIMIT, listQuerySchema } from '../../../server/designs/designApi.schema.ts';
 import { summarizeWithEngine } from '../../../server/designs/designHttp.ts';
 import { listOwnedDesigns } from '../../../server/designs/designList.repository.ts';
-import { designSummarySchema, toDesignJson } from '../../../server/designs/designRecord.ts';
+import { storedSummary, toDesignJson } from '../../../server/designs/designRecord.ts';
 
 export const GET = (async ({ locals, url }) => {
   const signedIn = requireUser(locals);
@@ -25,7 +25,7 @@ export const GET = (async ({ locals, url }) => {
     units: r.units,
     width: r.width,
     height: r.height,
-    summary: r.summary === null ? null : designSummarySchema.parse(r.summary),
+    summary: storedSummary(r),
     thumbnailSvg: r.thumbnail_svg,
     createdAt: r.created_at.toISOString(),
     updatedAt: r.updated_at.toISOString(),

@@ -3,10 +3,12 @@ import type { APIRoute } from 'astro';
 import { db } from '../../../../../server/db.ts';
 import { json, problem } from '../../../../../server/http.ts';
 import { readTemplateDetail } from '../../../../../server/templates/templateDetail.ts';
+import { parseVersionText } from '../../../../../server/inputRules.ts';
 
 export const GET = (async ({ locals, params, url }) => {
-  const n = Number(params['version']);
-  if (!Number.isInteger(n) || n < 1) return problem(404, 'not_found', 'Not found.');
+  // A version that cannot exist (not a number, or past PostgreSQL's integer range) is simply not found.
+  const n = parseVersionText(params['version']);
+  if (n === null) return problem(404, 'not_found', 'Not found.');
   const link = url.searchParams.get('link');
   const detail = link
     ? await readTemplateDetail(db, locals.user, { by: 'link', token: link }, n)

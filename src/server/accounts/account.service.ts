@@ -4,7 +4,7 @@ import type { Kysely } from 'kysely';
 import type { Database, Role, UnitsPreference } from '../../../db/schema.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import { hashPassword, verifyPassword } from '../auth/password.ts';
-import { invalidateAccountSessions } from '../auth/session.ts';
+import { changePasswordHash } from '../auth/passwordChange.ts';
 import {
   findAccountRowByEmail,
   findAccountRowById,
@@ -17,7 +17,7 @@ import {
 
 // Verified against when the e-mail is unknown, so a wrong address costs the same Argon2 work as a wrong password.
 let dummyHash: Promise<string> | undefined;
-function getDummyHash(): Promise<string> {
+export function getDummyHash(): Promise<string> {
   dummyHash ??= hashPassword('threadway-no-such-account-password');
   return dummyHash;
 }
@@ -52,17 +52,17 @@ async function checkCurrentPassword(db: Kysely<Database>, accountId: string, cur
   return row !== undefined && (await verifyPassword(row.password_hash, currentPassword));
 }
 
-/** Changes the password and signs out every other session of the account. */
+/** Changes the password; every reset link and every other session of the account ends (passwordChange.ts). */
 export async function changePassword(
   db: Kysely<Database>,
   accountId: string,
   keepSessionId: string,
   input: { currentPassword: string; newPassword: string },
-): Promise<Result<void, { kind: 'wrong-password' }>> {
+): Promise<Result<{ passwordHash: string }, { kind: 'wrong-password' }>> {
   if (!(await checkCurrentPassword(db, accountId, input.currentPassword))) return err({ kind: 'wrong-password' });
-  await updateAccount(db, accountId, { passwordHash: await hashPassword(input.newPassword) });
-  await invalidateAccountSessions(db, accountId, keepSessionId);
-  return ok(undefined);
+  const passwordHash = await hashPassword(input.newPassword);
+  await changePasswordHash(db, accountId, passwordHash, keepSessionId);
+  return ok({ passwordHash });
 }
 
 export async function changeEmail(

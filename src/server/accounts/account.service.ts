@@ -8,34 +8,18 @@ import { changePasswordHash } from '../auth/passwordChange.ts';
 import {
   findAccountRowByEmail,
   findAccountRowById,
-  insertAccount,
   lockAdminIds,
   rowToAccount,
   updateAccount,
   type Account,
 } from './account.repository.ts';
 
-// Verified against when the e-mail is unknown, so a wrong address costs the same Argon2 work as a wrong password.
+// Verified against when the e-mail is unknown, so a wrong address costs the same Argon2 work as a wrong password
+// (sign-in: src/server/auth/signInAttempt.ts; sign-up: src/server/accounts/signUpRequest.ts).
 let dummyHash: Promise<string> | undefined;
 export function getDummyHash(): Promise<string> {
   dummyHash ??= hashPassword('threadway-no-such-account-password');
   return dummyHash;
-}
-
-export async function signUp(
-  db: Kysely<Database>,
-  input: { email: string; displayName: string; password: string; units: UnitsPreference },
-): Promise<Result<Account, { kind: 'email-taken' }>> {
-  if (await findAccountRowByEmail(db, input.email)) return err({ kind: 'email-taken' });
-  const row = await insertAccount(db, { email: input.email, displayName: input.displayName, units: input.units, passwordHash: await hashPassword(input.password) });
-  return row ? ok(rowToAccount(row)) : err({ kind: 'email-taken' });
-}
-
-/** One answer for "no such e-mail" and "wrong password", after the same amount of hashing work. */
-export async function checkCredentials(db: Kysely<Database>, email: string, password: string): Promise<Result<Account, { kind: 'invalid-credentials' }>> {
-  const row = await findAccountRowByEmail(db, email);
-  const valid = await verifyPassword(row?.password_hash ?? (await getDummyHash()), password);
-  return row && valid ? ok(rowToAccount(row)) : err({ kind: 'invalid-credentials' });
 }
 
 export async function updateProfile(db: Kysely<Database>, accountId: string, changes: { displayName?: string | undefined; units?: UnitsPreference | undefined }): Promise<Account> {

@@ -1,12 +1,13 @@
 // Cross-site protection for the JSON API, and the sign-in / reset rate limits.
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createAccount, uniqueEmail } from '../helpers/accounts.ts';
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
+import { forgetLoopbackLimits } from '../helpers/limits.ts';
 
+beforeAll(forgetLoopbackLimits);
 afterAll(async () => {
-  // Leave the shared loopback address's counters as other test files expect them.
-  await testDb().deleteFrom('rate_limit').where('key', 'in', ['sign-in:ip:127.0.0.1', 'reset:ip:127.0.0.1']).execute();
+  await forgetLoopbackLimits();
   await closeTestDb();
 });
 

@@ -6,15 +6,17 @@ import { DEFAULT_PASSWORD, createAccount, uniqueEmail } from '../helpers/account
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
 import { startExtraServer, type ExtraServer } from '../helpers/extraServer.ts';
+import { forgetLoopbackLimits } from '../helpers/limits.ts';
 import { linksIn, readCapturedMail, waitForMail } from '../helpers/mail.ts';
 
 let behindProxy: ExtraServer;
 beforeAll(async () => {
+  await forgetLoopbackLimits();
   behindProxy = await startExtraServer({ TRUSTED_PROXIES: '127.0.0.1' });
 });
 afterAll(async () => {
   await behindProxy?.stop();
-  await testDb().deleteFrom('rate_limit').where('key', 'in', ['reset:ip:127.0.0.1', 'sign-up:ip:127.0.0.1']).execute();
+  await forgetLoopbackLimits();
   await closeTestDb();
 });
 

@@ -6,11 +6,13 @@ import { createAccount, uniqueEmail } from '../helpers/accounts.ts';
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
 import { startExtraServer, type ExtraServer } from '../helpers/extraServer.ts';
+import { forgetLoopbackLimits } from '../helpers/limits.ts';
 
 let behindProxy: ExtraServer;
 let smallNoProxy: ExtraServer;
 
 beforeAll(async () => {
+  await forgetLoopbackLimits();
   [behindProxy, smallNoProxy] = await Promise.all([
     // The test process is the proxy: it connects from 127.0.0.1 and says who the client is.
     startExtraServer({ TRUSTED_PROXIES: '127.0.0.1' }),
@@ -20,8 +22,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await Promise.all([behindProxy?.stop(), smallNoProxy?.stop()]);
-  // Leave the shared loopback address's counters as other test files expect them.
-  await testDb().deleteFrom('rate_limit').where('key', 'like', 'sign-in:ip:127.0.0.1%').execute();
+  await forgetLoopbackLimits();
   await closeTestDb();
 });
 
@@ -53,7 +54,7 @@ describe('client address', () => {
   });
 
   it('rotating X-Forwarded-For does not get round the per-address limit when no proxy is trusted', async () => {
-    await testDb().deleteFrom('rate_limit').where('key', '=', 'sign-in:ip:127.0.0.1').execute();
+    await forgetLoopbackLimits();
     const client = new TestClient(smallNoProxy.url);
     const tries: number[] = [];
     for (let i = 0; i < 11; i += 1) {
@@ -62,7 +63,7 @@ describe('client address', () => {
     }
     expect(tries.slice(0, 10)).toEqual(Array(10).fill(401));
     expect(tries[10]).toBe(429);
-    await testDb().deleteFrom('rate_limit').where('key', '=', 'sign-in:ip:127.0.0.1').execute();
+    await forgetLoopbackLimits();
   });
 
   it('behind a trusted proxy, the address the proxy reports is the one counted', async () => {

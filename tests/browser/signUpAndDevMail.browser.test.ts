@@ -1,5 +1,6 @@
 // The screens issue 10 changed, at 1440×900, 820×1180 and 390×844: sign-up's "check your inbox" answer, the
-// page the e-mailed link opens, and the captured-mail page with its "local fake" banner (admins only).
+// page the e-mailed link opens, the invitation page's sign-up (for the invited address only), and the
+// captured-mail page with its "local fake" banner (admins only).
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEFAULT_PASSWORD, createAccount, uniqueEmail } from '../helpers/accounts.ts';
@@ -7,6 +8,7 @@ import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../
 import { closeTestDb } from '../helpers/db.ts';
 import { testEnv } from '../helpers/env.ts';
 import { linksIn, waitForMail } from '../helpers/mail.ts';
+import { buildWorld } from '../api/teachingWorld.ts';
 
 const SIZES = [
   ['desktop', { width: 1440, height: 900 }],
@@ -77,6 +79,24 @@ describe('sign-up by e-mailed link, and the captured-mail page', () => {
       await noOverflow(`dev mail ${size}`);
       // The viewport only: by now the capture folder holds every message of the test run.
       await page.screenshot({ path: path.join(testEnv.outputDir, 'screenshots', `security-dev-mail-${size}.png`) });
+    }
+  });
+
+  it('shows the invitation sign-up with the invited address fixed, at every width', async () => {
+    const { page } = browser;
+    const w = await buildWorld();
+    const email = uniqueEmail('invited-browser');
+    const since = new Date();
+    await w.teacher.client.post(`/api/classes/${w.classId}/invitations`, { emails: [email] });
+    const link = new URL(linksIn((await waitForMail(email, { subject: 'invites you', since })).text).find((l) => l.includes('/invitations/'))!);
+    await browser.context.clearCookies();
+    for (const [size, viewport] of SIZES) {
+      await page.setViewportSize(viewport);
+      await page.goto(link.pathname);
+      expect(await page.inputValue('input[name=email]')).toBe(email);
+      expect(await page.getAttribute('input[name=email]', 'readonly')).not.toBeNull();
+      await noOverflow(`invitation ${size}`);
+      await screenshot(page, `security-invitation-sign-up-${size}`);
     }
   });
 });

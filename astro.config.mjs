@@ -57,6 +57,10 @@ export default defineConfig({
       DEV_TOOLS: envField.boolean({ context: 'server', access: 'secret', default: false }),
       PUBLIC_ORIGIN: envField.string({ context: 'server', access: 'secret', optional: true }),
       RATE_LIMIT_SCALE: envField.number({ context: 'server', access: 'secret', default: 1 }),
+      // Reverse proxies whose X-Forwarded-For is believed: comma-separated addresses or CIDR ranges
+      // (e.g. "127.0.0.1,10.0.0.0/8"). Empty (the default): the connecting address is the client.
+      // Needs the server started through scripts/serve.mjs (npm start / npm test do; see README "Security").
+      TRUSTED_PROXIES: envField.string({ context: 'server', access: 'secret', default: '' }),
       // Photo storage (S3 API). npm start / npm test point these at the local s3rver fake on loopback.
       S3_ENDPOINT: envField.string({ context: 'server', access: 'secret', optional: true }),
       S3_BUCKET: envField.string({ context: 'server', access: 'secret', default: 'uploads' }),

@@ -9,7 +9,7 @@
  * BENCH_PROFILE=1 also prints the page's top self-time functions during pan/zoom (Chrome DevTools profiler);
  * BENCH_ROUND_TRIPS sets the number of check round trips (default 60).
  */
-import { mkdtempSync, mkdirSync, rmSync, chmodSync } from 'node:fs';
+import { chmodSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium } from 'playwright-core';
@@ -102,6 +102,19 @@ class Client {
   }
 }
 
+/** The token of the sign-up link the fake mail server captured for `email` (sign-up is finished from the e-mail). */
+async function signUpToken(mailDir: string, email: string): Promise<string> {
+  for (let i = 0; i < 100; i += 1) {
+    for (const file of readdirSync(mailDir).filter((f) => f.endsWith('.json'))) {
+      const mail = JSON.parse(readFileSync(path.join(mailDir, file), 'utf8')) as { to: string[]; text: string };
+      const token = /\/sign-up\/confirm\?token=([a-z2-7]{32})/.exec(mail.text)?.[1];
+      if (token && mail.to.includes(email)) return token;
+    }
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`bench/workbench: no sign-up e-mail to ${email}`);
+}
+
 async function main(): Promise<void> {
   const pgBin = ensurePostgres();
   const scratch = mkdtempSync('/tmp/threadway-bench-');
@@ -128,8 +141,11 @@ async function main(): Promise<void> {
     await waitForHttp(base);
 
     const client = new Client(base);
-    const signUp = await client.send('POST', '/api/accounts', { email: `bench-${Date.now()}@guild.test`, password: 'quilting-is-fun-42', displayName: 'Bench Quilter', units: 'in' });
-    if (signUp.status !== 201) throw new Error(`bench/workbench: sign-up failed (${signUp.status})`);
+    const email = `bench-${Date.now()}@guild.test`;
+    const signUp = await client.send('POST', '/api/accounts', { email, password: 'quilting-is-fun-42', displayName: 'Bench Quilter', units: 'in' });
+    if (signUp.status !== 202) throw new Error(`bench/workbench: sign-up failed (${signUp.status})`);
+    const confirmed = await client.send('POST', '/api/accounts/confirm', { token: await signUpToken(mailDir, email) });
+    if (confirmed.status !== 201) throw new Error(`bench/workbench: sign-up confirmation failed (${confirmed.status})`);
 
     // 1. Edit → route check round trip for a typical block.
     const typical = typicalDesign();

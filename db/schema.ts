@@ -7,6 +7,7 @@ export interface Database {
   password_reset: PasswordResetTable;
   email_message: EmailMessageTable;
   rate_limit: RateLimitTable;
+  sign_up_request: SignUpRequestTable;
   template: TemplateTable;
   template_version: TemplateVersionTable;
   class: ClassTable;
@@ -77,6 +78,19 @@ export interface RateLimitTable {
   key: string;
   hits: number;
   window_ends_at: Date;
+  /** Earliest start of the next attempt (progressive slow-down); null when there is no wait (migration 2026_12_04_1710). */
+  next_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+}
+
+/** A sign-up waiting for its e-mailed link (migration 2026_12_04_1710); the account is created when it is used. */
+export interface SignUpRequestTable {
+  id: string;
+  email: string;
+  display_name: string;
+  password_hash: string;
+  units: UnitsPreference;
+  expires_at: ColumnType<Date, Date, Date>;
+  created_at: CreatedAt;
 }
 
 // ── Teaching (migration 2026_12_02_1600_create_teaching) ──

@@ -10,6 +10,7 @@ import { buildApp, runTs, serveApp } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
 import { clusterLocation } from './lib/cluster.mjs';
+import { wantsDevTools } from './lib/devTools.mjs';
 
 ensureNodeModules();
 const pgBin = ensurePostgres();
@@ -21,9 +22,11 @@ if (initCluster(pgBin, pgDir, port)) {
 }
 startCluster(pgBin, pgDir);
 ensureDatabase(pgBin, port, 'threadway');
+const devTools = wantsDevTools(process.argv.slice(2), process.env);
 const env = {
   DATABASE_URL: databaseUrl(port, 'threadway'),
-  DEV_TOOLS: 'true',
+  // The captured-mail page shows reset links: off unless asked for (`npm start -- --dev-tools`), admins only.
+  DEV_TOOLS: devTools ? 'true' : 'false',
   MAIL_CAPTURE_DIR: path.join(ROOT, '.data', 'mail'),
 };
 runTs('db/migrate.ts', env);
@@ -45,7 +48,8 @@ console.log(`
   Demo sign-ins (password for all: ${readDemoPassword()}):
 ${readDemoAccounts().map((a) => `    ${a.role.padEnd(8)} ${a.email.padEnd(36)} ${a.displayName}`).join('\n')}
 
-  Captured e-mail (fake mail server on 127.0.0.1:${mail.port}): ${origin}/dev/mail
+  Captured e-mail (fake mail server on 127.0.0.1:${mail.port}) is kept in ${env.MAIL_CAPTURE_DIR}
+  ${devTools ? `and shown to admins at ${origin}/dev/mail.` : 'To read it in the browser as an admin: npm start -- --dev-tools, then /dev/mail.'}
   Stop with Ctrl-C (the database stops too; or later: npm run db:stop).
 `);
 

@@ -1,10 +1,10 @@
 // Every request passes: securityHeaders (outermost: CSP, framing, caching on every answer, errors included),
 // catchErrors (so it also sees failures of the steps after it),
-// originCheck (cross-site JSON API writes → 403), authenticate (session cookie → locals.user).
+// originCheck (cross-site state-changing requests, API or page → 403), authenticate (session cookie → locals.user).
 import { defineMiddleware, sequence } from 'astro:middleware';
 import { db } from './server/db.ts';
 import { problem } from './server/http.ts';
-import { isForeignApiRequest } from './server/originCheck.ts';
+import { isForeignRequest } from './server/originCheck.ts';
 import { withSecurityHeaders } from './server/securityHeaders.ts';
 import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from './server/auth/session.ts';
 // Loaded with the middleware, i.e. when the server takes its first request: starts the lesson-release e-mail sweep.
@@ -31,7 +31,7 @@ const catchErrors = defineMiddleware(async (context, next) => {
 });
 
 const originCheck = defineMiddleware((context, next) => {
-  if (isForeignApiRequest(context.request, context.url)) {
+  if (isForeignRequest(context.request, context.url)) {
     return problem(403, 'forbidden_origin', 'This request did not come from Threadway itself (Origin check failed).');
   }
   return next();

@@ -36,9 +36,9 @@ export function buildApp({ force = false } = {}) {
   log(`built in ${((Date.now() - started) / 1000).toFixed(1)} s.`);
 }
 
-/** Starts dist/server/entry.mjs on 127.0.0.1:`port`; resolves the child process. */
+/** Serves the build through scripts/serve.mjs (which fixes the client address) on 127.0.0.1:`port`; returns the child process. */
 export function serveApp({ port, env, quiet = false }) {
-  const child = spawn(process.execPath, [path.join(ROOT, 'dist', 'server', 'entry.mjs')], {
+  const child = spawn(process.execPath, [path.join(ROOT, 'scripts', 'serve.mjs')], {
     cwd: ROOT,
     env: { ...process.env, ...env, HOST: '127.0.0.1', PORT: String(port), ASTRO_TELEMETRY_DISABLED: '1' },
     stdio: quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],

@@ -3,13 +3,17 @@ import { PUBLIC_ORIGIN } from 'astro:env/server';
 const UNSAFE_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
 
 /**
- * Cross-site request guard for the JSON API. A state-changing request to /api/** must carry an
- * Origin header equal to the request's own origin or PUBLIC_ORIGIN. Astro's security.checkOrigin
- * covers only form content types, so JSON requests are checked here.
+ * Cross-site request guard for every state-changing request (POST/PUT/PATCH/DELETE), API or page, whatever its
+ * content type: it must carry an Origin header equal to the request's own origin or PUBLIC_ORIGIN. Astro's
+ * security.checkOrigin covers only form content types, so a JSON or body-less POST (e.g. to /sign-out) would
+ * pass it; browsers send Origin on every such request, so a missing one is refused too.
  */
-export function isForeignApiRequest(request: Request, url: URL): boolean {
-  if (!UNSAFE_METHODS.has(request.method) || !(url.pathname === '/api' || url.pathname.startsWith('/api/'))) return false;
+export function isForeignRequest(request: Request, url: URL): boolean {
+  if (!UNSAFE_METHODS.has(request.method)) return false;
   const origin = request.headers.get('origin');
   if (!origin) return true;
   return origin !== url.origin && origin !== PUBLIC_ORIGIN;
 }
+
+/** The JSON API's name for the same check (kept for callers that only think about /api). */
+export const isForeignApiRequest = isForeignRequest;

@@ -4,14 +4,25 @@ import { sql } from 'kysely';
 import { DEFAULT_PASSWORD, createAccount, uniqueEmail } from '../helpers/accounts.ts';
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
+import { linksIn, waitForMail } from '../helpers/mail.ts';
 
 afterAll(closeTestDb);
 
 describe('sign up', () => {
-  it('creates a quilter, signs them in and stores only a hash of the session token', async () => {
-    const client = new TestClient();
+  it('creates a quilter from the e-mailed link, signs them in and stores only hashes of the tokens', async () => {
     const email = uniqueEmail('signup');
-    const res = await client.post('/api/accounts', { email, displayName: 'Rosalind Marsh', password: DEFAULT_PASSWORD, units: 'cm' });
+    const since = new Date();
+    const asked = await new TestClient().post('/api/accounts', { email, displayName: 'Rosalind Marsh', password: DEFAULT_PASSWORD, units: 'cm' });
+    expect(asked.status).toBe(202);
+    const mail = await waitForMail(email, { subject: 'Finish creating your Threadway account', since });
+    const linkToken = new URL(linksIn(mail.text).find((l) => l.includes('/sign-up/confirm?token='))!).searchParams.get('token')!;
+    const pending = await testDb().selectFrom('sign_up_request').selectAll().where('email', '=', email).executeTakeFirstOrThrow();
+    expect(pending.id).toMatch(/^[0-9a-f]{64}$/);
+    expect(pending.id).not.toContain(linkToken);
+    expect(pending.password_hash).toMatch(/^\$argon2id\$/);
+
+    const client = new TestClient();
+    const res = await client.post('/api/accounts/confirm', { token: linkToken });
     expect(res.status).toBe(201);
     expect(res.body.account).toMatchObject({ email, displayName: 'Rosalind Marsh', role: 'quilter', units: 'cm' });
     expect(res.body.account).not.toHaveProperty('passwordHash');
@@ -25,25 +36,25 @@ describe('sign up', () => {
 
     const db = testDb();
     const row = await db.selectFrom('account').selectAll().where('email', '=', email).executeTakeFirstOrThrow();
-    expect(row.password_hash).toMatch(/^\$argon2id\$/);
+    expect(row.password_hash).toBe(pending.password_hash);
     const sessions = await db.selectFrom('session').selectAll().where('account_id', '=', row.id).execute();
     expect(sessions).toHaveLength(1);
     expect(sessions[0]!.id).toMatch(/^[0-9a-f]{64}$/);
     expect(sessions[0]!.id).not.toContain(token);
+    expect(await db.selectFrom('sign_up_request').select('id').where('email', '=', email).execute()).toEqual([]);
 
     const me = await client.get('/api/session');
     expect(me.status).toBe(200);
     expect(me.body.account.email).toBe(email);
   });
 
-  it('refuses a second account for the same e-mail, whatever its case', async () => {
+  it('never makes a second account for the same e-mail, whatever its case, and answers as for a new one', async () => {
     const email = uniqueEmail('dup');
     await createAccount({ email });
     for (const variant of [email, email.toUpperCase(), `  ${email.replace(/^./, (c) => c.toUpperCase())} `]) {
       const res = await new TestClient().post('/api/accounts', { email: variant, displayName: 'Copy', password: DEFAULT_PASSWORD });
-      expect(res.status).toBe(409);
-      expect(res.body.error.code).toBe('conflict');
-      expect(res.body.error.fields.email).toBeTruthy();
+      expect(res.status).toBe(202);
+      expect(res.body.message).toMatch(/Check your inbox/);
     }
     const count = await testDb()
       .selectFrom('account')
@@ -51,6 +62,7 @@ describe('sign up', () => {
       .where(sql<string>`lower(email)`, '=', email.toLowerCase())
       .executeTakeFirstOrThrow();
     expect(Number(count.n)).toBe(1);
+    expect(await testDb().selectFrom('sign_up_request').select('id').where(sql<string>`lower(email)`, '=', email.toLowerCase()).execute()).toEqual([]);
   });
 
   it('asks for a password of at least 10 characters', async () => {

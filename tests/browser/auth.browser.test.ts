@@ -1,10 +1,11 @@
-// The account flow in headless chromium: sign up → dashboard → sign out → sign in → dashboard → sign out,
+// The account flow in headless chromium: sign up → e-mailed link → dashboard → sign out → sign in → dashboard → sign out,
 // an admin changing a role, and the home page at phone and desktop widths. One browser for the file
 // (launching is the slow part); cookies are cleared between tests. Screenshots: $TEST_OUTPUT_DIR/screenshots/.
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { DEFAULT_PASSWORD, createAccount, uniqueEmail } from '../helpers/accounts.ts';
 import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
 import { closeTestDb } from '../helpers/db.ts';
+import { finishSignUpFromMail } from '../helpers/signUpFlow.ts';
 
 let browser: TestBrowser;
 beforeAll(async () => {
@@ -30,8 +31,11 @@ describe('account flow in the browser', () => {
     await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
     await page.getByLabel('Centimetres').check();
     await screenshot(page, '01-sign-up-filled');
+    const since = new Date();
     await page.getByRole('button', { name: 'Create account' }).click();
-    await page.waitForURL('**/dashboard');
+    await page.getByRole('status').filter({ hasText: 'Check your inbox' }).waitFor();
+    await screenshot(page, '01b-sign-up-check-inbox');
+    await finishSignUpFromMail(page, email, since);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toContain('Hollis Fairweather');
     expect(await page.getByRole('link', { name: 'Open my designs' }).getAttribute('href')).toBe('/designs');
     expect(await page.getByText('centimetres').count()).toBeGreaterThan(0);

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitBlockViewport, toScreen } from '../../src/components/editor/viewport.ts';
 import { DEFAULT_PASSWORD, uniqueEmail } from '../helpers/accounts.ts';
 import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
+import { finishSignUpFromMail } from '../helpers/signUpFlow.ts';
 
 let browser: TestBrowser;
 beforeAll(async () => {
@@ -53,11 +54,13 @@ describe('block workbench', () => {
     page.on('response', (r) => { if (r.status() >= 400) console.log('[http]', r.status(), r.url()); });
 
     await page.goto('/sign-up');
+    const email = uniqueEmail('workbench');
     await page.getByLabel('Display name').fill('Wren Calloway');
-    await page.getByLabel('E-mail').fill(uniqueEmail('workbench'));
+    await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill(DEFAULT_PASSWORD);
+    const since = new Date();
     await page.getByRole('button', { name: 'Create account' }).click();
-    await page.waitForURL('**/dashboard');
+    await finishSignUpFromMail(page, email, since);
 
     await page.goto('/designs');
     await page.getByText('No designs yet.').waitFor();

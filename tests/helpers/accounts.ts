@@ -1,6 +1,8 @@
-// Accounts for tests: fresh ones through the real sign-up API (role set in the database when asked),
-// and the seeded demo guild (db/seed/demo-accounts.json).
+// Accounts for tests: fresh ones written to the database (sign-up is e-mail confirmed and rate-limited per
+// address, so its own tests drive it: tests/api/resetAndSignUpLimits.test.ts) and signed in through the real
+// sign-in API; and the seeded demo guild (db/seed/demo-accounts.json).
 import { readFileSync } from 'node:fs';
+import { hash } from '@node-rs/argon2';
 import type { Role } from '../../db/schema.ts';
 import { TestClient } from './client.ts';
 import { testDb } from './db.ts';
@@ -24,18 +26,27 @@ export interface TestAccount {
   client: TestClient;
 }
 
-/** Signs up a new account through POST /api/accounts, then sets its role in the database. */
+// Argon2id with the app's parameters (src/server/auth/password.ts); one hash per password is enough for tests.
+const hashes = new Map<string, Promise<string>>();
+function passwordHash(password: string): Promise<string> {
+  let h = hashes.get(password);
+  if (!h) hashes.set(password, (h = hash(password.normalize('NFC'), { memoryCost: 19_456, timeCost: 2, parallelism: 1 })));
+  return h;
+}
+
+/** Writes a new account to the database as given, then signs it in through POST /api/session. */
 export async function createAccount(opts: { role?: Role; email?: string; password?: string; displayName?: string } = {}): Promise<TestAccount> {
   const role = opts.role ?? 'quilter';
   const email = opts.email ?? uniqueEmail(role);
   const password = opts.password ?? DEFAULT_PASSWORD;
   const displayName = opts.displayName ?? `Test ${role}`;
-  const client = new TestClient();
-  const res = await client.post('/api/accounts', { email, password, displayName, units: 'in' });
-  if (res.status !== 201) throw new Error(`tests/helpers/accounts: sign-up failed (${res.status}): ${res.text}`);
-  const id = res.body.account.id as string;
-  if (role !== 'quilter') await testDb().updateTable('account').set({ role }).where('id', '=', id).execute();
-  return { id, email, password, displayName, role, client };
+  const row = await testDb()
+    .insertInto('account')
+    .values({ email, display_name: displayName, password_hash: await passwordHash(password), role, units: 'in' })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  const client = await signIn(email, password);
+  return { id: row.id, email, password, displayName, role, client };
 }
 
 /** A new client signed in through POST /api/session; throws when the sign-in fails. */

@@ -33,4 +33,6 @@ export const guardedRoutes: GuardedRoute[] = [
   { kind: 'page', method: 'GET', path: '/dashboard', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/account', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/admin/accounts', minRole: 'admin' },
+  // Exists only with DEV_TOOLS (true under npm test); it shows reset links, so admins only.
+  { kind: 'page', method: 'GET', path: '/dev/mail', minRole: 'admin' },
 ];

@@ -1,23 +1,26 @@
-// POST /api/accounts — sign up. Creates the account (role quilter) and signs it in (201 + session cookie).
+// POST /api/accounts — sign up. Always 202 with the same message, whether or not the address already has an
+// account: a new address is e-mailed a link that creates the account (POST /api/accounts/confirm), a registered
+// one a note to its owner (src/server/accounts/signUpRequest.ts). Limited per client address and per e-mail.
 import type { APIRoute } from 'astro';
+import { PUBLIC_ORIGIN } from 'astro:env/server';
 import { db } from '../../server/db.ts';
-import { json, problem, readJson } from '../../server/http.ts';
+import { json, readJson } from '../../server/http.ts';
 import { signUpSchema } from '../../server/accounts/account.schema.ts';
-import { signUp } from '../../server/accounts/account.service.ts';
-import { toAccountJson } from '../../server/accounts/accountJson.ts';
-import { createSession, generateSessionToken, setSessionCookie } from '../../server/auth/session.ts';
+import { SIGN_UP_VALID_HOURS, pruneSignUpRequests, requestSignUp } from '../../server/accounts/signUpRequest.ts';
+import { reserveAll } from '../../server/auth/attemptGate.ts';
+import { signUpGates } from '../../server/auth/authLimits.ts';
+import { rateLimitedResponse } from '../../server/auth/rateLimitResponse.ts';
+import { clientIp } from '../../server/clientIp.ts';
 
-export const POST = (async ({ request, cookies, url }) => {
-  const body = await readJson(request, signUpSchema);
+export const POST = (async (context) => {
+  const body = await readJson(context.request, signUpSchema);
   if (!body.ok) return body.error;
-  const created = await signUp(db, body.value);
-  if (!created.ok) {
-    return problem(409, 'conflict', 'An account with this e-mail address already exists. Sign in, or reset your password.', {
-      email: 'This e-mail address is already registered.',
-    });
-  }
-  const token = generateSessionToken();
-  const session = await createSession(db, token, created.value.id);
-  setSessionCookie(cookies, url, token, session.expiresAt);
-  return json({ account: toAccountJson(created.value) }, 201);
+  const gate = await reserveAll(db, signUpGates(clientIp(context), body.value.email));
+  if (!gate.allowed) return rateLimitedResponse('sign-up requests', gate.retryAt);
+  await requestSignUp(db, body.value, PUBLIC_ORIGIN ?? context.url.origin);
+  if (Math.random() < 0.01) await pruneSignUpRequests(db);
+  return json(
+    { message: `Check your inbox: we sent you a link to finish creating your account. It works for ${SIGN_UP_VALID_HOURS} hours.` },
+    202,
+  );
 }) satisfies APIRoute;

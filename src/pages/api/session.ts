@@ -3,13 +3,17 @@ import type { APIRoute } from 'astro';
 import { db } from '../../server/db.ts';
 import { json, problem, readJson } from '../../server/http.ts';
 import { signInSchema } from '../../server/accounts/account.schema.ts';
-import { checkCredentials } from '../../server/accounts/account.service.ts';
 import { toAccountJson } from '../../server/accounts/accountJson.ts';
 import { requireUser } from '../../server/auth/guards.ts';
-import { SIGN_IN_ACCOUNT_RULE, SIGN_IN_RULE, checkRateLimit, clearRateLimit, consumeRateLimit } from '../../server/auth/rateLimit.ts';
+import { DEVICE_COOKIE } from '../../server/auth/knownDevice.ts';
+import { setDeviceCookie } from '../../server/auth/deviceCookie.ts';
 import { rateLimitedResponse } from '../../server/auth/rateLimitResponse.ts';
+import { attemptSignIn } from '../../server/auth/signInAttempt.ts';
 import { createSession, deleteSessionCookie, generateSessionToken, invalidateSession, setSessionCookie } from '../../server/auth/session.ts';
 import { clientIp } from '../../server/clientIp.ts';
+
+const ACCOUNT_HINT =
+  'This account has had many wrong passwords from devices it has not been used on. Sign in from a device you have signed in from before, or reset your password by e-mail (that also lets this device in).';
 
 export const GET = (({ locals }) => {
   const signedIn = requireUser(locals);
@@ -20,26 +24,20 @@ export const GET = (({ locals }) => {
 export const POST = (async (context) => {
   const body = await readJson(context.request, signInSchema);
   if (!body.ok) return body.error;
-  const { email, password } = body.value;
-  // Only failed attempts count, so a guild member signing in often is never locked out.
-  const limits = [
-    { key: `sign-in:${clientIp(context)}:${email.toLowerCase()}`, rule: SIGN_IN_RULE },
-    { key: `sign-in-account:${email.toLowerCase()}`, rule: SIGN_IN_ACCOUNT_RULE },
-  ];
-  for (const { key, rule } of limits) {
-    const gate = await checkRateLimit(db, key, rule);
-    if (!gate.allowed) return rateLimitedResponse('sign-in attempts', gate.retryAt);
+  const attempt = await attemptSignIn(db, {
+    ...body.value,
+    address: clientIp(context),
+    deviceCookie: context.cookies.get(DEVICE_COOKIE)?.value,
+  });
+  if (!attempt.ok) {
+    if (attempt.error.kind === 'invalid-credentials') return problem(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
+    return rateLimitedResponse('sign-in attempts', attempt.error.retryAt, new Date(), attempt.error.scope === 'account' ? ACCOUNT_HINT : undefined);
   }
-  const account = await checkCredentials(db, email, password);
-  if (!account.ok) {
-    for (const { key, rule } of limits) await consumeRateLimit(db, key, rule);
-    return problem(401, 'invalid_credentials', 'That e-mail and password do not match an account.');
-  }
-  for (const { key } of limits) await clearRateLimit(db, key);
+  setDeviceCookie(context.cookies, context.url, attempt.value.deviceCookie);
   const token = generateSessionToken();
-  const session = await createSession(db, token, account.value.id);
+  const session = await createSession(db, token, attempt.value.account.id);
   setSessionCookie(context.cookies, context.url, token, session.expiresAt);
-  return json({ account: toAccountJson(account.value) });
+  return json({ account: toAccountJson(attempt.value.account) });
 }) satisfies APIRoute;
 
 export const DELETE = (async ({ locals, cookies, url }) => {

@@ -4,38 +4,22 @@ import type { Kysely } from 'kysely';
 import type { Database, Role, UnitsPreference } from '../../../db/schema.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import { hashPassword, verifyPassword } from '../auth/password.ts';
-import { invalidateAccountSessions } from '../auth/session.ts';
+import { changePasswordHash } from '../auth/passwordChange.ts';
 import {
   findAccountRowByEmail,
   findAccountRowById,
-  insertAccount,
   lockAdminIds,
   rowToAccount,
   updateAccount,
   type Account,
 } from './account.repository.ts';
 
-// Verified against when the e-mail is unknown, so a wrong address costs the same Argon2 work as a wrong password.
+// Verified against when the e-mail is unknown, so a wrong address costs the same Argon2 work as a wrong password
+// (sign-in: src/server/auth/signInAttempt.ts; sign-up: src/server/accounts/signUpRequest.ts).
 let dummyHash: Promise<string> | undefined;
-function getDummyHash(): Promise<string> {
+export function getDummyHash(): Promise<string> {
   dummyHash ??= hashPassword('threadway-no-such-account-password');
   return dummyHash;
-}
-
-export async function signUp(
-  db: Kysely<Database>,
-  input: { email: string; displayName: string; password: string; units: UnitsPreference },
-): Promise<Result<Account, { kind: 'email-taken' }>> {
-  if (await findAccountRowByEmail(db, input.email)) return err({ kind: 'email-taken' });
-  const row = await insertAccount(db, { email: input.email, displayName: input.displayName, units: input.units, passwordHash: await hashPassword(input.password) });
-  return row ? ok(rowToAccount(row)) : err({ kind: 'email-taken' });
-}
-
-/** One answer for "no such e-mail" and "wrong password", after the same amount of hashing work. */
-export async function checkCredentials(db: Kysely<Database>, email: string, password: string): Promise<Result<Account, { kind: 'invalid-credentials' }>> {
-  const row = await findAccountRowByEmail(db, email);
-  const valid = await verifyPassword(row?.password_hash ?? (await getDummyHash()), password);
-  return row && valid ? ok(rowToAccount(row)) : err({ kind: 'invalid-credentials' });
 }
 
 export async function updateProfile(db: Kysely<Database>, accountId: string, changes: { displayName?: string | undefined; units?: UnitsPreference | undefined }): Promise<Account> {
@@ -52,17 +36,17 @@ async function checkCurrentPassword(db: Kysely<Database>, accountId: string, cur
   return row !== undefined && (await verifyPassword(row.password_hash, currentPassword));
 }
 
-/** Changes the password and signs out every other session of the account. */
+/** Changes the password; every reset link and every other session of the account ends (passwordChange.ts). */
 export async function changePassword(
   db: Kysely<Database>,
   accountId: string,
   keepSessionId: string,
   input: { currentPassword: string; newPassword: string },
-): Promise<Result<void, { kind: 'wrong-password' }>> {
+): Promise<Result<{ passwordHash: string }, { kind: 'wrong-password' }>> {
   if (!(await checkCurrentPassword(db, accountId, input.currentPassword))) return err({ kind: 'wrong-password' });
-  await updateAccount(db, accountId, { passwordHash: await hashPassword(input.newPassword) });
-  await invalidateAccountSessions(db, accountId, keepSessionId);
-  return ok(undefined);
+  const passwordHash = await hashPassword(input.newPassword);
+  await changePasswordHash(db, accountId, passwordHash, keepSessionId);
+  return ok({ passwordHash });
 }
 
 export async function changeEmail(

@@ -3,7 +3,8 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '../../../db/schema.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
-import { generateSessionToken, hashToken, invalidateAccountSessions } from './session.ts';
+import { setPasswordHash } from './passwordChange.ts';
+import { generateSessionToken, hashToken } from './session.ts';
 
 export const RESET_VALID_MINUTES = 60;
 
@@ -33,11 +34,8 @@ export async function consumePasswordReset(
     if (!row) return err('unknown' as const);
     if (row.used_at) return err('used' as const);
     if (row.expires_at.getTime() <= now.getTime()) return err('expired' as const);
-    await trx.updateTable('password_reset').set({ used_at: now }).where('id', '=', row.id).execute();
-    await trx.updateTable('account').set({ password_hash: passwordHash, updated_at: now }).where('id', '=', row.account_id).execute();
-    // Other unused links for this account stop working too: the password they would replace is gone.
-    await trx.updateTable('password_reset').set({ used_at: now }).where('account_id', '=', row.account_id).where('used_at', 'is', null).execute();
-    await invalidateAccountSessions(trx, row.account_id);
+    // Marks this link and every other unused one used, and signs the account out everywhere.
+    await setPasswordHash(trx, row.account_id, passwordHash, undefined, now);
     return ok({ accountId: row.account_id });
   });
 }

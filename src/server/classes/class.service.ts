@@ -98,8 +98,14 @@ export type JoinError = { kind: 'unknown-code' } | { kind: 'own-class' };
 
 /** Enrols the user in the class whose join code they typed. */
 export async function joinByCode(db: Kysely<Database>, user: SessionUser, typed: string): Promise<Result<{ classId: string; newlyJoined: boolean }, JoinError>> {
-  const cls = await db.selectFrom('class').select(['id', 'teacher_id']).where('join_code', '=', normalizeJoinCode(typed)).executeTakeFirst();
-  if (!cls) return err({ kind: 'unknown-code' });
+  const cls = await db
+    .selectFrom('class')
+    .innerJoin('account as teacher', 'teacher.id', 'class.teacher_id')
+    .select(['class.id', 'class.teacher_id', 'teacher.role as teacher_role'])
+    .where('class.join_code', '=', normalizeJoinCode(typed))
+    .executeTakeFirst();
+  // A class whose teacher is no longer a teacher takes no new students (the code answers as unknown).
+  if (!cls || cls.teacher_role === 'quilter') return err({ kind: 'unknown-code' });
   if (cls.teacher_id === user.id) return err({ kind: 'own-class' });
   const newlyJoined = await enrollStudent(db, cls.id, user.id, 'join-code');
   return ok({ classId: cls.id, newlyJoined });

@@ -1,7 +1,10 @@
 // Who may do what with a class. The class's teacher and admins manage it; enrolled students read it;
-// everyone else gets the same answer as for a class that does not exist (null → 404).
+// everyone else gets the same answer as for a class that does not exist (null → 404). The teacher's role is read
+// on every request: a teacher demoted to quilter stops managing their classes at once (the classes stay, read-only
+// for their students and managed by admins; see DEVELOPERS.md "Who may see what").
 import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
 import type { ClassTable, Database } from '../../../db/schema.ts';
+import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
@@ -24,7 +27,7 @@ export async function findClassAccess(db: Db, user: SessionUser, classId: string
   if (!isUuid(classId)) return null;
   const cls = await db.selectFrom('class').selectAll().where('id', '=', classId).executeTakeFirst();
   if (!cls) return null;
-  if (cls.teacher_id === user.id) return { cls, standing: 'teacher' };
+  if (cls.teacher_id === user.id && hasRole(user, 'teacher')) return { cls, standing: 'teacher' };
   if (user.role === 'admin') return { cls, standing: 'admin' };
   const enrolled = await db.selectFrom('enrollment').select('student_id').where('class_id', '=', cls.id).where('student_id', '=', user.id).executeTakeFirst();
   return enrolled ? { cls, standing: 'student' } : null;

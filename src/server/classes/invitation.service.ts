@@ -62,11 +62,12 @@ export async function inspectInvitation(db: Kysely<Database>, token: string, now
     .selectFrom('class_invitation as i')
     .innerJoin('class', 'class.id', 'i.class_id')
     .innerJoin('account as teacher', 'teacher.id', 'class.teacher_id')
-    .select(['i.id', 'i.email', 'i.expires_at', 'i.used_at', 'i.revoked_at', 'class.id as class_id', 'class.title', 'class.teacher_id', 'teacher.display_name'])
+    .select(['i.id', 'i.email', 'i.expires_at', 'i.used_at', 'i.revoked_at', 'class.id as class_id', 'class.title', 'class.teacher_id', 'teacher.display_name', 'teacher.role as teacher_role'])
     .where('i.token_hash', '=', hashToken(checked.value.id))
     .executeTakeFirst();
   if (!row) return err({ kind: 'forged' });
-  if (row.revoked_at) return err({ kind: 'revoked' });
+  // A teacher demoted to quilter: their open invitations stop working, as if withdrawn (see classAccess.ts).
+  if (row.revoked_at || row.teacher_role === 'quilter') return err({ kind: 'revoked' });
   if (row.used_at) return err({ kind: 'used', usedAt: row.used_at });
   if (row.expires_at.getTime() <= now.getTime()) return err({ kind: 'expired', expiredAt: row.expires_at });
   return ok({ invitationId: row.id, classId: row.class_id, classTitle: row.title, teacherId: row.teacher_id, teacherName: row.display_name, email: row.email, expiresAt: row.expires_at });

@@ -3,6 +3,7 @@
 // (the same rule also opens unlisted templates to those students, since their teacher chose it for them).
 import { sql, type Kysely } from 'kysely';
 import type { Database } from '../../../db/schema.ts';
+import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
 import type { TemplateRow } from './template.repository.ts';
 
@@ -23,6 +24,7 @@ export async function canSeeTemplate(db: Kysely<Database>, user: SessionUser | n
   return lesson !== undefined;
 }
 
+/** The owner while they are a teacher (a demoted teacher keeps reading their templates, no more), and admins. */
 export function canEditTemplate(user: SessionUser | null, tpl: TemplateRow): boolean {
-  return user !== null && (tpl.owner_id === user.id || user.role === 'admin');
+  return user !== null && ((tpl.owner_id === user.id && hasRole(user, 'teacher')) || user.role === 'admin');
 }

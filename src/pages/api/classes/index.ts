@@ -1,8 +1,9 @@
-// /api/classes — GET: my classes { teaching, enrolled }; POST: a teacher creates a class → 201 { class }.
+// /api/classes — GET: my classes { teaching, enrolled } (teaching: only while the account is a teacher); POST: a
+// teacher creates a class → 201 { class }.
 import type { APIRoute } from 'astro';
 import { db } from '../../../server/db.ts';
 import { json, readJson } from '../../../server/http.ts';
-import { requireRole, requireUser } from '../../../server/auth/guards.ts';
+import { hasRole, requireRole, requireUser } from '../../../server/auth/guards.ts';
 import { createClassSchema } from '../../../server/classes/class.schema.ts';
 import { createClass } from '../../../server/classes/class.service.ts';
 import { findClassRow, listClassesFor } from '../../../server/classes/class.repository.ts';
@@ -12,7 +13,8 @@ export const GET = (async ({ locals }) => {
   const signedIn = requireUser(locals);
   if (!signedIn.ok) return signedIn.error;
   const { teaching, enrolled } = await listClassesFor(db, signedIn.value.user.id);
-  return json({ teaching: teaching.map((c) => toClassJson(c, true)), enrolled: enrolled.map((c) => toClassJson(c, false)) });
+  const teacher = hasRole(signedIn.value.user, 'teacher');
+  return json({ teaching: teacher ? teaching.map((c) => toClassJson(c, true)) : [], enrolled: enrolled.map((c) => toClassJson(c, false)) });
 }) satisfies APIRoute;
 
 export const POST = (async ({ locals, request }) => {

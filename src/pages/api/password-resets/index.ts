@@ -1,5 +1,6 @@
 // POST /api/password-resets — ask for a reset link. Always 202, whether or not the e-mail has an
-// account, so the answer does not reveal who is registered. Rate-limited per IP address and e-mail.
+// account, so the answer does not reveal who is registered. Limited per client address and per e-mail
+// (authLimits.ts), reserved before anything is sent, so rotating X-Forwarded-For or a parallel burst gains nothing.
 import type { APIRoute } from 'astro';
 import { PUBLIC_ORIGIN } from 'astro:env/server';
 import { db } from '../../../server/db.ts';
@@ -7,7 +8,8 @@ import { json, readJson } from '../../../server/http.ts';
 import { resetRequestSchema } from '../../../server/accounts/account.schema.ts';
 import { findAccountRowByEmail } from '../../../server/accounts/account.repository.ts';
 import { RESET_VALID_MINUTES, createPasswordReset } from '../../../server/auth/passwordReset.ts';
-import { RESET_RULE, consumeRateLimit } from '../../../server/auth/rateLimit.ts';
+import { reserveAll } from '../../../server/auth/attemptGate.ts';
+import { resetGates } from '../../../server/auth/authLimits.ts';
 import { rateLimitedResponse } from '../../../server/auth/rateLimitResponse.ts';
 import { clientIp } from '../../../server/clientIp.ts';
 import { sendEmail } from '../../../server/mail/mailer.ts';
@@ -17,7 +19,7 @@ export const POST = (async (context) => {
   const body = await readJson(context.request, resetRequestSchema);
   if (!body.ok) return body.error;
   const { email } = body.value;
-  const gate = await consumeRateLimit(db, `reset:${clientIp(context)}:${email.toLowerCase()}`, RESET_RULE);
+  const gate = await reserveAll(db, resetGates(clientIp(context), email));
   if (!gate.allowed) return rateLimitedResponse('password-reset requests', gate.retryAt);
   const account = await findAccountRowByEmail(db, email);
   if (account) {

@@ -9,6 +9,7 @@ import { findLessonAccess, isManager } from '../../../../server/classes/classAcc
 import { MAX_UPLOAD_BYTES, photoProblemMessage, processPhoto } from '../../../../server/photos/photoImage.ts';
 import { MAX_PHOTOS_PER_LESSON, countPhotos, listPhotos, storePhoto } from '../../../../server/photos/photo.service.ts';
 import { readBytesCapped } from '../../../../server/readBody.ts';
+import { isPhotoCapViolation, photoCapResponse } from '../../../../server/photos/photoCap.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);
@@ -27,9 +28,7 @@ export const POST = (async ({ locals, params, request, url }) => {
   const side = url.searchParams.get('side') ?? 'front';
   if (side !== 'front' && side !== 'back') return problem(400, 'invalid_input', 'Say which side the photo shows: front or back.', { side: 'Use front or back.' });
   const studentId = signedIn.value.user.id;
-  if ((await countPhotos(db, access.lessonId, studentId)) >= MAX_PHOTOS_PER_LESSON) {
-    return problem(409, 'conflict', `You already have ${MAX_PHOTOS_PER_LESSON} photos for this lesson. Delete one to add another.`);
-  }
+  if ((await countPhotos(db, access.lessonId, studentId)) >= MAX_PHOTOS_PER_LESSON) return photoCapResponse();
   const bytes = await readBytesCapped(request, MAX_UPLOAD_BYTES);
   if (bytes === null) return problem(413, 'payload_too_large', `That photo is larger than ${MAX_UPLOAD_BYTES / (1024 * 1024)} MB. Send a smaller copy.`);
   const processed = await processPhoto(bytes);
@@ -37,7 +36,14 @@ export const POST = (async ({ locals, params, request, url }) => {
     const status = processed.error.kind === 'not-an-image' || processed.error.kind === 'heic' ? 415 : processed.error.kind === 'too-many-pixels' ? 413 : 400;
     return problem(status, status === 415 ? 'unsupported_media_type' : status === 413 ? 'payload_too_large' : 'invalid_input', photoProblemMessage(processed.error));
   }
-  const id = await storePhoto(db, access.lessonId, studentId, side, processed.value);
+  let id: string;
+  try {
+    id = await storePhoto(db, access.lessonId, studentId, side, processed.value);
+  } catch (error) {
+    // Parallel uploads that all passed the count above: the database cap refused this one (its objects are gone).
+    if (isPhotoCapViolation(error)) return photoCapResponse();
+    throw error;
+  }
   const [photo] = await listPhotos(db, { classId: access.cls.id, lessonId: access.lessonId, studentId }).then((all) => all.filter((p) => p.id === id));
   return json({ photo }, 201);
 }) satisfies APIRoute;

@@ -10,6 +10,7 @@ import { buildApp, runTs, serveApp } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
 import { clusterLocation } from './lib/cluster.mjs';
+import { superviseApp } from './lib/supervise.mjs';
 
 ensureNodeModules();
 const pgBin = ensurePostgres();
@@ -36,7 +37,12 @@ buildApp();
 
 const appPort = Number(process.env.PORT ?? (await findFreePort(4321)));
 const origin = `http://127.0.0.1:${appPort}`;
-const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: origin } });
+// The app survives a database restart by itself (503 meanwhile); should it still crash, it is started again
+// rather than taking the database and the fakes down with it.
+const app = superviseApp({
+  start: () => serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: origin } }),
+  onGiveUp: () => shutdown(),
+});
 await waitForHttp(origin);
 
 console.log(`
@@ -54,7 +60,7 @@ async function shutdown() {
   if (stopping) return;
   stopping = true;
   log('stopping…');
-  server.kill('SIGTERM');
+  await app.stop();
   await mail.close();
   await s3.close();
   stopCluster(pgBin, pgDir);
@@ -63,12 +69,6 @@ async function shutdown() {
 }
 process.on('SIGINT', shutdown);
 process.on('SIGTERM', shutdown);
-server.on('exit', (code) => {
-  if (!stopping) {
-    log(`the app exited (code ${code}).`);
-    shutdown();
-  }
-});
 
 function readDemoAccounts() {
   return JSON.parse(readFileSync(path.join(ROOT, 'db', 'seed', 'demo-accounts.json'), 'utf8')).accounts;

@@ -21,6 +21,7 @@ export type ErrorCode =
   | 'last_admin'
   | 'engine_timeout'
   | 'engine_busy'
+  | 'database_unavailable'
   | 'internal';
 
 export type FieldErrors = Readonly<Record<string, string>>;

@@ -3,6 +3,7 @@ import * as createAccounts from './2026_12_02_1400_create_accounts.ts';
 import * as createDesigns from './2026_12_02_1500_create_designs.ts';
 import * as createTeaching from './2026_12_02_1600_create_teaching.ts';
 import * as addDesignTemplateSource from './2026_12_02_1610_add_design_template_source.ts';
+import * as addDesignSummaryVersion from './2026_12_04_1200_add_design_summary_version.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
@@ -10,6 +11,7 @@ export const migrations: Record<string, Migration> = {
   '2026_12_02_1500_create_designs': createDesigns,
   '2026_12_02_1600_create_teaching': createTeaching,
   '2026_12_02_1610_add_design_template_source': addDesignTemplateSource,
+  '2026_12_04_1200_add_design_summary_version': addDesignSummaryVersion,
 };
 
 export const migrationProvider: MigrationProvider = {

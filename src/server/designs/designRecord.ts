@@ -1,8 +1,9 @@
 // Rows → the JSON the API sends. jsonb read back from Postgres is `unknown` until a schema accepts it:
 // a stored design that no longer parses is a broken invariant (we only ever store parsed designs), so it throws.
 import { z } from 'zod';
-import type { DesignRouteRow, DesignRow, DesignVersionRow } from '../../../db/schema.ts';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import type { DesignRouteRow, DesignRow } from '../../../db/schema.ts';
+import type { DesignRecordRow, DesignVersionRecordRow } from './design.repository.ts';
+import type { Design } from '../../../shared/design/design.schema.ts';
 import type { DesignSummary, RouteFigures } from '../engine/engine.types.ts';
 
 const figure = z.number().finite();
@@ -51,9 +52,6 @@ function parseStored<S extends z.ZodType>(schema: S, value: unknown, what: strin
   return parsed.data;
 }
 
-export function storedDesign(row: Pick<DesignRow, 'id' | 'data'>): Design {
-  return parseStored(designSchema, row.data, `design ${row.id}`);
-}
 
 export interface DesignJson {
   id: string;
@@ -62,31 +60,40 @@ export interface DesignJson {
   version: number;
   design: Design;
   summary: DesignSummary | null;
+  /** True while the figures of this version are still being computed (saves do not wait for the planner). */
+  summaryPending: boolean;
   createdAt: string;
   updatedAt: string;
 }
 
-export function toDesignJson(row: DesignRow): DesignJson {
-  return {
+/** Figures of the row's current version; null while pending or when the planner refused the design. */
+export function currentSummaryOf(row: Pick<DesignRow, 'id' | 'summary' | 'summary_version' | 'version'>): DesignSummary | null {
+  if (row.summary === null || row.summary_version !== row.version) return null;
+  return parseStored(designSummarySchema, row.summary, `summary of design ${row.id}`);
+}
+
+/**
+ * DesignJson as JSON text, with the drawing spliced in as text: `designText` is canonical JSON that a schema
+ * has accepted (designPayload.ts), so a heavy design is never parsed or re-serialised on the request thread.
+ */
+export function designJsonText(row: DesignRecordRow, designText: string): string {
+  const meta: Omit<DesignJson, 'design'> = {
     id: row.id,
     title: row.title,
     notes: row.notes,
     version: row.version,
-    design: storedDesign(row),
-    summary: row.summary === null ? null : parseStored(designSummarySchema, row.summary, `summary of design ${row.id}`),
+    summary: currentSummaryOf(row),
+    summaryPending: row.summary_version !== row.version,
     createdAt: row.created_at.toISOString(),
     updatedAt: row.updated_at.toISOString(),
   };
+  return `{"design":${designText},${JSON.stringify(meta).slice(1)}`;
 }
 
-export function toDesignVersionJson(row: DesignVersionRow) {
-  return {
-    version: row.version,
-    title: row.title,
-    notes: row.notes,
-    design: parseStored(designSchema, row.data, `version ${row.version} of design ${row.design_id}`),
-    savedAt: row.saved_at.toISOString(),
-  };
+/** One saved version as JSON text (drawing spliced in as in designJsonText). */
+export function designVersionJsonText(row: DesignVersionRecordRow, designText: string): string {
+  const meta = { version: row.version, title: row.title, notes: row.notes, savedAt: row.saved_at.toISOString() };
+  return `{"design":${designText},${JSON.stringify(meta).slice(1)}`;
 }
 
 export function toSavedRouteJson(row: DesignRouteRow, currentVersion: number) {

@@ -21,7 +21,7 @@ export interface WorkerPoolOptions {
   readonly maxQueue: number;
   /** Most interactive jobs one key may have waiting; one more is refused as `account-busy`. Default: maxQueue. */
   readonly maxQueuedPerKey?: number;
-  /** Most workers one key may hold at once (the rest stay free for others). Default: size. */
+  /** Most workers one key's interactive jobs may hold at once (the rest stay free for others). Default: size. */
   readonly maxRunningPerKey?: number;
   /** Most workers background jobs may hold at once. Default: size. */
   readonly maxRunningBackground?: number;
@@ -35,6 +35,8 @@ export interface JobOptions {
   readonly key?: string;
   /** `background`: nobody waits for it (runs when no interactive job can). Default `interactive`. */
   readonly lane?: Lane;
+  /** The request's signal: a job whose client went away is taken out of the queue (`cancelled`). */
+  readonly signal?: AbortSignal;
 }
 
 /** Why a job gave no answer. `failed` means the worker threw (a broken invariant in the engine). */
@@ -45,6 +47,8 @@ export type PoolFailure =
   | { readonly kind: 'account-busy'; readonly queued: number }
   /** Waited `ms` for a worker without getting one. */
   | { readonly kind: 'queue-timeout'; readonly ms: number }
+  /** The caller's signal aborted while the job waited (the client went away); the job never ran. */
+  | { readonly kind: 'cancelled' }
   | { readonly kind: 'failed'; readonly message: string }
   | { readonly kind: 'closed' };
 
@@ -102,8 +106,9 @@ export class WorkerPool<TIn, TOut> {
    * Runs one job; never rejects. Workers start on first use; a job waits while every worker is busy or loading,
    * or while its key already holds its share of workers.
    */
-  run(input: TIn, { key = '', lane = 'interactive' }: JobOptions = {}): Promise<Result<TOut, PoolFailure>> {
+  run(input: TIn, { key = '', lane = 'interactive', signal }: JobOptions = {}): Promise<Result<TOut, PoolFailure>> {
     if (this.closed) return Promise.resolve(err({ kind: 'closed' }));
+    if (signal?.aborted) return Promise.resolve(err({ kind: 'cancelled' }));
     return new Promise((resolve) => {
       const job: Job = { id: this.nextId++, input, key, lane, resolve: resolve as Job['resolve'], waitTimer: null };
       const queued = this.queue.push(key, lane, job);
@@ -123,6 +128,15 @@ export class WorkerPool<TIn, TOut> {
         };
         job.waitTimer = setTimeout(expire, waitMs).unref();
       }
+      signal?.addEventListener(
+        'abort',
+        () => {
+          if (!this.queue.remove(key, lane, job)) return;
+          if (job.waitTimer) clearTimeout(job.waitTimer);
+          job.resolve(err({ kind: 'cancelled' }));
+        },
+        { once: true },
+      );
       while (this.slots.length < this.options.size) this.slots.push(this.spawn());
       this.dispatch();
     });
@@ -200,15 +214,14 @@ export class WorkerPool<TIn, TOut> {
     }
   }
 
+  /** Interactive jobs: within the key's share of workers. Background jobs: within the background share. */
   private mayRun(key: string, lane: Lane): boolean {
-    let ofKey = 0;
-    let background = 0;
+    let running = 0;
     for (const s of this.slots) {
-      if (!s.job) continue;
-      if (s.job.key === key) ofKey += 1;
-      if (s.job.lane === 'background') background += 1;
+      if (s.job?.lane !== lane) continue;
+      if (lane === 'background' || s.job.key === key) running += 1;
     }
-    return ofKey < this.maxRunningPerKey && (lane === 'interactive' || background < this.maxRunningBackground);
+    return running < (lane === 'interactive' ? this.maxRunningPerKey : this.maxRunningBackground);
   }
 
   /**

@@ -25,6 +25,8 @@ describe('isDatabaseUnavailable', () => {
     expect(isDatabaseUnavailable(new TypeError('Cannot read properties of undefined'))).toBe(false);
     expect(isDatabaseUnavailable('Connection terminated')).toBe(false);
     expect(isDatabaseUnavailable(null)).toBe(false);
+    // A client that hangs up while its body is read (node:http) is not a database outage.
+    expect(isDatabaseUnavailable(Object.assign(new Error('aborted'), { code: 'ECONNRESET' }))).toBe(false);
   });
 });
 

@@ -23,6 +23,8 @@ const UNAVAILABLE_MESSAGES = [
 export function isDatabaseUnavailable(error: unknown, depth = 0): boolean {
   if (depth > 4 || typeof error !== 'object' || error === null) return false;
   const e = error as { code?: unknown; message?: unknown; cause?: unknown; errors?: unknown };
+  // node:http's "aborted" (ECONNRESET) is the browser going away mid-request, not the database.
+  if (e.message === 'aborted') return false;
   if (typeof e.code === 'string') {
     if (UNAVAILABLE_SQLSTATES.has(e.code) || /^08[0-9A-Z]{3}$/.test(e.code) || UNAVAILABLE_NODE_CODES.has(e.code)) return true;
   }

@@ -20,6 +20,8 @@ const catchErrors = defineMiddleware(async (context, next) => {
     }
     return response;
   } catch (error) {
+    // The client hung up mid-request (e.g. an aborted route check): nobody reads the answer, nothing to log.
+    if (context.request.signal.aborted) return new Response(null, { status: 499 });
     if (isDatabaseUnavailable(error)) {
       logDatabaseUnavailable(context.request.method, context.url.pathname, error);
       return databaseUnavailableResponse(isApi(context.url));

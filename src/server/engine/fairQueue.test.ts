@@ -53,4 +53,26 @@ describe('FairQueue', () => {
     expect(q.size).toBe(0);
     expect(q.take(all)).toBeUndefined();
   });
+
+  it('serves the account that used the least engine time lately first; the use halves every 20 s', () => {
+    const q = new FairQueue<string>({ maxQueued: 10, maxQueuedPerKey: 10 });
+    q.charge('flood', 2_000, 0); // two seconds of plans just finished
+    q.charge('ann', 30, 0); // three quick checks
+    q.push('flood', 'interactive', 'flood-plan');
+    q.push('ann', 'interactive', 'ann-check');
+    q.push('bea', 'interactive', 'bea-check'); // nothing used yet
+    expect(drainOrderAt(q, 0)).toEqual(['bea-check', 'ann-check', 'flood-plan']);
+    expect(q.usageOf('flood', 20_000)).toBeCloseTo(1_000, 9);
+    expect(q.usageOf('flood', 40_000)).toBeCloseTo(500, 9);
+    // Forgiven over time, but the order still follows use: 2 s of plans a minute ago still outweighs 30 ms now.
+    q.push('flood', 'interactive', 'flood-plan-2');
+    q.push('ann', 'interactive', 'ann-check-2');
+    expect(drainOrderAt(q, 60_000)).toEqual(['ann-check-2', 'flood-plan-2']);
+  });
 });
+
+function drainOrderAt(q: FairQueue<string>, now: number): string[] {
+  const out: string[] = [];
+  for (let next = q.take(all, now); next; next = q.take(all, now)) out.push(next.job);
+  return out;
+}

@@ -1,4 +1,5 @@
-// The worker pool's waiting room: one queue per account, served in fair turns (round-robin), so an account that sends a
+// The worker pool's waiting room: one queue per account, the account with the least engine time used lately first,
+// then in fair turns (round-robin), so an account that sends a
 // hundred plans waits behind its own jobs, not in front of everyone else's. Two lanes: `interactive` (a
 // person waits for the answer: checks, plans) before `background` (figures for the designs table).
 // Pure bookkeeping, no timers or workers: workerPool.ts decides when to take a job and where it runs.
@@ -36,14 +37,18 @@ class TurnLane<J> {
     else this.queues.set(key, [entry]);
   }
 
-  /** The job with the earliest turn (then the earliest arrival) among keys `canRun` allows. */
-  take(canRun: (key: string) => boolean): { key: string; job: J } | undefined {
-    let best: { key: string; turn: number; seq: number } | undefined;
+  /**
+   * The job of the key with the least engine time used lately (`usage`), then the earliest turn, then the
+   * earliest arrival, among keys `canRun` allows.
+   */
+  take(canRun: (key: string) => boolean, usage: (key: string) => number): { key: string; job: J } | undefined {
+    let best: { key: string; used: number; turn: number; seq: number } | undefined;
     for (const [key, q] of this.queues) {
       const head = q[0]!;
-      if (best && (head.turn > best.turn || (head.turn === best.turn && head.seq > best.seq))) continue;
+      const used = usage(key);
+      if (best && (used > best.used || (used === best.used && (head.turn > best.turn || (head.turn === best.turn && head.seq > best.seq))))) continue;
       if (!canRun(key)) continue;
-      best = { key, turn: head.turn, seq: head.seq };
+      best = { key, used, turn: head.turn, seq: head.seq };
     }
     if (!best) return undefined;
     const q = this.queues.get(best.key)!;
@@ -75,8 +80,13 @@ class TurnLane<J> {
   }
 }
 
+/** Engine time used lately counts half after this long (ms): an account that flooded a minute ago is forgiven. */
+export const USAGE_HALF_LIFE_MS = 20_000;
+
 export class FairQueue<J> {
   private readonly lanes = { interactive: new TurnLane<J>(), background: new TurnLane<J>() };
+  /** Engine time each key used (ms, decaying), as of `at`. */
+  private readonly used = new Map<string, { ms: number; at: number }>();
   private count = 0;
 
   constructor(private readonly limits: FairQueueLimits) {
@@ -104,15 +114,33 @@ export class FairQueue<J> {
    * The next job to run: interactive before background; within a lane, round-robin over keys.
    * `canRun(key, lane)` lets the pool hold back a key (it already runs its share) or a lane.
    */
-  take(canRun: (key: string, lane: Lane) => boolean): { job: J; key: string; lane: Lane } | undefined {
+  take(canRun: (key: string, lane: Lane) => boolean, now = Date.now()): { job: J; key: string; lane: Lane } | undefined {
     for (const lane of ['interactive', 'background'] as const) {
-      const next = this.lanes[lane].take((key) => canRun(key, lane));
+      const next = this.lanes[lane].take(
+        (key) => canRun(key, lane),
+        (key) => this.usageOf(key, now),
+      );
       if (next) {
         this.count -= 1;
         return { ...next, lane };
       }
     }
     return undefined;
+  }
+
+  /**
+   * Records `ms` of engine time used by `key` (a finished job). Turns count jobs, but a plan can cost a hundred
+   * checks: keys that used less engine time lately go first, so a flood of slow jobs gets its share by time.
+   */
+  charge(key: string, ms: number, now = Date.now()): void {
+    this.used.set(key, { ms: this.usageOf(key, now) + Math.max(0, ms), at: now });
+    if (this.used.size > 1_000) for (const [k] of this.used) if (this.usageOf(k, now) < 1) this.used.delete(k);
+  }
+
+  /** Engine time `key` used lately (ms, halved every USAGE_HALF_LIFE_MS). */
+  usageOf(key: string, now = Date.now()): number {
+    const u = this.used.get(key);
+    return u ? u.ms * 0.5 ** (Math.max(0, now - u.at) / USAGE_HALF_LIFE_MS) : 0;
   }
 
   /** Takes a waiting job out (its wait ran out); false when it is no longer waiting. */

@@ -65,6 +65,8 @@ interface Job {
   readonly lane: Lane;
   readonly resolve: (r: Result<unknown, PoolFailure>) => void;
   waitTimer: NodeJS.Timeout | null;
+  /** When a worker took it (ms, Date.now()), to charge its key the engine time it used. */
+  startedAt: number;
 }
 
 interface Slot {
@@ -110,7 +112,7 @@ export class WorkerPool<TIn, TOut> {
     if (this.closed) return Promise.resolve(err({ kind: 'closed' }));
     if (signal?.aborted) return Promise.resolve(err({ kind: 'cancelled' }));
     return new Promise((resolve) => {
-      const job: Job = { id: this.nextId++, input, key, lane, resolve: resolve as Job['resolve'], waitTimer: null };
+      const job: Job = { id: this.nextId++, input, key, lane, resolve: resolve as Job['resolve'], waitTimer: null, startedAt: 0 };
       const queued = this.queue.push(key, lane, job);
       if (!queued.ok) {
         resolve(err(queued.error.kind === 'full' ? { kind: 'busy', queued: queued.error.queued } : { kind: 'account-busy', queued: queued.error.queued }));
@@ -201,6 +203,7 @@ export class WorkerPool<TIn, TOut> {
       const job = next.job;
       if (job.waitTimer) clearTimeout(job.waitTimer);
       job.waitTimer = null;
+      job.startedAt = Date.now();
       slot.job = job;
       slot.timer = setTimeout(() => this.replace(slot, { kind: 'timeout', ms: this.options.timeoutMs }), this.options.timeoutMs);
       slot.worker.postMessage({ id: job.id, input: job.input });
@@ -259,6 +262,7 @@ export class WorkerPool<TIn, TOut> {
   }
 
   private release(slot: Slot): void {
+    if (slot.job) this.queue.charge(slot.job.key, Date.now() - slot.job.startedAt);
     if (slot.timer) clearTimeout(slot.timer);
     slot.timer = null;
     slot.job = null;

@@ -212,6 +212,9 @@ export interface DesignTable {
   thumbnail_svg: string;
   version: ColumnType<number, number | undefined, number>;
   summary: ColumnType<unknown, string | null, string | null>;
+  /** The version `summary` was computed for; while it differs from `version` the figures are still being
+   * computed (migration 2026_12_04_1200). */
+  summary_version: ColumnType<number | null, number | null | undefined, number | null>;
   created_at: CreatedAt;
   updated_at: UpdatedAt;
   deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;

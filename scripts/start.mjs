@@ -11,6 +11,7 @@ import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
 import { clusterLocation } from './lib/cluster.mjs';
 import { wantsDevTools } from './lib/devTools.mjs';
+import { superviseApp } from './lib/supervise.mjs';
 
 ensureNodeModules();
 const pgBin = ensurePostgres();
@@ -39,7 +40,12 @@ buildApp();
 
 const appPort = Number(process.env.PORT ?? (await findFreePort(4321)));
 const origin = `http://127.0.0.1:${appPort}`;
-const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: origin } });
+// The app survives a database restart by itself (503 meanwhile); should it still crash, it is started again
+// rather than taking the database and the fakes down with it.
+const app = superviseApp({
+  start: () => serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: origin } }),
+  onGiveUp: () => shutdown(),
+});
 await waitForHttp(origin);
 
 console.log(`
@@ -58,7 +64,7 @@ async function shutdown() {
   if (stopping) return;
   stopping = true;
   log('stopping…');
-  server.kill('SIGTERM');
+  await app.stop();
   await mail.close();
   await s3.close();
   stopCluster(pgBin, pgDir);
@@ -67,12 +73,6 @@ async function shutdown() {
 }
 process.on('SIGINT', shutdown);
 process.on('SIGTERM', shutdown);
-server.on('exit', (code) => {
-  if (!stopping) {
-    log(`the app exited (code ${code}).`);
-    shutdown();
-  }
-});
 
 function readDemoAccounts() {
   return JSON.parse(readFileSync(path.join(ROOT, 'db', 'seed', 'demo-accounts.json'), 'utf8')).accounts;

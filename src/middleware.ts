@@ -6,6 +6,7 @@ import { db } from './server/db.ts';
 import { problem } from './server/http.ts';
 import { isForeignRequest } from './server/originCheck.ts';
 import { withSecurityHeaders } from './server/securityHeaders.ts';
+import { databaseUnavailableResponse, isDatabaseUnavailable, logDatabaseUnavailable } from './server/dbOutage.ts';
 import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from './server/auth/session.ts';
 // Loaded with the middleware, i.e. when the server takes its first request: starts the lesson-release e-mail sweep.
 import './server/classes/releaseSchedule.ts';
@@ -23,6 +24,12 @@ const catchErrors = defineMiddleware(async (context, next) => {
     }
     return response;
   } catch (error) {
+    // The client hung up mid-request (e.g. an aborted route check): nobody reads the answer, nothing to log.
+    if (context.request.signal.aborted) return new Response(null, { status: 499 });
+    if (isDatabaseUnavailable(error)) {
+      logDatabaseUnavailable(context.request.method, context.url.pathname, error);
+      return databaseUnavailableResponse(isApi(context.url));
+    }
     console.error(`[server] ${context.request.method} ${context.url.pathname} failed:`, error);
     if (isApi(context.url)) return problem(500, 'internal', 'Something went wrong on our side. Please try again.');
     // An empty 500 makes Astro render src/pages/500.astro.

@@ -5,6 +5,7 @@ import * as createTeaching from './2026_12_02_1600_create_teaching.ts';
 import * as addDesignTemplateSource from './2026_12_02_1610_add_design_template_source.ts';
 import * as repairCopiedDesignSummaries from './2026_12_04_0900_repair_copied_design_summaries.ts';
 import * as hardenAccounts from './2026_12_04_1710_harden_accounts.ts';
+import * as addDesignSummaryVersion from './2026_12_04_1800_add_design_summary_version.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
@@ -14,6 +15,7 @@ export const migrations: Record<string, Migration> = {
   '2026_12_02_1610_add_design_template_source': addDesignTemplateSource,
   '2026_12_04_0900_repair_copied_design_summaries': repairCopiedDesignSummaries,
   '2026_12_04_1710_harden_accounts': hardenAccounts,
+  '2026_12_04_1800_add_design_summary_version': addDesignSummaryVersion,
 };
 
 export const migrationProvider: MigrationProvider = {

@@ -24,8 +24,16 @@ export async function seedDesign(db: Kysely<Database>, ownerId: string, d: Guild
   const summary = summaryOf(plan);
   const strokes = plan.route.map(({ pass, kind, points, length }) => ({ pass, kind, points, length }));
   return db.transaction().execute(async (trx) => {
-    const row = await insertDesign(trx, { ownerId, title: d.title, notes: d.notes, data: d.design, thumbnailSvg: buildDesignThumbnailSvg(d.design), summary });
-    await insertDesignVersion(trx, row);
+    const row = await insertDesign(trx, {
+      ownerId,
+      title: d.title,
+      notes: d.notes,
+      dataJson: JSON.stringify(d.design),
+      thumbnailSvg: buildDesignThumbnailSvg(d.design),
+      summary,
+      summaryCurrent: true,
+    });
+    await insertDesignVersion(trx, row.id);
     await upsertDesignRoute(trx, { designId: row.id, kind: 'planned', strokes, summary, designVersion: row.version });
     return { id: row.id, added: true };
   });

@@ -2,6 +2,7 @@ import type { Design } from '../design/design.schema.ts';
 import { bindingBandOf, CM_PER_INCH } from '../design/design.schema.ts';
 import type { Point, Polyline } from '../geometry/point.ts';
 import { assertNever } from '../assertNever.ts';
+import { thumbnailLines, type ThumbnailLines } from './thumbnailLines.ts';
 
 /** One stroke of a route as the SVG draws it (the planner's and the route check's strokes fit this shape). */
 export interface SvgStroke {
@@ -90,8 +91,9 @@ export function designSvgParts(design: Design, options: DesignSvgOptions = {}): 
 }
 
 /**
- * A small SVG of a design for lists: no text, fixed pixel size, quilting lines and seams only, points closer
- * than 1/200 of the block's longer side to the previous kept point dropped (the end of a line is always kept).
+ * A small SVG of a design for lists: no text, fixed pixel size, quilting lines and seams only, simplified to a
+ * fixed point budget (thumbnailLines.ts) so a design at the 200,000-point cap still gives a few kilobytes.
+ * Line ends are always kept; lines left out of a very dense design show as shaded cells.
  */
 export function buildDesignThumbnailSvg(design: Design, pixels = 96): string {
   return svgDocument(designThumbnailSvgParts(design, pixels));
@@ -101,18 +103,36 @@ export function buildDesignThumbnailSvg(design: Design, pixels = 96): string {
 export function designThumbnailSvgParts(design: Design, pixels = 96): SvgParts {
   const { width: w, height: h } = design;
   const side = Math.max(w, h);
-  const keep = side / 200;
   const scale = pixels / side;
-  const seams = design.seams.map((l) => thin(l, keep));
-  const lines = design.lines.map((l) => thin(l, keep));
+  const seams = thumbnailLines(design.seams, side, pixels, THUMBNAIL_SEAM_BUDGET);
+  const lines = thumbnailLines(design.lines, side, pixels);
   const content = [
     `<rect x="0" y="0" width="${num(w)}" height="${num(h)}" fill="${INK.block}" stroke="${INK.outline}" stroke-width="${num(side * 0.01)}"/>`,
+    shadedCells(seams, INK.seam),
+    shadedCells(lines, INK.stitch),
     `<g fill="none" stroke-linecap="round" stroke-linejoin="round">`,
-    pathGroup(seams, `stroke="${INK.seam}" stroke-width="${num(side * 0.006)}"`, 'seams'),
-    pathGroup(lines, `stroke="${INK.stitch}" stroke-width="${num(side * 0.008)}"`, 'quilting-lines'),
+    pathGroup(seams.lines, `stroke="${INK.seam}" stroke-width="${num(side * 0.006)}"`, 'seams'),
+    pathGroup(lines.lines, `stroke="${INK.stitch}" stroke-width="${num(side * 0.008)}"`, 'quilting-lines'),
     '</g>',
-  ].join('\n');
+  ].filter(Boolean).join('\n');
   return { width: num(w * scale), height: num(h * scale), viewBox: `0 0 ${num(w)} ${num(h)}`, content };
+}
+
+const THUMBNAIL_SEAM_BUDGET = 200;
+
+/** Cells as one path of row runs (fewer bytes than a rect per cell); '' when there are none. */
+function shadedCells(t: ThumbnailLines, colour: string): string {
+  if (t.shadedCells.length === 0) return '';
+  const c = t.cellSize;
+  const runs: string[] = [];
+  for (let i = 0; i < t.shadedCells.length; ) {
+    const [col, row] = t.shadedCells[i]!;
+    let end = i + 1;
+    while (end < t.shadedCells.length && t.shadedCells[end]![1] === row && t.shadedCells[end]![0] === col + (end - i)) end++;
+    runs.push(`M${num(col * c)} ${num(row * c)}h${num((end - i) * c)}v${num(c)}h${num(-(end - i) * c)}Z`);
+    i = end;
+  }
+  return `<path class="dense" d="${runs.join('')}" fill="${colour}" fill-opacity="0.35"/>`;
 }
 
 function routeGroup(route: readonly SvgStroke[], stroke: number, side: number): string {
@@ -212,13 +232,6 @@ function pathGroup(lines: readonly Polyline[], style: string, cls: string): stri
 
 function pathData(points: readonly Point[]): string {
   return points.map((p, i) => `${i === 0 ? 'M' : 'L'}${pt(p)}`).join('');
-}
-
-function thin(line: Polyline, keep: number): Polyline {
-  const out: Point[] = [line[0]!];
-  for (let i = 1; i < line.length - 1; i++) if (dist(out[out.length - 1]!, line[i]!) >= keep) out.push(line[i]!);
-  out.push(line[line.length - 1]!);
-  return out;
 }
 
 const dist = (a: Point, b: Point): number => Math.hypot(b[0] - a[0], b[1] - a[1]);

@@ -22,6 +22,7 @@ export type ErrorCode =
   | 'last_admin'
   | 'engine_timeout'
   | 'engine_busy'
+  | 'database_unavailable'
   | 'internal';
 
 export type FieldErrors = Readonly<Record<string, string>>;
@@ -112,7 +113,8 @@ export function sizeInWords(bytes: number): string {
   return `${bytes} bytes`;
 }
 
-function tooLarge(cap: { bytes: number; hint: string }): Response {
+/** 413 that says the cap in words (and what it protects). */
+export function tooLarge(cap: { bytes: number; hint: string }): Response {
   const message = `The request body is larger than ${sizeInWords(cap.bytes)}, the most this request may carry.${cap.hint ? ` ${cap.hint}` : ''}`;
   return problem(413, 'payload_too_large', message, { body: `At most ${sizeInWords(cap.bytes)}.` });
 }

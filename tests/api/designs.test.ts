@@ -3,6 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createAccount, type TestAccount } from '../helpers/accounts.ts';
 import { closeTestDb } from '../helpers/db.ts';
+import { waitForFigures, waitForListFigures } from '../helpers/designFigures.ts';
 import { block } from './designFixtures.ts';
 
 let ann: TestAccount;
@@ -18,17 +19,18 @@ async function create(account: TestAccount, title: string, design = block()) {
 }
 
 describe('create, read, update', () => {
-  it('creates a design (version 1, schema defaults applied, figures from the planner) and reads it back', async () => {
+  it('creates a design (version 1, schema defaults applied, figures from the planner after the save) and reads it back', async () => {
     const created = await create(ann, '  Nine-patch sampler  ');
     expect(created).toMatchObject({ title: 'Nine-patch sampler', notes: '', version: 1 });
     expect(created.design).toEqual({ ...block(), edgeTravel: true });
+    // The save does not wait for the planner: no figures yet.
+    expect(created).toMatchObject({ summary: null, summaryPending: true });
+    const read = await waitForFigures(ann.client, created.id);
     // Two straight lines joined by the seam and the block edge: one pass (common sense; the planner's own tests
     // check optimality against worked examples).
-    expect(created.summary).toMatchObject({ passes: 1, stops: 0, pieces: 2, units: 'in' });
-    expect(created.summary.stitchLength).toBeCloseTo(24, 9);
-    const read = await ann.client.get(`/api/designs/${created.id}`);
-    expect(read.status).toBe(200);
-    expect(read.body.design).toEqual(created);
+    expect(read.summary).toMatchObject({ passes: 1, stops: 0, pieces: 2, units: 'in' });
+    expect(read.summary.stitchLength).toBeCloseTo(24, 9);
+    expect(read).toEqual({ ...created, summary: read.summary, summaryPending: false });
   });
 
   it('updates title, notes and design; every save bumps the version', async () => {
@@ -40,7 +42,7 @@ describe('create, read, update', () => {
     const r2 = await ann.client.put(`/api/designs/${d.id}`, { baseVersion: 2, notes: 'walking foot', design: moved });
     expect(r2.status, r2.text).toBe(200);
     expect(r2.body.design).toMatchObject({ version: 3, notes: 'walking foot', design: { ...moved, edgeTravel: true } });
-    expect(r2.body.design.summary.stitchLength).toBeCloseTo(12, 9);
+    expect((await waitForFigures(ann.client, d.id)).summary.stitchLength).toBeCloseTo(12, 9);
   });
 
   it('refuses an update with nothing to save, or with unknown fields', async () => {
@@ -53,7 +55,7 @@ describe('create, read, update', () => {
 
   it('saves a design the planner cannot use (no quilting lines yet) with no figures', async () => {
     const d = await create(ann, 'Blank start', block({ lines: [] }));
-    expect(d.summary).toBeNull();
+    expect(await waitForFigures(ann.client, d.id)).toMatchObject({ summary: null, summaryPending: false });
   });
 });
 
@@ -148,6 +150,7 @@ describe('the designs list', () => {
     await create(lists, 'Gamma', block());
     await create(lists, 'alpha 100%', twoPieces);
     await create(lists, 'Beta_1', block({ units: 'cm', width: 30, height: 30, seams: [], lines: [[[0, 15], [30, 15]]] }));
+    await waitForListFigures(lists.client);
   });
 
   it('sorts by title (case-insensitive), filters by title with % and _ taken literally, and pages', async () => {

@@ -1,6 +1,6 @@
-import { useCallback, useEffect, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import { apiRequest } from './apiClient.ts';
-import { designListPath, designListSchema, type DesignList, type DesignListItem, type DesignSort } from './designsApi.ts';
+import { designListPath, designListSchema, pendingRefreshDelayMs, type DesignList, type DesignListItem, type DesignSort } from './designsApi.ts';
 import { formatDistance, formatEdited, formatSize, formatYards } from './formatFigures.ts';
 
 type Load = { readonly state: 'loading' } | { readonly state: 'ready'; readonly list: DesignList } | { readonly state: 'failed'; readonly message: string };
@@ -37,10 +37,24 @@ export function DesignTable() {
     setLoad(parsed.success ? { state: 'ready', list: parsed.data } : { state: 'failed', message: 'The design list came back in a shape this page does not read.' });
   }, [sort, dir, query, page]);
 
+  const pendingRounds = useRef(0);
   useEffect(() => {
+    pendingRounds.current = 0;
     const t = setTimeout(() => void refresh(), query ? 250 : 0);
     return () => clearTimeout(t);
   }, [refresh, query]);
+
+  // Figures are worked out after a save: while some are on the way, ask again now and then.
+  useEffect(() => {
+    if (load.state !== 'ready') return;
+    const delay = pendingRefreshDelayMs(load.list, pendingRounds.current);
+    if (delay === null) return;
+    const t = setTimeout(() => {
+      pendingRounds.current += 1;
+      void refresh();
+    }, delay);
+    return () => clearTimeout(t);
+  }, [load, refresh]);
 
   function sortBy(key: DesignSort) {
     if (key === sort) setDir(dir === 'asc' ? 'desc' : 'asc');
@@ -120,11 +134,17 @@ export function DesignTable() {
               {list.designs.map((d) => (
                 <tr key={d.id} className="border-b border-muslin-200 align-middle">
                   <td className="px-2 py-2">
-                    <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`} alt="" width={56} height={56} className="rounded border border-muslin-200 bg-white" />
+                    {d.thumbnailSvg === null ? (
+                      <span className="block h-14 w-14 rounded border border-muslin-200 bg-muslin-100" title="The drawing's picture is being made" />
+                    ) : (
+                      <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`} alt="" width={56} height={56} className="rounded border border-muslin-200 bg-white" />
+                    )}
                   </td>
                   <td className="px-2 py-2"><a href={`/designs/${d.id}`} className="font-semibold text-denim-600 underline">{d.title}</a></td>
                   <td className="px-2 py-2 whitespace-nowrap">{formatSize(d.width, d.height, d.units)}</td>
-                  <td className="px-2 py-2">{d.summary?.passes ?? '–'}</td>
+                  <td className="px-2 py-2">
+                    {d.summaryPending ? <span title="The route engine is working out the figures">…<span className="sr-only">figures on the way</span></span> : (d.summary?.passes ?? '–')}
+                  </td>
                   <td className="px-2 py-2">{d.summary?.stops ?? '–'}</td>
                   <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatDistance(d.summary.travelLength, d.units) : '–'}</td>
                   <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatYards(d.summary.thread.totalYards) : '–'}</td>

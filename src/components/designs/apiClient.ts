@@ -3,7 +3,15 @@ import { err, ok, type Result } from '../../../shared/result.ts';
 /** What went wrong with a request, as the UI needs to tell it apart. */
 export type ApiFailure =
   | { readonly kind: 'offline'; readonly message: string }
-  | { readonly kind: 'http'; readonly status: number; readonly code: string; readonly message: string; readonly body: unknown };
+  | {
+      readonly kind: 'http';
+      readonly status: number;
+      readonly code: string;
+      readonly message: string;
+      readonly body: unknown;
+      /** From a Retry-After header in seconds (429, 503), when the server sent one. */
+      readonly retryAfterMs?: number;
+    };
 
 /**
  * Sends a JSON request to the app's own API and returns the parsed body, or a failure value:
@@ -34,11 +42,13 @@ export async function apiRequest(method: 'GET' | 'POST' | 'PUT' | 'DELETE', path
   if (res.ok) return ok(data);
   if (res.status >= 502 && res.status <= 504 && data === null) return err({ kind: 'offline', message: `The server is not answering (${res.status}).` });
   const e = (data as { error?: { code?: unknown; message?: unknown } } | null)?.error;
+  const retryAfter = Number(res.headers.get('retry-after') ?? Number.NaN);
   return err({
     kind: 'http',
     status: res.status,
     code: typeof e?.code === 'string' ? e.code : 'unknown',
     message: typeof e?.message === 'string' ? e.message : `Request failed (${res.status}).`,
     body: data,
+    ...(Number.isFinite(retryAfter) && retryAfter >= 0 ? { retryAfterMs: retryAfter * 1000 } : {}),
   });
 }

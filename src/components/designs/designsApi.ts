@@ -12,8 +12,11 @@ export const designListItemSchema = z.object({
   units: unitsSchema,
   width: z.number(),
   height: z.number(),
-  thumbnailSvg: z.string(),
+  /** Null while a new thumbnail is being made (one from before thumbnails had a point budget). */
+  thumbnailSvg: z.string().nullable(),
   updatedAt: z.string(),
+  /** True while the route engine is still working out this version's figures (saves do not wait for it). */
+  summaryPending: z.boolean().default(false),
   summary: z
     .object({
       passes: z.number(),
@@ -32,6 +35,13 @@ export const designListSchema = z.object({
   pageSize: z.number().int(),
 });
 export type DesignList = z.infer<typeof designListSchema>;
+
+/** How long to wait before asking again for figures or thumbnails still being made; null when none are. */
+export function pendingRefreshDelayMs(list: DesignList, round: number): number | null {
+  if (!list.designs.some((d) => d.summaryPending || d.thumbnailSvg === null)) return null;
+  if (round >= 20) return null; // ~2 minutes: the next visit asks again
+  return Math.min(10_000, 1_500 * 1.25 ** round);
+}
 
 /** The query string of the list request. */
 export function designListPath(q: { sort: DesignSort; dir: 'asc' | 'desc'; q: string; page: number }): string {

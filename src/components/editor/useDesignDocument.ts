@@ -3,6 +3,7 @@ import type { Design } from '../../../shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { parseDesignRecord, type DesignRecord } from '../designs/designsApi.ts';
 import { clearDraft, loadDraft, saveDraft } from './draftStore.ts';
+import { canWorkOnDraftWhileUnavailable, saveFailureAction } from './saveRetry.ts';
 import { retryDelayMs, type SaveStatus } from './saveStatus.ts';
 
 /** Wait after the last edit before saving (ms): one save per burst of edits. */
@@ -81,22 +82,23 @@ export function useDesignDocument(designId: string): DesignDocument {
       return;
     }
     const f = res.error;
-    if (f.kind === 'http' && f.status === 409) {
-      const copy = parseDesignRecord(f.body);
+    const action = saveFailureAction(f, st.attempt + 1);
+    if (action.kind === 'conflict') {
+      const copy = parseDesignRecord(f.kind === 'http' ? f.body : null);
       st.conflict = true;
       setServerCopy(copy);
       setStatus({ kind: 'conflict', serverVersion: copy?.version ?? st.version });
       return;
     }
-    if (f.kind === 'http' && (f.status === 400 || f.status === 413 || f.status === 404)) {
+    if (action.kind === 'refused') {
       st.refused = true;
-      setStatus({ kind: 'refused', message: f.message });
+      setStatus({ kind: 'refused', message: action.message });
       return;
     }
+    // Offline, 503 (database restarting), 429…: the edits stay in localStorage and go out again.
     st.attempt += 1;
-    const delay = retryDelayMs(st.attempt);
-    setStatus({ kind: 'retrying', attempt: st.attempt, retryAt: Date.now() + delay, reason: f.message });
-    schedule(delay, () => void save());
+    setStatus({ kind: 'retrying', attempt: st.attempt, retryAt: Date.now() + action.delayMs, reason: action.reason });
+    schedule(action.delayMs, () => void save());
   }, [designId, schedule]);
 
   function writeDraft() {
@@ -121,8 +123,9 @@ export function useDesignDocument(designId: string): DesignDocument {
       const record = res.ok ? parseDesignRecord(res.value) : null;
       if (!record) {
         const draft = loadDraft(window.localStorage, designId);
-        if (!res.ok && res.error.kind === 'offline' && draft) {
-          // Offline with local edits: keep working on them; they are sent once the server answers.
+        if (!res.ok && canWorkOnDraftWhileUnavailable(res.error) && draft) {
+          // Offline or server down for now (e.g. 503 while the database restarts) with local edits: keep working
+          // on them; they are sent once the server answers.
           Object.assign(s.current, { version: draft.baseVersion, design: draft.design, title: draft.title, revision: 1, savedRevision: 0 });
           setDesignState(draft.design);
           setTitleState(draft.title);

@@ -6,34 +6,59 @@ import type { Database, DesignRouteKind, DesignRouteRow, DesignRow, DesignVersio
 
 export type Db = Kysely<Database> | Transaction<Database>;
 
+/**
+ * A design row as the app handles it: the drawing comes as JSON text (`data_json`, PostgreSQL's jsonb::text),
+ * never parsed by pg on the request thread. designPayload.ts validates it (in a worker when it is heavy).
+ */
+export type DesignRecordRow = Omit<DesignRow, 'data'> & { readonly data_json: string };
+
+const RECORD_COLUMNS = [
+  'id',
+  'owner_id',
+  'title',
+  'notes',
+  'thumbnail_svg',
+  'version',
+  'summary',
+  'summary_version',
+  'created_at',
+  'updated_at',
+  'deleted_at',
+  'copied_from_template_version_id',
+  sql<string>`data::text`.as('data_json'),
+] as const;
+
 export interface NewDesignValues {
   ownerId: string;
   title: string;
   notes: string;
-  /** Validated design JSON. */
-  data: unknown;
+  /** Validated design as JSON text. */
+  dataJson: string;
   thumbnailSvg: string;
   summary: unknown | null;
+  /** True when `summary` belongs to this drawing (else the figures are computed after the save). */
+  summaryCurrent: boolean;
 }
 
-export async function insertDesign(db: Db, v: NewDesignValues): Promise<DesignRow> {
+export async function insertDesign(db: Db, v: NewDesignValues): Promise<DesignRecordRow> {
   return db
     .insertInto('design')
     .values({
       owner_id: v.ownerId,
       title: v.title,
       notes: v.notes,
-      data: JSON.stringify(v.data),
+      data: v.dataJson,
       thumbnail_svg: v.thumbnailSvg,
       summary: v.summary === null ? null : JSON.stringify(v.summary),
+      summary_version: v.summaryCurrent ? 1 : null,
     })
-    .returningAll()
+    .returning(RECORD_COLUMNS)
     .executeTakeFirstOrThrow();
 }
 
 /** The owner's design, or undefined (also for soft-deleted ones unless `includeDeleted`). */
-export async function findOwnedDesign(db: Db, ownerId: string, id: string, includeDeleted = false): Promise<DesignRow | undefined> {
-  let q = db.selectFrom('design').selectAll().where('id', '=', id).where('owner_id', '=', ownerId);
+export async function findOwnedDesign(db: Db, ownerId: string, id: string, includeDeleted = false): Promise<DesignRecordRow | undefined> {
+  let q = db.selectFrom('design').select(RECORD_COLUMNS).where('id', '=', id).where('owner_id', '=', ownerId);
   if (!includeDeleted) q = q.where('deleted_at', 'is', null);
   return q.executeTakeFirst();
 }
@@ -41,24 +66,25 @@ export async function findOwnedDesign(db: Db, ownerId: string, id: string, inclu
 export interface DesignChanges {
   title: string;
   notes: string;
-  data: unknown;
-  thumbnailSvg: string;
-  summary: unknown | null;
+  /** A new drawing (validated JSON text and its thumbnail), or null to keep the current one and its figures. */
+  drawing: { readonly dataJson: string; readonly thumbnailSvg: string } | null;
 }
 
 /**
  * Writes a new version of a live design only if it is still at `baseVersion` (optimistic concurrency:
  * the check and the write are one statement). Undefined when the design is gone or has moved on.
+ * A new drawing clears the figures (computed after the save); otherwise current figures stay current.
  */
-export async function updateDesignIfVersion(db: Db, ownerId: string, id: string, baseVersion: number, c: DesignChanges): Promise<DesignRow | undefined> {
+export async function updateDesignIfVersion(db: Db, ownerId: string, id: string, baseVersion: number, c: DesignChanges): Promise<DesignRecordRow | undefined> {
+  const drawing = c.drawing
+    ? { data: c.drawing.dataJson, thumbnail_svg: c.drawing.thumbnailSvg, summary: null, summary_version: null }
+    : { summary_version: sql<number | null>`case when summary_version = version then version + 1 else summary_version end` };
   return db
     .updateTable('design')
     .set({
       title: c.title,
       notes: c.notes,
-      data: JSON.stringify(c.data),
-      thumbnail_svg: c.thumbnailSvg,
-      summary: c.summary === null ? null : JSON.stringify(c.summary),
+      ...drawing,
       version: sql<number>`version + 1`,
       updated_at: sql<Date>`now()`,
     })
@@ -66,26 +92,56 @@ export async function updateDesignIfVersion(db: Db, ownerId: string, id: string,
     .where('owner_id', '=', ownerId)
     .where('deleted_at', 'is', null)
     .where('version', '=', baseVersion)
-    .returningAll()
+    .returning(RECORD_COLUMNS)
     .executeTakeFirst();
 }
 
 /** Sets or clears deleted_at on the owner's design; undefined when there is no such design. */
-export async function setDesignDeleted(db: Db, ownerId: string, id: string, deleted: boolean): Promise<DesignRow | undefined> {
+export async function setDesignDeleted(db: Db, ownerId: string, id: string, deleted: boolean): Promise<DesignRecordRow | undefined> {
   return db
     .updateTable('design')
     .set({ deleted_at: deleted ? sql<Date>`coalesce(deleted_at, now())` : null })
     .where('id', '=', id)
     .where('owner_id', '=', ownerId)
-    .returningAll()
+    .returning(RECORD_COLUMNS)
     .executeTakeFirst();
 }
 
-export async function insertDesignVersion(db: Db, row: DesignRow): Promise<void> {
+/** Copies the design's current row into its history (inside PostgreSQL: the drawing never comes back here). */
+export async function insertDesignVersion(db: Db, designId: string): Promise<void> {
   await db
     .insertInto('design_version')
-    .values({ design_id: row.id, version: row.version, title: row.title, notes: row.notes, data: JSON.stringify(row.data) })
+    .columns(['design_id', 'version', 'title', 'notes', 'data'])
+    .expression(db.selectFrom('design').select(['id', 'version', 'title', 'notes', 'data']).where('id', '=', designId))
     .execute();
+}
+
+/** Writes figures computed after a save, only if the design is still at that version; false when it moved on. */
+export async function setDesignSummary(db: Db, id: string, version: number, summary: unknown | null): Promise<boolean> {
+  const r = await db
+    .updateTable('design')
+    .set({ summary: summary === null ? null : JSON.stringify(summary), summary_version: version })
+    .where('id', '=', id)
+    .where('version', '=', version)
+    .executeTakeFirst();
+  return r.numUpdatedRows > 0n;
+}
+
+/** Replaces the list thumbnail of the design at that version (a rebuilt one); false when it moved on. */
+export async function setDesignThumbnail(db: Db, id: string, version: number, thumbnailSvg: string): Promise<boolean> {
+  const r = await db.updateTable('design').set({ thumbnail_svg: thumbnailSvg }).where('id', '=', id).where('version', '=', version).executeTakeFirst();
+  return r.numUpdatedRows > 0n;
+}
+
+/** The drawing of one version of a design as JSON text, or undefined when that version is not current. */
+export async function findDesignText(db: Db, id: string, version: number): Promise<{ owner_id: string; data_json: string } | undefined> {
+  return db
+    .selectFrom('design')
+    .select(['owner_id', sql<string>`data::text`.as('data_json')])
+    .where('id', '=', id)
+    .where('version', '=', version)
+    .where('deleted_at', 'is', null)
+    .executeTakeFirst();
 }
 
 /** Saved versions, newest first, without their design JSON (only line counts). */
@@ -104,8 +160,16 @@ export async function listDesignVersions(db: Db, designId: string) {
     .execute();
 }
 
-export async function findDesignVersion(db: Db, designId: string, version: number): Promise<DesignVersionRow | undefined> {
-  return db.selectFrom('design_version').selectAll().where('design_id', '=', designId).where('version', '=', version).executeTakeFirst();
+/** One saved version, its drawing as JSON text (see DesignRecordRow). */
+export type DesignVersionRecordRow = Omit<DesignVersionRow, 'data'> & { readonly data_json: string };
+
+export async function findDesignVersion(db: Db, designId: string, version: number): Promise<DesignVersionRecordRow | undefined> {
+  return db
+    .selectFrom('design_version')
+    .select(['design_id', 'version', 'title', 'notes', 'saved_at', sql<string>`data::text`.as('data_json')])
+    .where('design_id', '=', designId)
+    .where('version', '=', version)
+    .executeTakeFirst();
 }
 
 export async function findDesignRoute(db: Db, designId: string): Promise<DesignRouteRow | undefined> {

@@ -1,128 +1,114 @@
 // Rules for saving designs: every save bumps `version` and lands in the history (design_version);
 // an update must name the version it was based on, and a stale one is refused with the current design
-// (never a silent lost update). Figures for the designs table come from the engine pool when the design
-// changes; a design the planner refuses or cannot finish in time is still saved, with no figures.
+// (never a silent lost update). Saves never wait for the route engine: a new drawing is stored with its
+// thumbnail and no figures, and designDerive.ts computes the figures afterwards (the caller asks for it).
+// Drawings travel as validated JSON text (designBody.ts, designPayload.ts), never parsed here.
 import type { Kysely } from 'kysely';
-import type { Database, DesignRow } from '../../../db/schema.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
-import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
+import type { Database } from '../../../db/schema.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
-import type { DesignSummary } from '../engine/engine.types.ts';
 import {
   findDesignRoute,
-  findDesignVersion,
   findOwnedDesign,
   insertDesign,
   insertDesignVersion,
   setDesignDeleted,
   updateDesignIfVersion,
   upsertDesignRoute,
+  type DesignChanges,
+  type DesignRecordRow,
 } from './design.repository.ts';
-import { storedDesign } from './designRecord.ts';
-import type { UpdateDesignInput } from './designApi.schema.ts';
+import type { AcceptedDesign } from './designBody.ts';
 
-/** Computes the table figures for a design (the engine pool in the app); null when there are none. */
-export type Summarize = (design: Design) => Promise<DesignSummary | null>;
+export type SaveFailure = { readonly kind: 'not-found' } | { readonly kind: 'conflict'; readonly current: DesignRecordRow };
 
-export type SaveFailure = { readonly kind: 'not-found' } | { readonly kind: 'conflict'; readonly current: DesignRow };
+/** A validated drawing ready to store: JSON text and its list thumbnail. */
+export interface Drawing {
+  readonly text: string;
+  readonly thumbnailSvg: string;
+}
 
 const MAX_TITLE = 200;
 
-export async function createDesign(
-  db: Kysely<Database>,
-  summarize: Summarize,
-  ownerId: string,
-  input: { title: string; notes: string; design: Design },
-): Promise<DesignRow> {
-  const summary = await summarize(input.design);
+export async function createDesign(db: Kysely<Database>, ownerId: string, input: { title: string; notes: string; design: Drawing }): Promise<DesignRecordRow> {
   return db.transaction().execute(async (trx) => {
-    const row = await insertDesign(trx, { ownerId, ...input, data: input.design, thumbnailSvg: buildDesignThumbnailSvg(input.design), summary });
-    await insertDesignVersion(trx, row);
+    const row = await insertDesign(trx, {
+      ownerId,
+      title: input.title,
+      notes: input.notes,
+      dataJson: input.design.text,
+      thumbnailSvg: input.design.thumbnailSvg,
+      summary: null,
+      summaryCurrent: false,
+    });
+    await insertDesignVersion(trx, row.id);
     return row;
   });
 }
 
+/** The drawing of an accepted create/update body (those always come with a thumbnail). */
+export function drawingOf(design: AcceptedDesign): Drawing {
+  if (design.thumbnailSvg === null) throw new Error('server/designs/design.service: a saved drawing needs its thumbnail');
+  return { text: design.text, thumbnailSvg: design.thumbnailSvg };
+}
+
 /**
- * Saves new title/notes/design over `baseVersion`. The version test happens twice: early (no engine work for a
- * stale save) and in the UPDATE itself (a save that raced in between still loses nothing: it gets the conflict).
+ * Saves new title/notes/drawing over `baseVersion`. The version test happens in the UPDATE itself, so a save
+ * that raced with another loses nothing: it gets the conflict.
  */
 export async function updateDesign(
   db: Kysely<Database>,
-  summarize: Summarize,
   ownerId: string,
-  id: string,
-  input: UpdateDesignInput,
-): Promise<Result<DesignRow, SaveFailure>> {
-  const current = await findOwnedDesign(db, ownerId, id);
-  if (!current) return err({ kind: 'not-found' });
+  current: DesignRecordRow,
+  input: { baseVersion: number; title?: string; notes?: string; design?: Drawing },
+): Promise<Result<DesignRecordRow, SaveFailure>> {
   if (current.version !== input.baseVersion) return err({ kind: 'conflict', current });
-  const design = input.design ?? storedDesign(current);
-  const summary = input.design ? await summarize(design) : current.summary;
-  return saveOver(db, ownerId, current, input.baseVersion, {
+  return saveOver(db, ownerId, current.id, input.baseVersion, {
     title: input.title ?? current.title,
     notes: input.notes ?? current.notes,
-    design,
-    summary,
+    drawing: input.design ? { dataJson: input.design.text, thumbnailSvg: input.design.thumbnailSvg } : null,
   });
 }
 
-/** Makes an old version the newest one (a new version with its title, notes and design). */
+/** Makes an old version the newest one (a new version with its title, notes and drawing). */
 export async function restoreDesignVersion(
   db: Kysely<Database>,
-  summarize: Summarize,
   ownerId: string,
-  id: string,
-  version: number,
+  current: DesignRecordRow,
+  old: { title: string; notes: string; design: Drawing },
   baseVersion: number,
-): Promise<Result<DesignRow, SaveFailure>> {
-  const current = await findOwnedDesign(db, ownerId, id);
-  if (!current) return err({ kind: 'not-found' });
-  const old = await findDesignVersion(db, id, version);
-  if (!old) return err({ kind: 'not-found' });
+): Promise<Result<DesignRecordRow, SaveFailure>> {
   if (current.version !== baseVersion) return err({ kind: 'conflict', current });
-  const design = storedDesign({ id, data: old.data });
-  return saveOver(db, ownerId, current, baseVersion, { title: old.title, notes: old.notes, design, summary: await summarize(design) });
+  return saveOver(db, ownerId, current.id, baseVersion, { title: old.title, notes: old.notes, drawing: { dataJson: old.design.text, thumbnailSvg: old.design.thumbnailSvg } });
 }
 
-async function saveOver(
-  db: Kysely<Database>,
-  ownerId: string,
-  current: DesignRow,
-  baseVersion: number,
-  next: { title: string; notes: string; design: Design; summary: unknown },
-): Promise<Result<DesignRow, SaveFailure>> {
+async function saveOver(db: Kysely<Database>, ownerId: string, id: string, baseVersion: number, next: DesignChanges): Promise<Result<DesignRecordRow, SaveFailure>> {
   return db.transaction().execute(async (trx) => {
-    const row = await updateDesignIfVersion(trx, ownerId, current.id, baseVersion, {
-      title: next.title,
-      notes: next.notes,
-      data: next.design,
-      thumbnailSvg: buildDesignThumbnailSvg(next.design),
-      summary: next.summary ?? null,
-    });
+    const row = await updateDesignIfVersion(trx, ownerId, id, baseVersion, next);
     if (!row) {
-      const now = await findOwnedDesign(trx, ownerId, current.id);
+      const now = await findOwnedDesign(trx, ownerId, id);
       return now ? err({ kind: 'conflict', current: now }) : err({ kind: 'not-found' });
     }
-    await insertDesignVersion(trx, row);
+    await insertDesignVersion(trx, row.id);
     return ok(row);
   });
 }
 
 /** A new design (version 1) with the same drawing, titled "Copy of …"; a route that was current is copied too. */
-export async function duplicateDesign(db: Kysely<Database>, ownerId: string, id: string): Promise<DesignRow | undefined> {
+export async function duplicateDesign(db: Kysely<Database>, ownerId: string, id: string): Promise<DesignRecordRow | undefined> {
   const source = await findOwnedDesign(db, ownerId, id);
   if (!source) return undefined;
-  const design = storedDesign(source);
+  const summaryCurrent = source.summary_version === source.version;
   return db.transaction().execute(async (trx) => {
     const row = await insertDesign(trx, {
       ownerId,
       title: `Copy of ${source.title}`.slice(0, MAX_TITLE),
       notes: source.notes,
-      data: design,
+      dataJson: source.data_json,
       thumbnailSvg: source.thumbnail_svg,
-      summary: source.summary,
+      summary: summaryCurrent ? source.summary : null,
+      summaryCurrent,
     });
-    await insertDesignVersion(trx, row);
+    await insertDesignVersion(trx, row.id);
     const route = await findDesignRoute(trx, source.id);
     if (route && route.design_version === source.version) {
       await upsertDesignRoute(trx, { designId: row.id, kind: route.kind, strokes: route.strokes, summary: route.summary, designVersion: row.version });
@@ -132,13 +118,13 @@ export async function duplicateDesign(db: Kysely<Database>, ownerId: string, id:
 }
 
 /** Soft delete (undo with restoreDesign). Undefined when there is no such live design. */
-export async function deleteDesign(db: Kysely<Database>, ownerId: string, id: string): Promise<DesignRow | undefined> {
+export async function deleteDesign(db: Kysely<Database>, ownerId: string, id: string): Promise<DesignRecordRow | undefined> {
   const live = await findOwnedDesign(db, ownerId, id);
   if (!live) return undefined;
   return setDesignDeleted(db, ownerId, id, true);
 }
 
 /** Brings a soft-deleted design back (a live one is returned as it is). */
-export async function restoreDesign(db: Kysely<Database>, ownerId: string, id: string): Promise<DesignRow | undefined> {
+export async function restoreDesign(db: Kysely<Database>, ownerId: string, id: string): Promise<DesignRecordRow | undefined> {
   return setDesignDeleted(db, ownerId, id, false);
 }

@@ -1,19 +1,17 @@
 // Pieces every /api/designs/… endpoint shares: the owner guard (401 anonymous; 404 for a design that is not
 // yours, is deleted, or whose id is not even a uuid), the 409 body, and how engine outcomes become responses.
-import type { DesignRow } from '../../../db/schema.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import { assertNever } from '../../../shared/assertNever.ts';
 import { requireUser, type SignedIn } from '../auth/guards.ts';
 import { db } from '../db.ts';
-import { json, problem } from '../http.ts';
-import type { DesignSummary } from '../engine/engine.types.ts';
-import { runEngine } from '../engine/enginePool.ts';
+import { problem } from '../http.ts';
 import type { PoolFailure } from '../engine/workerPool.ts';
-import { findOwnedDesign } from './design.repository.ts';
+import { ENGINE_QUEUE_WAIT_MS } from '../engine/enginePool.ts';
+import { findOwnedDesign, type DesignRecordRow } from './design.repository.ts';
 import { idParamSchema } from './designApi.schema.ts';
-import { toDesignJson } from './designRecord.ts';
+import { designJsonText } from './designRecord.ts';
+import { acceptStoredDesign, jsonText } from './designPayload.ts';
 
 export const notFound = (): Response => problem(404, 'not_found', 'Not found.');
 
@@ -27,7 +25,7 @@ export function requireDesignId(locals: App.Locals, params: Record<string, strin
 }
 
 /** The signed-in user's live design, or the response to send (401 or 404). */
-export async function requireOwnedDesign(locals: App.Locals, params: Record<string, string | undefined>): Promise<Result<SignedIn & { row: DesignRow }, Response>> {
+export async function requireOwnedDesign(locals: App.Locals, params: Record<string, string | undefined>): Promise<Result<SignedIn & { row: DesignRecordRow }, Response>> {
   const who = requireDesignId(locals, params);
   if (!who.ok) return who;
   const row = await findOwnedDesign(db, who.value.user.id, who.value.id);
@@ -35,15 +33,27 @@ export async function requireOwnedDesign(locals: App.Locals, params: Record<stri
   return ok({ ...who.value, row });
 }
 
+/**
+ * `{ design }` for a row: its drawing validated (in the codec worker when heavy) and spliced in as text.
+ * `acceptedText`: the drawing this request just validated and saved, so it is not checked twice.
+ */
+export async function designResponse(row: DesignRecordRow, account: string, status = 200, acceptedText?: string): Promise<Response> {
+  const text = await designTextOf(row, account, acceptedText);
+  return text.ok ? jsonText(`{"design":${designJsonText(row, text.value)}}`, status) : text.error;
+}
+
 /** 409: the design moved on since `baseVersion`; `design` carries the current one so the client can merge or reload. */
-export function conflict(current: DesignRow): Response {
-  return json(
-    {
-      error: { code: 'conflict', message: `This design was saved elsewhere (now version ${current.version}). Reload it or merge your changes.` },
-      design: toDesignJson(current),
-    },
-    409,
-  );
+export async function conflict(current: DesignRecordRow, account: string): Promise<Response> {
+  const text = await designTextOf(current, account);
+  if (!text.ok) return text.error;
+  const error = { code: 'conflict', message: `This design was saved elsewhere (now version ${current.version}). Reload it or merge your changes.` };
+  return jsonText(`{"error":${JSON.stringify(error)},"design":${designJsonText(current, text.value)}}`, 409);
+}
+
+async function designTextOf(row: DesignRecordRow, account: string, acceptedText?: string): Promise<Result<string, Response>> {
+  if (acceptedText !== undefined) return ok(acceptedText);
+  const r = await acceptStoredDesign(row.data_json, account);
+  return r.ok ? ok(r.value.designText) : err(engineFailureResponse(r.error));
 }
 
 /** A design the engine refuses (e.g. no quilting lines, too many crossings): 400 naming the line it is about. */
@@ -54,7 +64,8 @@ export function designProblemResponse(p: DesignProblem): Response {
 
 /**
  * Engine outcomes: `engine_timeout` (422: the design is too dense to finish within the cap; retrying will not
- * help), `engine_busy` (503 + Retry-After: every worker busy and the queue full; retry soon).
+ * help), `rate_limited` (429 + Retry-After: this account already has its share of jobs waiting), `engine_busy`
+ * (503 + Retry-After: every worker busy and the queue full, or the job waited too long; retry soon).
  */
 export function engineFailureResponse(f: PoolFailure): Response {
   switch (f.kind) {
@@ -64,8 +75,25 @@ export function engineFailureResponse(f: PoolFailure): Response {
         'engine_timeout',
         `The route engine stopped after ${f.ms / 1000} s: this design is too dense to check or plan on the server. Split it into smaller blocks or simplify its curves.`,
       );
+    case 'account-busy':
+      return problem(
+        429,
+        'rate_limited',
+        `You already have ${f.queued} route checks or plans waiting for the route engine. Wait for them to finish, then try again.`,
+        undefined,
+        { 'retry-after': '2' },
+      );
+    case 'queue-timeout':
+      return problem(
+        503,
+        'engine_busy',
+        `The route engine is busy with other designs and could not start yours within ${ENGINE_QUEUE_WAIT_MS / 1000} s. Try again in a moment.`,
+        undefined,
+        { 'retry-after': '5' },
+      );
     case 'busy':
     case 'closed':
+    case 'cancelled': // nobody is listening any more; the answer only has to be well-formed
       return problem(503, 'engine_busy', 'The route engine is busy with other designs. Try again in a moment.', undefined, { 'retry-after': '2' });
     case 'failed':
       console.error('[engine] task failed:', f.message);
@@ -73,14 +101,4 @@ export function engineFailureResponse(f: PoolFailure): Response {
     default:
       return assertNever(f);
   }
-}
-
-/** Table figures through the engine pool; null when the engine refuses the design or does not finish. */
-export async function summarizeWithEngine(design: Design): Promise<DesignSummary | null> {
-  const r = await runEngine({ op: 'summary', design });
-  if (!r.ok) {
-    if (r.error.kind === 'failed') console.error('[engine] summary failed:', r.error.message);
-    return null;
-  }
-  return r.value.ok ? r.value.value : null;
 }

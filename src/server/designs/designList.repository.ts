@@ -1,5 +1,7 @@
 // The "my designs" table query: live designs of one owner, filtered by title, sorted, paged.
-// Only the columns the table shows are read (never the full design JSON).
+// Only the columns the table shows are read (never the full design JSON). A thumbnail larger than
+// LIST_THUMBNAIL_MAX_CHARS (written before thumbnails had a point budget) is not sent: it reads as null and the
+// list asks for a new one.
 import { sql, type RawBuilder } from 'kysely';
 import type { Db } from './design.repository.ts';
 
@@ -32,6 +34,9 @@ function likePattern(q: string): string {
   return `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
 
+/** Thumbnails are ~1–8 KB since the point budget (shared/export/thumbnailLines.ts); older ones reached 2.6 MB. */
+export const LIST_THUMBNAIL_MAX_CHARS = 32 * 1024;
+
 export async function listOwnedDesigns(db: Db, ownerId: string, query: DesignListQuery) {
   let base = db.selectFrom('design').where('owner_id', '=', ownerId).where('deleted_at', 'is', null);
   if (query.q) base = base.where(sql<boolean>`title ilike ${likePattern(query.q)}`);
@@ -44,7 +49,8 @@ export async function listOwnedDesigns(db: Db, ownerId: string, query: DesignLis
         'title',
         'version',
         'summary',
-        'thumbnail_svg',
+        sql<boolean>`summary_version is distinct from version`.as('summary_pending'),
+        sql<string | null>`case when length(thumbnail_svg) <= ${LIST_THUMBNAIL_MAX_CHARS} then thumbnail_svg end`.as('thumbnail_svg'),
         'created_at',
         'updated_at',
         sql<string>`data->>'units'`.as('units'),

@@ -1,10 +1,11 @@
-// Rows → the JSON the API sends. jsonb read back from Postgres is `unknown` until a schema accepts it:
-// a stored design that no longer parses is a broken invariant (we only ever store parsed designs), so it throws.
+// Rows → the JSON the API sends. jsonb read back from Postgres is `unknown` until a schema accepts it: drawings
+// are checked by the codec workers (designPayload.ts) and spliced in as text.
 // Figures are different: they are derived data (the engine can always compute them again), so a summary or a
 // saved route that fails its schema is logged and read as absent; one bad row never turns a list into a 500.
 import { z } from 'zod';
-import type { DesignRouteRow, DesignRow, DesignVersionRow } from '../../../db/schema.ts';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import type { DesignRouteRow, DesignRow } from '../../../db/schema.ts';
+import type { DesignRecordRow, DesignVersionRecordRow } from './design.repository.ts';
+import type { Design } from '../../../shared/design/design.schema.ts';
 import type { DesignSummary, RouteFigures } from '../engine/engine.types.ts';
 
 const figure = z.number().finite();
@@ -47,12 +48,6 @@ export const savedRouteStrokesSchema = z.array(
   }),
 );
 
-function parseStored<S extends z.ZodType>(schema: S, value: unknown, what: string): z.output<S> {
-  const parsed = schema.safeParse(value);
-  if (!parsed.success) throw new Error(`server/designs/designRecord: stored ${what} fails its schema: ${parsed.error.message}`);
-  return parsed.data;
-}
-
 /** The value when it fits the schema; otherwise null, and the bad row is logged (derived data only). */
 function parseDerived<S extends z.ZodType>(schema: S, value: unknown, what: string): z.output<S> | null {
   if (value === null || value === undefined) return null;
@@ -67,10 +62,6 @@ export function storedSummary(row: { id: string; summary: unknown }): DesignSumm
   return parseDerived(designSummarySchema, row.summary, `summary of design ${row.id}`);
 }
 
-export function storedDesign(row: Pick<DesignRow, 'id' | 'data'>): Design {
-  return parseStored(designSchema, row.data, `design ${row.id}`);
-}
-
 export interface DesignJson {
   id: string;
   title: string;
@@ -78,31 +69,40 @@ export interface DesignJson {
   version: number;
   design: Design;
   summary: DesignSummary | null;
+  /** True while the figures of this version are still being computed (saves do not wait for the planner). */
+  summaryPending: boolean;
   createdAt: string;
   updatedAt: string;
 }
 
-export function toDesignJson(row: DesignRow): DesignJson {
-  return {
+/** Figures of the row's current version; null while pending or when the planner refused the design. */
+export function currentSummaryOf(row: Pick<DesignRow, 'id' | 'summary' | 'summary_version' | 'version'>): DesignSummary | null {
+  if (row.summary === null || row.summary_version !== row.version) return null;
+  return storedSummary(row);
+}
+
+/**
+ * DesignJson as JSON text, with the drawing spliced in as text: `designText` is canonical JSON that a schema
+ * has accepted (designPayload.ts), so a heavy design is never parsed or re-serialised on the request thread.
+ */
+export function designJsonText(row: DesignRecordRow, designText: string): string {
+  const meta: Omit<DesignJson, 'design'> = {
     id: row.id,
     title: row.title,
     notes: row.notes,
     version: row.version,
-    design: storedDesign(row),
-    summary: storedSummary(row),
+    summary: currentSummaryOf(row),
+    summaryPending: row.summary_version !== row.version,
     createdAt: row.created_at.toISOString(),
     updatedAt: row.updated_at.toISOString(),
   };
+  return `{"design":${designText},${JSON.stringify(meta).slice(1)}`;
 }
 
-export function toDesignVersionJson(row: DesignVersionRow) {
-  return {
-    version: row.version,
-    title: row.title,
-    notes: row.notes,
-    design: parseStored(designSchema, row.data, `version ${row.version} of design ${row.design_id}`),
-    savedAt: row.saved_at.toISOString(),
-  };
+/** One saved version as JSON text (drawing spliced in as in designJsonText). */
+export function designVersionJsonText(row: DesignVersionRecordRow, designText: string): string {
+  const meta = { version: row.version, title: row.title, notes: row.notes, savedAt: row.saved_at.toISOString() };
+  return `{"design":${designText},${JSON.stringify(meta).slice(1)}`;
 }
 
 /** The saved route as the API sends it; null (no saved route) when its strokes or figures do not parse. */

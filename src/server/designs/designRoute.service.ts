@@ -1,37 +1,42 @@
 // Route check, planning and saved routes for one design. The engine runs in the worker pool; its refusals
 // (DesignProblem) and the pool's failures (time cap, busy) come back as values the endpoints turn into answers.
 import type { Kysely } from 'kysely';
-import type { z } from 'zod';
-import type { Database, DesignRow } from '../../../db/schema.ts';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import { z } from 'zod';
+import type { Database } from '../../../db/schema.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
-import type { CheckAnswer, PlanAnswer } from '../engine/engine.types.ts';
+import type { CheckAnswer, DesignPayload, PlanAnswer } from '../engine/engine.types.ts';
 import { runEngine } from '../engine/enginePool.ts';
 import { summaryOf, threadSummaryOf } from '../engine/engineSummaries.ts';
 import type { PoolFailure } from '../engine/workerPool.ts';
-import { upsertDesignRoute } from './design.repository.ts';
-import { storedDesign, type SavedRouteSummary } from './designRecord.ts';
+import { upsertDesignRoute, type DesignRecordRow } from './design.repository.ts';
+import type { SavedRouteSummary } from './designRecord.ts';
 
 export type EngineFailure = { readonly kind: 'engine'; readonly failure: PoolFailure } | { readonly kind: 'problem'; readonly problem: DesignProblem };
 /** Saving an own route can also fail on the route's shape (a zod error at paths `route.i.j`). */
 export type OwnRouteFailure = EngineFailure | { readonly kind: 'invalid'; readonly error: z.ZodError };
 
-export async function checkDesignOnServer(design: Design): Promise<Result<CheckAnswer, EngineFailure>> {
-  const r = await runEngine({ op: 'check', design });
+/** The drawing the engine should use: a draft the request carried (validated JSON text) or the saved one. */
+export function designPayloadOf(row: DesignRecordRow, draftText: string | null): DesignPayload {
+  return { designText: draftText ?? row.data_json };
+}
+
+/** `signal`: the request's; a check whose client went away leaves the queue without running. */
+export async function checkDesignOnServer(design: DesignPayload, account: string, signal?: AbortSignal): Promise<Result<CheckAnswer, EngineFailure>> {
+  const r = await runEngine({ op: 'check', ...design }, { key: account, ...(signal ? { signal } : {}) });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
 }
 
-export async function planDesignOnServer(design: Design): Promise<Result<PlanAnswer, EngineFailure>> {
-  const r = await runEngine({ op: 'plan', design });
+export async function planDesignOnServer(design: DesignPayload, account: string, signal?: AbortSignal): Promise<Result<PlanAnswer, EngineFailure>> {
+  const r = await runEngine({ op: 'plan', ...design }, { key: account, ...(signal ? { signal } : {}) });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
 }
 
 /** Keeps the planner's route for the design as saved at `row.version` (planned again here: never trusted from a client). */
-export async function savePlannedRoute(db: Kysely<Database>, row: DesignRow): Promise<Result<Awaited<ReturnType<typeof upsertDesignRoute>>, EngineFailure>> {
-  const planned = await planDesignOnServer(storedDesign(row));
+export async function savePlannedRoute(db: Kysely<Database>, row: DesignRecordRow): Promise<Result<Awaited<ReturnType<typeof upsertDesignRoute>>, EngineFailure>> {
+  const planned = await planDesignOnServer(designPayloadOf(row, null), row.owner_id);
   if (!planned.ok) return planned;
   const p = planned.value;
   const summary: SavedRouteSummary = summaryOf(p);
@@ -40,16 +45,17 @@ export async function savePlannedRoute(db: Kysely<Database>, row: DesignRow): Pr
 }
 
 /**
- * Keeps the quilter's own route (polylines in stitching order) for the design as saved at `row.version`.
- * The route is checked against the block like the design's lines (designSchema), then measured by the
- * engine; strokes and figures are computed here, never taken from the client.
+ * Keeps the quilter's own route (polylines in stitching order, as JSON text) for the design as saved at
+ * `row.version`. The engine checks the route against the block like the design's lines (designSchema), then
+ * measures it; strokes and figures are computed there, never taken from the client.
  */
-export async function saveOwnRoute(db: Kysely<Database>, row: DesignRow, route: readonly unknown[]): Promise<Result<Awaited<ReturnType<typeof upsertDesignRoute>>, OwnRouteFailure>> {
-  const parsed = designSchema.safeParse({ ...storedDesign(row), route });
-  if (!parsed.success) return err({ kind: 'invalid', error: parsed.error });
-  const r = await runEngine({ op: 'ownRoute', design: parsed.data });
+export async function saveOwnRoute(db: Kysely<Database>, row: DesignRecordRow, routeText: string): Promise<Result<Awaited<ReturnType<typeof upsertDesignRoute>>, OwnRouteFailure>> {
+  const r = await runEngine({ op: 'ownRoute', designText: row.data_json, routeText }, { key: row.owner_id });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
-  if (!r.value.ok) return err({ kind: 'problem', problem: r.value.problem });
+  if (!r.value.ok) {
+    if ('invalid' in r.value) return err({ kind: 'invalid', error: new z.ZodError(r.value.invalid.map((i) => ({ ...i, path: [...i.path] })) as z.core.$ZodIssue[]) });
+    return err({ kind: 'problem', problem: r.value.problem });
+  }
   const { check, strokes } = r.value.value;
   const summary: SavedRouteSummary = {
     passes: check.passes,

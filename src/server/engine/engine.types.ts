@@ -1,6 +1,7 @@
 // What crosses the worker boundary: plain, structured-clonable data only.
 // The main thread validates every design (designSchema) before it sends a task.
 import type { Design } from '../../../shared/design/design.schema.ts';
+import type { DesignSvgOptions } from '../../../shared/export/designSvg.ts';
 import type { Point } from '../../../shared/geometry/point.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
 import type { GapCheck } from '../../../shared/gap/gapCheck.ts';
@@ -9,17 +10,59 @@ import type { RouteCheck } from '../../../shared/route/checkRoute.ts';
 import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
 import type { Stroke } from '../../../shared/route/routeStrokes.ts';
 
+/** A design for the engine: parsed and validated by the caller, or JSON text the worker parses and validates
+ * itself (designSchema), so a heavy design is never parsed on the request thread. */
+export type DesignPayload = { readonly design: Design } | { readonly designText: string };
+
+/** Request bodies the design endpoints take (designApi.schema.ts): create, update, draft (check/plan), route. */
+export type BodyShape = 'create' | 'update' | 'draft' | 'route';
+
 /**
+ * Engine tasks:
  * - `summary`: the figures stored with a saved design (for the designs table);
  * - `check`: route check of the design, of its own `route` if it has one, thread budget, gap check;
  * - `plan`: the planner's route with its figures;
- * - `ownRoute`: route check of the design's own `route` with drawing strokes (for saving it).
+ * - `ownRoute`: route check of the design's own `route` with drawing strokes (for saving it); the route comes
+ *   inside the design, or as JSON text (`routeText`) checked against the design here;
+ * Design codec tasks (the codec pool, never behind planning):
+ * - `acceptBody`: parse and validate a heavy request body; the design comes back as canonical JSON text;
+ * - `acceptStored`: validate a stored design's JSON text (and build its thumbnail when asked);
+ * - `exportSvg`: the print SVG of a design.
  */
 export type EngineTask =
-  | { readonly op: 'summary'; readonly design: Design }
-  | { readonly op: 'check'; readonly design: Design }
-  | { readonly op: 'plan'; readonly design: Design }
-  | { readonly op: 'ownRoute'; readonly design: Design };
+  | ({ readonly op: 'summary' } & DesignPayload)
+  | ({ readonly op: 'check' } & DesignPayload)
+  | ({ readonly op: 'plan' } & DesignPayload)
+  | ({ readonly op: 'ownRoute'; readonly routeText?: string } & DesignPayload)
+  | { readonly op: 'acceptBody'; readonly text: string; readonly shape: BodyShape }
+  | { readonly op: 'acceptStored'; readonly text: string; readonly thumbnail: boolean }
+  | { readonly op: 'exportSvg'; readonly designText: string; readonly options: DesignSvgOptions };
+
+/** A zod issue as it crosses the thread boundary: no input values (they may be megabytes of points). */
+export interface PlainIssue {
+  readonly code: string;
+  readonly path: readonly (string | number)[];
+  readonly message: string;
+  readonly keys?: readonly string[];
+}
+
+/** A body the codec read: small fields as parsed, the design (or route) as canonical JSON text. */
+export type AcceptBodyAnswer =
+  | {
+      readonly ok: true;
+      readonly fields: Readonly<Record<string, unknown>>;
+      readonly designText: string | null;
+      /** For create/update bodies: the list thumbnail of the design. */
+      readonly thumbnailSvg: string | null;
+      readonly routeText: string | null;
+    }
+  | { readonly ok: false; readonly reason: 'invalid-json' }
+  | { readonly ok: false; readonly reason: 'invalid'; readonly issues: readonly PlainIssue[] };
+
+export interface AcceptStoredAnswer {
+  readonly designText: string;
+  readonly thumbnailSvg: string | null;
+}
 
 /** Figures of a route (planned or the quilter's own), lengths in the design's units. */
 export interface RouteFigures {
@@ -87,5 +130,9 @@ export interface EngineAnswers {
   summary: EngineAnswer<DesignSummary>;
   check: EngineAnswer<CheckAnswer>;
   plan: EngineAnswer<PlanAnswer>;
-  ownRoute: EngineAnswer<OwnRouteAnswer>;
+  /** `invalid`: the route sent as text does not fit the block (paths `route.i.j`, as designSchema names them). */
+  ownRoute: EngineAnswer<OwnRouteAnswer> | { readonly ok: false; readonly invalid: readonly PlainIssue[] };
+  acceptBody: AcceptBodyAnswer;
+  acceptStored: AcceptStoredAnswer;
+  exportSvg: string;
 }

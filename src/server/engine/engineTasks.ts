@@ -5,42 +5,63 @@ import { checkDesign } from '../../../shared/route/checkDesign.ts';
 import { checkRoute } from '../../../shared/route/checkRoute.ts';
 import { planDesign } from '../../../shared/route/planDesign.ts';
 import { assertNever } from '../../../shared/assertNever.ts';
-import type { EngineAnswers, EngineTask } from './engine.types.ts';
+import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import { buildDesignSvg } from '../../../shared/export/designSvg.ts';
+import type { DesignPayload, EngineAnswers, EngineTask } from './engine.types.ts';
+import { acceptBody, acceptStored, parseDesignText, plainIssues } from './designCodec.ts';
 import { figuresOf, summaryOf } from './engineSummaries.ts';
 import { buildOwnRouteStrokes } from './ownRouteStrokes.ts';
+
+function designOf(payload: DesignPayload): Design {
+  return 'designText' in payload ? parseDesignText(payload.designText) : payload.design;
+}
 
 export function runEngineTask<T extends EngineTask>(task: T): EngineAnswers[T['op']];
 export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']] {
   switch (task.op) {
     case 'summary': {
-      const planned = planDesign(task.design);
+      const planned = planDesign(designOf(task));
       return planned.ok ? { ok: true, value: summaryOf(planned.value) } : { ok: false, problem: planned.error };
     }
     case 'check': {
-      const checked = checkDesign(task.design);
+      const design = designOf(task);
+      const checked = checkDesign(design);
       if (!checked.ok) return { ok: false, problem: checked.error };
       const { plan, ...check } = checked.value;
       let ownRoute = null;
-      if (task.design.route && task.design.route.length > 0) {
-        const own = checkRoute(task.design);
+      if (design.route && design.route.length > 0) {
+        const own = checkRoute(design);
         if (!own.ok) return { ok: false, problem: own.error };
         ownRoute = own.value;
       }
-      const gap = checkGap(task.design);
+      const gap = checkGap(design);
       return { ok: true, value: { check, plan: figuresOf(plan), threadBudget: plan.threadBudget, ownRoute, gap: gap.ok ? gap.value : null } };
     }
     case 'ownRoute': {
-      const own = checkRoute(task.design);
+      let design = designOf(task);
+      if (task.routeText !== undefined) {
+        // The route is checked against the block like the design's lines (designSchema: paths route.i.j).
+        const withRoute = designSchema.safeParse({ ...design, route: JSON.parse(task.routeText) as unknown });
+        if (!withRoute.success) return { ok: false, invalid: plainIssues(withRoute.error) };
+        design = withRoute.data;
+      }
+      const own = checkRoute(design);
       if (!own.ok) return { ok: false, problem: own.error };
-      const strokes = buildOwnRouteStrokes(task.design, own.value);
+      const strokes = buildOwnRouteStrokes(design, own.value);
       return strokes.ok ? { ok: true, value: { check: own.value, strokes: strokes.value } } : { ok: false, problem: strokes.error };
     }
     case 'plan': {
-      const planned = planDesign(task.design);
+      const planned = planDesign(designOf(task));
       if (!planned.ok) return { ok: false, problem: planned.error };
       const plan = planned.value;
       return { ok: true, value: { ...figuresOf(plan), units: plan.units, route: plan.route, threadBudget: plan.threadBudget } };
     }
+    case 'acceptBody':
+      return acceptBody(task.text, task.shape);
+    case 'acceptStored':
+      return acceptStored(task.text, task.thumbnail);
+    case 'exportSvg':
+      return buildDesignSvg(parseDesignText(task.designText), task.options);
     default:
       return assertNever(task);
   }

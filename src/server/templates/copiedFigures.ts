@@ -6,7 +6,6 @@
 // - design_route holds the route itself, kept with its kind ('own' when the figures carry no proof status).
 // Anything that does not fit the stored shapes is left out rather than written half-valid.
 import type { DesignRouteKind } from '../../../db/schema.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
 import type { DesignSummary } from '../engine/engine.types.ts';
 import { designSummarySchema, savedRouteStrokesSchema, savedRouteSummarySchema, type SavedRouteSummary } from '../designs/designRecord.ts';
 
@@ -25,11 +24,10 @@ export function copiedRoute(route: unknown, figures: unknown): CopiedRoute | nul
 }
 
 /**
- * The planner's figures for the copied drawing: the version's own figures when they are the planner's (a planned
- * route), otherwise whatever `summarize` (the engine) finds; null when the engine refuses or does not finish,
- * as for any saved design.
+ * The planner's figures for the copied drawing when the version's own figures are the planner's (a planned route);
+ * otherwise null, and the engine computes them after the copy is saved (designDerive.ts), as for any save.
  */
-export async function copiedDesignSummary(design: Design, figures: unknown, summarize: (d: Design) => Promise<DesignSummary | null>): Promise<DesignSummary | null> {
+export function copiedDesignSummary(figures: unknown): DesignSummary | null {
   const planned = designSummarySchema.safeParse(figures);
-  return planned.success ? planned.data : summarize(design);
+  return planned.success ? planned.data : null;
 }

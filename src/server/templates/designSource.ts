@@ -7,7 +7,7 @@ import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import type { TemplateVersionRow } from './template.repository.ts';
 import { routeFiguresSchema, routeStrokesSchema, type RouteFigures, type RouteStroke } from './routeSnapshot.schema.ts';
-import type { Summarize } from '../designs/design.service.ts';
+import { requestDesignDerive } from '../designs/designDerive.ts';
 import { copiedDesignSummary, copiedRoute } from './copiedFigures.ts';
 
 export interface PublishableDesign {
@@ -38,14 +38,14 @@ export async function loadPublishableDesign(db: Kysely<Database>, ownerId: strin
  * A new design owned by `ownerId` holding the version's drawing and route, marked with the version it came from
  * (design.copied_from_template_version_id). The table figures are the planner's (copiedFigures.ts). Returns the id.
  */
-export async function copyVersionIntoDesigns(db: Kysely<Database>, summarize: Summarize, ownerId: string, v: TemplateVersionRow): Promise<string> {
+export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: string, v: TemplateVersionRow): Promise<string> {
   const design = designSchema.parse(v.design);
   const route = copiedRoute(v.route, v.figures);
-  const summary = await copiedDesignSummary(design, v.figures, summarize);
+  const summary = copiedDesignSummary(v.figures);
   const title = `${v.title} (template v${v.version})`.slice(0, 200);
   const notes = `Copied from the template "${v.title}", version ${v.version}.`;
   const data = JSON.stringify(design);
-  return db.transaction().execute(async (trx) => {
+  const created = await db.transaction().execute(async (trx) => {
     const created = await trx
       .insertInto('design')
       .values({
@@ -55,6 +55,8 @@ export async function copyVersionIntoDesigns(db: Kysely<Database>, summarize: Su
         data,
         thumbnail_svg: buildDesignThumbnailSvg(design),
         summary: summary === null ? null : JSON.stringify(summary),
+        // A planned route's figures are the new version's figures; otherwise they follow from the engine.
+        summary_version: summary === null ? null : 1,
         copied_from_template_version_id: v.id,
       })
       .returning(['id', 'version'])
@@ -66,6 +68,8 @@ export async function copyVersionIntoDesigns(db: Kysely<Database>, summarize: Su
         .values({ design_id: created.id, kind: route.kind, strokes: JSON.stringify(route.strokes), summary: JSON.stringify(route.summary), design_version: created.version })
         .execute();
     }
-    return created.id;
+    return created;
   });
+  if (summary === null) requestDesignDerive({ id: created.id, owner_id: ownerId, version: created.version });
+  return created.id;
 }

@@ -2,10 +2,10 @@
 // computed for the current version; otherwise the quilting lines, and a remark that the route is out of date).
 import type { APIRoute } from 'astro';
 import { db } from '../../../../server/db.ts';
-import { buildDesignSvg } from '../../../../../shared/export/designSvg.ts';
 import { findDesignRoute } from '../../../../server/designs/design.repository.ts';
-import { requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
-import { storedDesign, toSavedRouteJson } from '../../../../server/designs/designRecord.ts';
+import { engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
+import { toSavedRouteJson } from '../../../../server/designs/designRecord.ts';
+import { runCodec } from '../../../../server/engine/enginePool.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);
@@ -13,11 +13,21 @@ export const GET = (async ({ locals, params }) => {
   const { row } = owned.value;
   const routeRow = await findDesignRoute(db, row.id);
   const route = routeRow ? toSavedRouteJson(routeRow, row.version) : null;
-  const svg = buildDesignSvg(storedDesign(row), {
-    title: row.title,
-    ...(route?.current ? { route: route.strokes } : {}),
-    ...(route && !route.current ? { remark: `The saved route was made for version ${route.designVersion}; this is version ${row.version}. Plan the route again.` } : {}),
-  });
+  // Built in the codec worker: the drawing is parsed there, never on the request thread.
+  const built = await runCodec(
+    {
+      op: 'exportSvg',
+      designText: row.data_json,
+      options: {
+        title: row.title,
+        ...(route?.current ? { route: route.strokes } : {}),
+        ...(route && !route.current ? { remark: `The saved route was made for version ${route.designVersion}; this is version ${row.version}. Plan the route again.` } : {}),
+      },
+    },
+    owned.value.user.id,
+  );
+  if (!built.ok) return engineFailureResponse(built.error);
+  const svg = built.value;
   const filename = `${row.title.replace(/[^\p{L}\p{N}]+/gu, '-').replace(/^-+|-+$/g, '').slice(0, 80) || 'design'}.svg`;
   return new Response(svg, {
     headers: {

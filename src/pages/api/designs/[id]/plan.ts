@@ -1,19 +1,21 @@
 // POST /api/designs/:id/plan { design? } — the planner's route for the saved design or an unsaved draft.
 // 200 { designVersion, draft, plan: { passes, stops, …figures, optimal, travelLowerBound, units, route, threadBudget } }.
+// 429 rate_limited when this account already has its share of checks and plans waiting; 503 engine_busy.
 import type { APIRoute } from 'astro';
-import { json, readJson } from '../../../../server/http.ts';
-import { DESIGN_BODY_LIMIT, draftSchema } from '../../../../server/designs/designApi.schema.ts';
+import { json } from '../../../../server/http.ts';
+import { readDesignBody } from '../../../../server/designs/designBody.ts';
 import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
-import { storedDesign } from '../../../../server/designs/designRecord.ts';
-import { planDesignOnServer } from '../../../../server/designs/designRoute.service.ts';
+import { designPayloadOf, planDesignOnServer } from '../../../../server/designs/designRoute.service.ts';
 
 export const POST = (async ({ locals, params, request }) => {
   const owned = await requireOwnedDesign(locals, params);
   if (!owned.ok) return owned.error;
-  const body = await readJson(request, draftSchema, DESIGN_BODY_LIMIT);
+  const account = owned.value.user.id;
+  const body = await readDesignBody(request, 'draft', account);
   if (!body.ok) return body.error;
   const { row } = owned.value;
-  const planned = await planDesignOnServer(body.value.design ?? storedDesign(row));
+  const draft = body.value.design;
+  const planned = await planDesignOnServer(designPayloadOf(row, draft?.text ?? null), account, request.signal);
   if (!planned.ok) return planned.error.kind === 'problem' ? designProblemResponse(planned.error.problem) : engineFailureResponse(planned.error.failure);
-  return json({ designVersion: row.version, draft: body.value.design !== undefined, plan: planned.value });
+  return json({ designVersion: row.version, draft: draft !== null, plan: planned.value });
 }) satisfies APIRoute;

@@ -5,10 +5,10 @@
 // SavedRoute = { kind, designVersion, current, strokes: [{ pass, kind, points, length }], summary, createdAt, updatedAt }.
 import type { APIRoute } from 'astro';
 import { db } from '../../../../server/db.ts';
-import { invalidInput, json, readJson } from '../../../../server/http.ts';
+import { invalidInput, json } from '../../../../server/http.ts';
 import { assertNever } from '../../../../../shared/assertNever.ts';
 import { findDesignRoute } from '../../../../server/designs/design.repository.ts';
-import { DESIGN_BODY_LIMIT, saveRouteSchema } from '../../../../server/designs/designApi.schema.ts';
+import { readDesignBody } from '../../../../server/designs/designBody.ts';
 import { conflict, designProblemResponse, engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
 import { toSavedRouteJson } from '../../../../server/designs/designRecord.ts';
 import { saveOwnRoute, savePlannedRoute } from '../../../../server/designs/designRoute.service.ts';
@@ -24,11 +24,12 @@ export const GET = (async ({ locals, params }) => {
 export const PUT = (async ({ locals, params, request }) => {
   const owned = await requireOwnedDesign(locals, params);
   if (!owned.ok) return owned.error;
-  const body = await readJson(request, saveRouteSchema, DESIGN_BODY_LIMIT);
+  const body = await readDesignBody(request, 'route', owned.value.user.id);
   if (!body.ok) return body.error;
   const { row } = owned.value;
-  if (body.value.designVersion !== row.version) return conflict(row);
-  const saved = body.value.kind === 'planned' ? await savePlannedRoute(db, row) : await saveOwnRoute(db, row, body.value.route);
+  const { fields, routeText } = body.value;
+  if (fields.designVersion !== row.version) return conflict(row, owned.value.user.id);
+  const saved = fields.kind === 'own' && routeText !== null ? await saveOwnRoute(db, row, routeText) : await savePlannedRoute(db, row);
   if (!saved.ok) {
     const f = saved.error;
     switch (f.kind) {

@@ -8,7 +8,6 @@ import { copySchema } from '../../../../server/templates/template.schema.ts';
 import { findVersionById } from '../../../../server/templates/template.repository.ts';
 import { readTemplateDetail } from '../../../../server/templates/templateDetail.ts';
 import { copyVersionIntoDesigns } from '../../../../server/templates/designSource.ts';
-import { summarizeWithEngine } from '../../../../server/designs/designHttp.ts';
 
 export const POST = (async ({ locals, params, request, url }) => {
   const signedIn = requireUser(locals);
@@ -21,6 +20,6 @@ export const POST = (async ({ locals, params, request, url }) => {
   if (!detail || detail.template.id !== params['id']) return problem(404, 'not_found', 'Not found.');
   const version = await findVersionById(db, detail.version.id);
   if (!version) return problem(404, 'not_found', 'Not found.');
-  const designId = await copyVersionIntoDesigns(db, summarizeWithEngine, signedIn.value.user.id, version);
+  const designId = await copyVersionIntoDesigns(db, signedIn.value.user.id, version);
   return json({ designId, templateVersionId: version.id, version: version.version }, 201);
 }) satisfies APIRoute;

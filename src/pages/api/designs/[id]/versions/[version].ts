@@ -1,11 +1,11 @@
 // GET /api/designs/:id/versions/:version — one saved version: { version: { version, title, notes, design, savedAt } }.
 import type { APIRoute } from 'astro';
 import { db } from '../../../../../server/db.ts';
-import { json } from '../../../../../server/http.ts';
 import { findDesignVersion } from '../../../../../server/designs/design.repository.ts';
 import { versionParamSchema } from '../../../../../server/designs/designApi.schema.ts';
-import { notFound, requireOwnedDesign } from '../../../../../server/designs/designHttp.ts';
-import { toDesignVersionJson } from '../../../../../server/designs/designRecord.ts';
+import { engineFailureResponse, notFound, requireOwnedDesign } from '../../../../../server/designs/designHttp.ts';
+import { acceptStoredDesign, jsonText } from '../../../../../server/designs/designPayload.ts';
+import { designVersionJsonText } from '../../../../../server/designs/designRecord.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);
@@ -13,5 +13,8 @@ export const GET = (async ({ locals, params }) => {
   const version = versionParamSchema.safeParse(params['version']);
   if (!version.success) return notFound();
   const row = await findDesignVersion(db, owned.value.row.id, version.data);
-  return row ? json({ version: toDesignVersionJson(row) }) : notFound();
+  if (!row) return notFound();
+  const design = await acceptStoredDesign(row.data_json, owned.value.user.id);
+  if (!design.ok) return engineFailureResponse(design.error);
+  return jsonText(`{"version":${designVersionJsonText(row, design.value.designText)}}`);
 }) satisfies APIRoute;

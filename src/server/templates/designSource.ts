@@ -7,7 +7,6 @@ import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import type { TemplateVersionRow } from './template.repository.ts';
 import { routeFiguresSchema, routeStrokesSchema, type RouteFigures, type RouteStroke } from './routeSnapshot.schema.ts';
-import { requestDesignDerive } from '../designs/designDerive.ts';
 import { copiedDesignSummary, copiedRoute } from './copiedFigures.ts';
 
 export interface PublishableDesign {
@@ -36,9 +35,16 @@ export async function loadPublishableDesign(db: Kysely<Database>, ownerId: strin
 
 /**
  * A new design owned by `ownerId` holding the version's drawing and route, marked with the version it came from
- * (design.copied_from_template_version_id). The table figures are the planner's (copiedFigures.ts). Returns the id.
+ * (design.copied_from_template_version_id). The table figures are the planner's (copiedFigures.ts).
  */
-export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: string, v: TemplateVersionRow): Promise<string> {
+/** The copy, and whether its table figures are still to be computed (the caller asks the engine: designDerive.ts). */
+export interface DesignCopy {
+  readonly id: string;
+  readonly version: number;
+  readonly figuresPending: boolean;
+}
+
+export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: string, v: TemplateVersionRow): Promise<DesignCopy> {
   const design = designSchema.parse(v.design);
   const route = copiedRoute(v.route, v.figures);
   const summary = copiedDesignSummary(v.figures);
@@ -70,6 +76,5 @@ export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: stri
     }
     return created;
   });
-  if (summary === null) requestDesignDerive({ id: created.id, owner_id: ownerId, version: created.version });
-  return created.id;
+  return { id: created.id, version: created.version, figuresPending: summary === null };
 }

@@ -8,6 +8,7 @@ import { copySchema } from '../../../../server/templates/template.schema.ts';
 import { findVersionById } from '../../../../server/templates/template.repository.ts';
 import { readTemplateDetail } from '../../../../server/templates/templateDetail.ts';
 import { copyVersionIntoDesigns } from '../../../../server/templates/designSource.ts';
+import { requestDesignDerive } from '../../../../server/designs/designDerive.ts';
 
 export const POST = (async ({ locals, params, request, url }) => {
   const signedIn = requireUser(locals);
@@ -20,6 +21,7 @@ export const POST = (async ({ locals, params, request, url }) => {
   if (!detail || detail.template.id !== params['id']) return problem(404, 'not_found', 'Not found.');
   const version = await findVersionById(db, detail.version.id);
   if (!version) return problem(404, 'not_found', 'Not found.');
-  const designId = await copyVersionIntoDesigns(db, signedIn.value.user.id, version);
-  return json({ designId, templateVersionId: version.id, version: version.version }, 201);
+  const copy = await copyVersionIntoDesigns(db, signedIn.value.user.id, version);
+  if (copy.figuresPending) requestDesignDerive({ id: copy.id, owner_id: signedIn.value.user.id, version: copy.version });
+  return json({ designId: copy.id, templateVersionId: version.id, version: version.version }, 201);
 }) satisfies APIRoute;

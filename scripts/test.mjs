@@ -79,16 +79,31 @@ try {
     // Where the S3 fake keeps objects as files: tests age an object (its mtime is its LastModified).
     S3_FAKE_DIR: s3Dir,
   };
-  const jsonReport = path.join(outputDir, 'vitest.json');
-  const args = [path.join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${jsonReport}`, ...process.argv.slice(2)];
-  exitCode = await new Promise((resolve) => {
-    const child = spawn(process.execPath, args, { cwd: ROOT, env: vitestEnv, stdio: 'inherit' });
-    child.on('exit', (code, signal) => resolve(code ?? (signal ? 1 : 0)));
-  });
-  if (existsSync(jsonReport)) {
-    const report = JSON.parse(readFileSync(jsonReport, 'utf8'));
-    console.log(`\n${report.numPassedTests} passed, ${report.numFailedTests} failed, ${report.numPendingTests + report.numTodoTests} skipped`);
+  // Two Vitest runs, `unit` then `app`: the CPU-heavy unit files (property tests, outside solvers) never compete
+  // with the browser tests for the two cores, and a failure in one run never hides the other's results.
+  const totals = { passed: 0, failed: 0, skipped: 0 };
+  exitCode = 0;
+  for (const project of ['unit', 'app']) {
+    const jsonReport = path.join(outputDir, `vitest-${project}.json`);
+    const args = [
+      path.join(ROOT, 'node_modules', 'vitest', 'vitest.mjs'), 'run', '--project', project, '--passWithNoTests',
+      '--reporter=default', '--reporter=json', `--outputFile.json=${jsonReport}`, ...process.argv.slice(2),
+    ];
+    const code = await new Promise((resolve) => {
+      const child = spawn(process.execPath, args, { cwd: ROOT, env: vitestEnv, stdio: 'inherit' });
+      child.on('exit', (c, signal) => resolve(c ?? (signal ? 1 : 0)));
+    });
+    if (code !== 0) exitCode = 1;
+    if (existsSync(jsonReport)) {
+      const report = JSON.parse(readFileSync(jsonReport, 'utf8'));
+      totals.passed += report.numPassedTests;
+      totals.failed += report.numFailedTests;
+      totals.skipped += report.numPendingTests + report.numTodoTests;
+    } else {
+      exitCode = 1;
+    }
   }
+  console.log(`\n${totals.passed} passed, ${totals.failed} failed, ${totals.skipped} skipped`);
 } catch (error) {
   console.error(error);
   exitCode = 1;

@@ -1,4 +1,5 @@
 import fc from 'fast-check';
+import { assertYielding } from '../../tests/helpers/yieldingProperty.ts';
 import { describe, expect, it } from 'vitest';
 import type { Units } from '../design/design.schema.ts';
 import { properCrossing } from '../geometry/intersect.ts';
@@ -106,15 +107,16 @@ describe(`motifs: every fill of a layout patch is inside it and one piece with i
   });
 
   for (const kind of ['straight-lines', 'crosshatch', 'ribbon-candy', 'arches'] as const) {
-    it(kind, () => {
-      fc.assert(fc.property(caseFor(kind), ({ patch, params }) => void checkFill(patch, params)), { seed: 20260, numRuns: RUNS });
+    it(kind, async () => {
+      await assertYielding(caseFor(kind), ({ patch, params }) => void checkFill(patch, params), { seed: 20260, numRuns: RUNS });
     }, SLOW);
   }
 
-  it(`echo: legs no longer than ${ECHO_LEG_FACTOR} × spacing`, () => {
+  it(`echo: legs no longer than ${ECHO_LEG_FACTOR} × spacing`, async () => {
     let longest = 0;
-    fc.assert(
-      fc.property(caseFor('echo'), ({ patch, params }) => {
+    await assertYielding(
+      caseFor('echo'),
+      ({ patch, params }) => {
         checkFill(patch, params);
         if (params.kind !== 'echo') return;
         for (const leg of planEcho(patch.polygon, params).legs) {
@@ -122,16 +124,17 @@ describe(`motifs: every fill of a layout patch is inside it and one piece with i
           longest = Math.max(longest, length / params.spacing);
           expect(length).toBeLessThanOrEqual(ECHO_LEG_FACTOR * params.spacing * (1 + 1e-9));
         }
-      }),
+      },
       { seed: 20261, numRuns: RUNS },
     );
     // Every pieced patch is convex, where each leg is exactly one spacing (half to a half-step echo).
     expect(longest).toBeLessThanOrEqual(1 + 1e-6);
   }, SLOW);
 
-  it('pebbles: each pebble touches its nearest neighbour, within the set overlap', () => {
-    fc.assert(
-      fc.property(caseFor('pebbles'), ({ patch, params }) => {
+  it('pebbles: each pebble touches its nearest neighbour, within the set overlap', async () => {
+    await assertYielding(
+      caseFor('pebbles'),
+      ({ patch, params }) => {
         checkFill(patch, params);
         if (params.kind !== 'pebbles') return;
         const pebbles = placePebbles(patch.polygon, params);
@@ -147,7 +150,7 @@ describe(`motifs: every fill of a layout patch is inside it and one piece with i
           // Nearest neighbour: overlapping by exactly `overlap` (0: tangent), never by more.
           if (pebbles.length > 1) expect(Math.abs(nearest + params.overlap)).toBeLessThanOrEqual(tol);
         });
-      }),
+      },
       { seed: 20262, numRuns: RUNS },
     );
   }, SLOW);

@@ -54,16 +54,20 @@ export function findEndPlaces(graph: PlanarGraph, frame: BlockFrame | null): End
 
 /** How much the planner's objective charges for a free thread end, in integer travel-cost units. */
 export interface EndCosts {
-  /** Charged for every free end (so a stop that saves no travel is never made). */
+  /** Charged for every free end (so a stop that saves no travel is never made): one cost unit. */
   readonly tie: number;
-  /** Charged on top for an end in the open: 2·tie plus the allowance (extra travel a hidden end may cost). */
+  /** Charged on top for an end in the open: two more units plus the allowance (extra travel a hidden end may cost). */
   readonly open: number;
+  /** The allowance in design units (weighted like travel). */
+  readonly allowance: number;
+  /**
+   * The tie as the exact search's solver sees it, in design units: 1e-7 of the block's size. One cost unit (about
+   * 1e-14 of the design's length) is below the solver's tolerances; 1e-7 of the size is far above them and far below
+   * any travel difference a quilter could measure.
+   */
+  readonly solverTie: number;
 }
 
-/**
- * End costs for a travel graph with cost unit `quantum` (design units per cost unit). The tie is 1e-7 of the
- * block's size: far below any travel difference a quilter measures, far above rounding in the cost units.
- */
 export function makeEndCosts(graph: PlanarGraph, quantum: number, allowance: number): EndCosts {
   let minX = Infinity;
   let minY = Infinity;
@@ -75,12 +79,16 @@ export function makeEndCosts(graph: PlanarGraph, quantum: number, allowance: num
     maxX = Math.max(maxX, x);
     maxY = Math.max(maxY, y);
   }
-  const size = Math.max(maxX - minX, maxY - minY, quantum);
-  const tie = Math.max(1, Math.round((1e-7 * size) / quantum));
-  return { tie, open: 2 * tie + Math.round(allowance / quantum) };
+  const size = Math.max(maxX - minX, maxY - minY, 0);
+  return { tie: 1, open: 2 + Math.round(allowance / quantum), allowance, solverTie: Math.max(1e-7 * size, 1e3 * quantum) };
 }
 
 /** Integer cost of a free thread end at v. */
 export function endCostAt(costs: EndCosts, places: readonly EndPlace[], v: number): number {
   return costs.tie + (places[v] === 'open' ? costs.open : 0);
+}
+
+/** The same end cost in the solver's design units (see EndCosts.solverTie). */
+export function solverEndCostAt(costs: EndCosts, places: readonly EndPlace[], v: number): number {
+  return places[v] === 'open' ? 3 * costs.solverTie + costs.allowance : costs.solverTie;
 }

@@ -47,16 +47,14 @@ export class ConnectivityCuts {
    * Cuts violated by a fractional point: a max-flow from the first target to each other one on the support graph
    * (capacities = column values, closing edge 1); a flow below 2 gives the cut on the source side.
    */
-  separateFractional(values: Float64Array): SparseRows {
+  separateFractional(values: Float64Array, rows: RowBuilder): void {
     const flow = new MaxFlow(this.nodeCount);
     this.addSupport(flow, values, EPS);
-    const rows = new RowBuilder();
     const root = this.targets[0]!;
     for (let i = 1; i < this.targets.length; i++) {
       const value = flow.run(root, this.targets[i]!, 2);
       if (value < 2 - EPS) this.addCut(rows, flow.sourceSide());
     }
-    return rows.build();
   }
 
   /** For an integer point: null when the route is connected, else one cut per part that holds a target. */

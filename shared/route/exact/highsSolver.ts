@@ -11,28 +11,37 @@
 import loadHighs, { type Highs, type InitOptions, type Model } from 'highs';
 import type { LinearProgram, MipSession, MipSolver, SolveOutcome, SparseRows, SolveStatus } from './mipSolver.ts';
 
-/** HiGHS options for every solve: silent, exact MIP optimality (no relative or absolute gap allowed beyond rounding). */
+/**
+ * HiGHS options for every solve: silent, exact MIP optimality (no relative or absolute gap allowed beyond rounding).
+ * Its primal heuristics and symmetry detection are off: the planner brings its own first route, and on these small
+ * programs they cost more than the branching they save (measured: bench/routeEngine.bench.ts).
+ */
 const BASE_OPTIONS = {
   output_flag: false,
   mip_rel_gap: 0,
   mip_abs_gap: 1e-9,
   random_seed: 1,
+  mip_heuristic_run_feasibility_jump: false,
+  mip_heuristic_run_rins: false,
+  mip_heuristic_run_rens: false,
+  mip_heuristic_run_root_reduced_cost: false,
+  mip_detect_symmetry: false,
 } as const;
 
-export async function loadHighsSolver(init?: InitOptions): Promise<MipSolver> {
+export async function loadHighsSolver(init?: InitOptions, extra: Record<string, boolean | number | string> = {}): Promise<MipSolver> {
   const highs = await loadHighs(init);
   return {
     name: `HiGHS ${highs.version.string}`,
-    open: (program) => openSession(highs, program),
+    open: (program) => openSession(highs, program, extra),
   };
 }
 
-function openSession(highs: Highs, program: LinearProgram): MipSession {
+function openSession(highs: Highs, program: LinearProgram, extra: Record<string, boolean | number | string>): MipSession {
   const n = program.cost.length;
   const inf = highs.infinity;
   const model = highs.createModel();
   const finite = (a: Float64Array): Float64Array => a.map((v) => (v === Infinity ? inf : v === -Infinity ? -inf : v));
-  model.options.set(BASE_OPTIONS);
+  model.options.set({ ...BASE_OPTIONS, ...extra });
   model.passModel({
     numCols: n,
     numRows: program.rows.lower.length,
@@ -44,10 +53,17 @@ function openSession(highs: Highs, program: LinearProgram): MipSession {
     matrix: { format: 'csr', numRows: program.rows.lower.length, numCols: n, ...csrOf(program.rows) },
     integrality: Int32Array.from(program.integer),
   });
+  const all = { kind: 'range', from: 0, to: n - 1 } as const;
+  const integrality = Int32Array.from(program.integer);
+  let integerNow = true;
   const run = (timeLimitSeconds: number, integer: boolean): SolveOutcome => {
+    // The relaxation is the same model with every column continuous (HiGHS keeps its basis for the next LP).
+    if (integer !== integerNow && n > 0) {
+      model.changeColsIntegrality(all, integer ? integrality : new Int32Array(n));
+      integerNow = integer;
+    }
     model.zeroAllClocks();
-    // `simplex` solves the relaxation and ignores integrality; `choose` runs branch-and-cut on a MIP.
-    model.options.set({ time_limit: Math.max(timeLimitSeconds, 1e-3), solver: integer ? 'choose' : 'simplex' });
+    model.options.set({ time_limit: Math.max(timeLimitSeconds, 1e-3) });
     const result = model.run();
     return outcomeOf(highs, model, result.modelStatus, integer);
   };

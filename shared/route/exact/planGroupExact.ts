@@ -2,7 +2,7 @@ import type { PlanarGraph } from '../../graph/planarGraph.types.ts';
 import { buildPasses } from '../buildPasses.ts';
 import type { GroupEnds, GroupPlan } from '../planGroup.ts';
 import type { RouteGroup } from '../routeGroups.ts';
-import { endCostAt } from '../threadEnds.ts';
+import { endCostAt, solverEndCostAt } from '../threadEnds.ts';
 import type { TravelGraph } from '../travelGraph.ts';
 import { searchRoute, type SearchResult } from './branchAndCut.ts';
 import type { Budget } from './budget.ts';
@@ -53,13 +53,18 @@ export function planGroupExact(
   const reduced = reduceGraph(graph, travel, group.quiltingEdges, fixedEnds, ends.places);
   const onLines = new Uint8Array(reduced.kept.length);
   for (const r of reduced.required) onLines[r.a] = onLines[r.b] = 1;
-  const endCost = Float64Array.from(reduced.kept, (v, i) => (fixedEnds.includes(v) && !onLines[i] ? -1 : endCostAt(ends.costs, ends.places, v)));
+  const barred = (v: number, i: number): boolean => fixedEnds.includes(v) && !onLines[i];
+  const endCost = Float64Array.from(reduced.kept, (v, i) => (barred(v, i) ? -1 : endCostAt(ends.costs, ends.places, v)));
+  const solverEndCost = Float64Array.from(reduced.kept, (v, i) => (barred(v, i) ? -1 : solverEndCostAt(ends.costs, ends.places, v)));
   const keptStart = start >= 0 ? reduced.keptIndex[start]! : -1;
   const keptEnd = end >= 0 ? reduced.keptIndex[end]! : -1;
-  const rpp = buildRppProgram({ reduced, start: keptStart, end: keptEnd, extraStops: ends.extraStops, endCost, quantum: travel.quantum });
+  const rpp = buildRppProgram({ reduced, start: keptStart, end: keptEnd, extraStops: ends.extraStops, endCost, solverEndCost, quantum: travel.quantum });
   const cuts = new ConnectivityCuts(reduced, rpp, [keptStart, keptEnd].filter((v) => v >= 0));
   const upperCost = upper.travelCost + upper.endCost;
-  const found: SearchResult = searchRoute(solver, rpp, cuts, budget, limitMs, travel.quantum);
+  // A solver objective exceeds the cost-unit objective (times quantum) by at most 3·solverTie per thread end.
+  const freeEnds = (start < 0 ? 1 : 0) + (end < 0 ? 1 : 0) + 2 * ends.extraStops;
+  const slack = 3 * ends.costs.solverTie * freeEnds;
+  const found: SearchResult = searchRoute(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum);
   const stats: ExactStats = {
     pieces: reduced.pieceCount,
     keptVertices: reduced.kept.length,
@@ -72,10 +77,10 @@ export function planGroupExact(
   };
   const lowerBound = Math.max(upper.lowerBound, Math.min(found.bound, upperCost));
   if (found.values === null || found.objective > upperCost || (found.objective === upperCost && !found.proven)) {
-    // The heuristic's route stands; the search may still have proven it optimal. HiGHS proves optimality up to its
-    // absolute gap (1e-9 design units), so a proven optimum may sit that much above the heuristic's exact cost.
-    const slack = 1e-9 / travel.quantum + 1e-9 * upperCost;
-    if (found.proven && found.objective > upperCost + slack) {
+    // The heuristic's route stands; the search may still have proven it optimal. The solver proves its optimum up to
+    // its absolute gap (1e-9 design units) and weighs thread ends by solverTie, so its optimum may sit that much above.
+    const tolerance = (slack + 1e-9) / travel.quantum + 1e-9 * upperCost;
+    if (found.proven && found.objective > upperCost + tolerance) {
       throw new Error(`route/exact/planGroupExact: proven optimum ${found.objective} above a known route ${upperCost}`);
     }
     return { plan: { ...upper, lowerBound: found.proven ? upperCost : lowerBound }, stats };

@@ -10,7 +10,9 @@ export interface RppInstance {
   readonly extraStops: number;
   /** Cost of a free thread end at each kept vertex (−1: no free end may be there). */
   readonly endCost: Float64Array;
-  /** Design units per cost unit (the LP works in design units to keep HiGHS's tolerances meaningful). */
+  /** The same in design units as the solver sees it (threadEnds.ts: solverEndCostAt). */
+  readonly solverEndCost: Float64Array;
+  /** Design units per cost unit (the solver works in design units to keep its tolerances meaningful). */
   readonly quantum: number;
 }
 
@@ -19,7 +21,8 @@ export interface RppInstance {
  * engine-references.md §1.3 through a dummy vertex D):
  *   x_e ∈ {0,1,2} travel count on each reduced travel edge, x_r ∈ {0,1} extra traversal of each required edge,
  *   y_v ∈ {0,1} a free thread end at kept vertex v (an edge v–D), z_v ≥ 0 integer;
- *   parity: Σ_{e∋v} x_e + y_v + b_v = 2 z_v at every kept vertex (b_v: quilting-line ends and fixed ends at v, mod 2);
+ *   parity: Σ_{e∋v} x_e + y_v + b_v = 2 z_v at every kept vertex (b_v: quilting-line ends and fixed ends at v, mod 2),
+ *   and Σ_{e∋v} x_e + y_v ≥ 1 where b_v is odd (implied for integers, and it tightens the relaxation);
  *   ends: Σ y_v ≤ (free route ends) + 2·(extra stops);
  *   connectivity (added as cuts): every vertex set S holding some but not all pieces has x(δ(S)) + y(δ(S)) ≥ 2 − c(S),
  *   where c(S) counts the closing edge (start–end, or fixed end–D) crossing S;
@@ -43,10 +46,12 @@ export interface RppProgram {
   readonly endCol: Int32Array;
   /** The closing edge as support nodes, or null. */
   readonly closing: readonly [number, number] | null;
+  /** Per support node (kept vertices, then D): 1 where quilting-line ends plus closing edge ends are odd. */
+  readonly odd: Uint8Array;
 }
 
 export function buildRppProgram(inst: RppInstance): RppProgram {
-  const { reduced, start, end, extraStops, endCost, quantum } = inst;
+  const { reduced, start, end, extraStops, endCost, solverEndCost, quantum } = inst;
   const k = reduced.kept.length;
   const d = k;
   const freeEnds = (start < 0 ? 1 : 0) + (end < 0 ? 1 : 0);
@@ -54,27 +59,29 @@ export function buildRppProgram(inst: RppInstance): RppProgram {
   const a: number[] = [];
   const b: number[] = [];
   const cost: number[] = [];
+  const solverCost: number[] = [];
   const upper: number[] = [];
-  const add = (u: number, v: number, c: number, ub: number): number => {
+  const add = (u: number, v: number, c: number, sc: number, ub: number): number => {
     a.push(u);
     b.push(v);
     cost.push(c);
+    solverCost.push(sc);
     upper.push(ub);
     return a.length - 1;
   };
-  for (const t of reduced.travel) add(t.a, t.b, t.cost, 2);
+  for (const t of reduced.travel) add(t.a, t.b, t.cost, t.cost * quantum, 2);
   const travelCols = a.length;
-  const requiredCol = Int32Array.from(reduced.required, (r) => (r.a === r.b ? -1 : add(r.a, r.b, r.cost, 1)));
+  const requiredCol = Int32Array.from(reduced.required, (r) => (r.a === r.b ? -1 : add(r.a, r.b, r.cost, r.cost * quantum, 1)));
   const endCol = new Int32Array(k).fill(-1);
-  if (maxEnds > 0) for (let v = 0; v < k; v++) if (endCost[v]! >= 0) endCol[v] = add(v, d, endCost[v]!, 1);
+  if (maxEnds > 0) for (let v = 0; v < k; v++) if (endCost[v]! >= 0) endCol[v] = add(v, d, endCost[v]!, solverEndCost[v]!, 1);
   const edgeCols = a.length;
 
   let closing: readonly [number, number] | null = null;
   if (start >= 0 && end >= 0 && start !== end) closing = [start, end];
   else if (start >= 0 && end < 0) closing = [start, d];
   else if (end >= 0 && start < 0) closing = [end, d];
-  const parityConst = Uint8Array.from(reduced.parity);
-  if (closing) for (const v of closing) if (v < k) parityConst[v]! ^= 1;
+  const parityConst = Uint8Array.from([...reduced.parity, 0]);
+  if (closing) for (const v of closing) parityConst[v]! ^= 1;
 
   // Parity rows: one per kept vertex with an edge column or an odd constant; each gets its own z column.
   const incident: number[][] = Array.from({ length: k }, () => []);
@@ -89,9 +96,12 @@ export function buildRppProgram(inst: RppInstance): RppProgram {
     if (cols.length === 0 && parityConst[v] === 0) continue;
     const degreeCap = cols.reduce((s, c) => s + upper[c]!, 0) + parityConst[v]!;
     rows.add([...cols, zCol], [...cols.map(() => 1), -2], -parityConst[v]!, -parityConst[v]!);
+    // Parity leaves the linear relaxation almost free (z is continuous there); an odd vertex needs ≥ 1 traversal.
+    if (parityConst[v] === 1) rows.add(cols, cols.map(() => 1), 1, Infinity);
     a.push(v);
     b.push(v);
     cost.push(0);
+    solverCost.push(0);
     upper.push(Math.floor(degreeCap / 2));
     zCol++;
   }
@@ -101,13 +111,13 @@ export function buildRppProgram(inst: RppInstance): RppProgram {
   const n = a.length;
   const colCost = Float64Array.from(cost);
   const program: LinearProgram = {
-    cost: colCost.map((c) => c * quantum),
+    cost: Float64Array.from(solverCost),
     lower: new Float64Array(n),
     upper: Float64Array.from(upper),
     integer: new Uint8Array(n).fill(1),
     rows: rows.build(),
   };
-  return { program, d, colA: Int32Array.from(a), colB: Int32Array.from(b), colCost, edgeCols, travelCols, requiredCol, endCol, closing };
+  return { program, d, colA: Int32Array.from(a), colB: Int32Array.from(b), colCost, edgeCols, travelCols, requiredCol, endCol, closing, odd: parityConst };
 }
 
 /** Accumulates sparse rows. */

@@ -37,7 +37,7 @@ export class GroupPlans {
     private readonly groups: readonly GroupSetting[],
     private readonly places: readonly EndPlace[],
     private readonly costs: EndCosts,
-    private readonly exact: { readonly solver: MipSolver; readonly budget: Budget } | null,
+    private readonly exact: { readonly solver: MipSolver; readonly budget: Budget; readonly always: boolean } | null,
     private readonly stats: PlannerStats,
   ) {}
 
@@ -54,7 +54,7 @@ export class GroupPlans {
     const ends = { extraStops: k, places: this.places, costs: this.costs };
     const heuristic = planGroup(this.graph, this.search, group, start, end, ends, this.stats);
     let out: PlannedGroup = { plan: heuristic, exact: null, proven: isProven(heuristic) };
-    if (!out.proven && this.exact && limitMs > 0) {
+    if (this.exact && (!out.proven || this.exact.always) && limitMs > 0) {
       const found = planGroupExact(this.graph, this.travel, group, start, end, ends, heuristic, this.exact.solver, this.exact.budget, limitMs);
       out = { plan: found.plan, exact: found.stats, proven: isProven(found.plan) };
     }

@@ -30,8 +30,11 @@ export interface PlanOptions {
   readonly hiddenEndAllowance?: number;
   /** The block's outline and binding band, so thread ends within the band count as hidden under the binding. */
   readonly frame?: BlockFrame;
-  /** The exact planner (solver and time budget in ms); without it the heuristic's route and bound stand. */
-  readonly exact?: { readonly solver: MipSolver; readonly timeBudgetMs: number };
+  /**
+   * The exact planner (solver and time budget in ms); without it the heuristic's route and bound stand. `always`
+   * runs the exact search even where the heuristic proved its route (to compare the two).
+   */
+  readonly exact?: { readonly solver: MipSolver; readonly timeBudgetMs: number; readonly always?: boolean };
   /** Also give the stops-vs-travel table for 0…MAX_EXTRA_STOPS extra stops. */
   readonly stopsTable?: boolean;
 }
@@ -118,7 +121,7 @@ export function planRoute(graph: PlanarGraph, options: PlanOptions = {}): RouteP
   const places = findEndPlaces(graph, options.frame ?? null);
   const costs = makeEndCosts(graph, travel.quantum, options.hiddenEndAllowance ?? 0);
   const budget = options.exact ? new Budget(options.exact.timeBudgetMs, clock ?? null) : null;
-  const plans = new GroupPlans(graph, travel, search, settings, places, costs, options.exact && budget ? { solver: options.exact.solver, budget } : null, stats);
+  const plans = new GroupPlans(graph, travel, search, settings, places, costs, options.exact && budget ? { solver: options.exact.solver, budget, always: options.exact.always ?? false } : null, stats);
   // The route's own group plans get the budget first, then the table's other rows share what is left.
   const routeKeys = settings.flatMap((_, g) => (settings.length === 1 ? [[g, extraStops]] : range(extraStops + 1).map((k) => [g, k])));
   planAll(plans, routeKeys, budget);
@@ -194,6 +197,8 @@ function sumStats(picked: readonly PlannedGroup[]): ExactStats | null {
     cuts: sum((s) => s.cuts),
     integerSolves: sum((s) => s.integerSolves),
     lpBound: sum((s) => s.lpBound),
+    objective: sum((s) => s.objective),
+    proven: ran.every((s) => s.proven),
     ms: sum((s) => s.ms),
   };
 }

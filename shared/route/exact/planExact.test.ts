@@ -3,7 +3,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { PlanarGraph } from '../../graph/planarGraph.types.ts';
 import { planRoute, type PlanOptions, type RoutePlan } from '../planRoute.ts';
-import { graphFromSegments } from '../testGraphs.ts';
+import { graphFromEdgeList, graphFromSegments } from '../testGraphs.ts';
 import { loadHighsSolver } from './highsSolver.ts';
 import type { MipSolver } from './mipSolver.ts';
 
@@ -29,6 +29,46 @@ const e10 = (): PlanarGraph =>
     [[12, 4], [12, 8], 'edge'],
     [[12, 8], [12, 12], 'edge'],
   ]);
+
+type Edge = readonly [string, string, number];
+const parse = (s: string): Edge[] =>
+  s.split(',').map((t) => {
+    const [ab, w] = t.trim().split(' ');
+    const [a, b] = ab!.split('-');
+    return [a!, b!, Number(w)] as const;
+  });
+
+describe('the branch-and-cut on the route-inspection worked examples (one piece: must equal the known optimum)', () => {
+  // Values from shared/notes/engine-references.md §2 (E1: Pearson A-level text "Chapter 3 Chinese postman problem" with
+  // jgrapht's edge assignment; E2–E6: jgrapht ChinesePostmanTest; E7: README of dilsonpereira/chinese-postman-problem).
+  const E1 = parse('A-B 50, A-C 50, A-D 50, B-D 50, B-E 70, B-F 50, C-D 70, C-G 70, C-H 120, D-F 60, E-F 70, F-H 60, G-H 70');
+  const cases: [string, Edge[], string, string, number][] = [
+    ['E1 closed at A', E1, 'A', 'A', 1000],
+    ['E1 open A→H', E1, 'A', 'H', 840],
+    ['E1 open A→G', E1, 'A', 'G', 910],
+    ['E1 open E→G', E1, 'E', 'G', 1030],
+    ['E2', parse('A-B 8, A-C 5, A-D 6, B-C 5, B-E 6, C-D 5, C-E 5, D-E 8'), 'A', 'A', 60],
+    ['E3', parse('1-2 5, 1-4 4, 1-5 1, 2-3 3, 2-5 1, 2-7 1, 3-4 2, 3-5 3, 3-6 1, 3-7 2, 4-5 1, 6-7 3'), '1', '1', 31],
+    [
+      'E4',
+      parse('1-2 100, 1-3 150, 1-4 200, 2-3 120, 2-5 250, 3-6 200, 4-5 100, 4-7 80, 4-8 160, 5-6 100, 5-7 100, 6-7 150, 6-10 160, 7-9 100, 8-9 40, 9-10 80'),
+      '1',
+      '1',
+      2590,
+    ],
+    ['E5 (a tree)', parse('1-2 1, 2-3 1, 3-4 1, 2-5 1, 3-6 1'), '1', '1', 10],
+    ['E6 (parallel edges)', parse('1-2 1, 1-4 3, 2-3 20, 2-3 10, 3-4 2'), '1', '1', 42],
+    ['E7 (a 0-length edge)', parse('0-1 1, 0-4 3, 1-2 0, 1-4 10, 2-3 9, 2-5 2, 2-6 7, 3-6 3, 4-5 4, 4-7 2, 5-7 6, 6-8 4, 6-9 2, 7-8 1, 8-9 5'), '0', '0', 62],
+  ];
+  for (const [name, edges, from, to, expected] of cases) {
+    it(`${name}: ${expected}`, () => {
+      const { graph, at } = graphFromEdgeList(edges);
+      const plan = planRoute(graph, { start: at(from), end: at(to), exact: { solver, timeBudgetMs: 20_000, always: true } });
+      expect(plan.exactSearch?.proven).toBe(true);
+      expect(routeLength(plan)).toBe(expected);
+    });
+  }
+});
 
 describe('exact planner on E10 (rural postman, two pieces joined by edge travel)', () => {
   it('closed 32, open (0,0)→(12,12) 48, open (0,4)→(0,8) 28, all proven', () => {

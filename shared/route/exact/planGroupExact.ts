@@ -19,8 +19,11 @@ export interface ExactStats {
   readonly cutRounds: number;
   readonly cuts: number;
   readonly integerSolves: number;
-  /** Linear relaxation bound with the root cuts (integer cost units). */
+  /** Linear relaxation bound with the cuts found (integer cost units). */
   readonly lpBound: number;
+  /** The search's own best objective (cost units; Infinity when it found none) and whether it proved it least. */
+  readonly objective: number;
+  readonly proven: boolean;
   /** Time spent (budget ms: wall time with a clock, else solver time). */
   readonly ms: number;
 }
@@ -73,6 +76,8 @@ export function planGroupExact(
     cuts: found.cuts,
     integerSolves: found.integerSolves,
     lpBound: found.lpBound,
+    objective: found.objective,
+    proven: found.proven,
     ms: budget.spentMs() - t0,
   };
   const lowerBound = Math.max(upper.lowerBound, Math.min(found.bound, upperCost));

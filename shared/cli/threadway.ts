@@ -1,16 +1,20 @@
 /**
  * Threadway command line, for batch use and scripting:
  *   npm run --silent threadway -- check FILE   route check of the design's own `route`
- *   npm run --silent threadway -- plan FILE    the planner's route
+ *   npm run --silent threadway -- plan FILE [--time-budget MS] [--extra-stops N] [--hidden-end-allowance LEN]
+ *                                              the planner's route, its proof (optimal, lower bound, gap) and the
+ *                                              stops-vs-travel table
  * FILE is a design JSON (shared/design/design.schema.ts). Prints one JSON object to stdout; lengths are in the
  * design's units. A bad file or bad usage prints a message to stderr and exits with code 2.
  */
 import { readFileSync } from 'node:fs';
 import { designSchema, type Design } from '../design/design.schema.ts';
 import { checkRoute } from '../route/checkRoute.ts';
+import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { planDesign } from '../route/planDesign.ts';
+import { planSettingsSchema, type PlanSettings } from '../route/planSettings.ts';
 
-const USAGE = 'usage: threadway (check|plan) FILE';
+const USAGE = 'usage: threadway check FILE | threadway plan FILE [--time-budget MS] [--extra-stops N] [--hidden-end-allowance LEN]';
 
 function fail(message: string): never {
   process.stderr.write(`threadway: ${message}\n`);
@@ -38,8 +42,28 @@ function readDesign(file: string): Design {
   return parsed.data;
 }
 
-function plan(design: Design): object {
-  const planned = planDesign(design);
+const PLAN_FLAGS: Record<string, keyof PlanSettings> = {
+  '--time-budget': 'timeBudgetMs',
+  '--extra-stops': 'extraStops',
+  '--hidden-end-allowance': 'hiddenEndAllowance',
+};
+
+function readSettings(args: readonly string[]): PlanSettings {
+  const raw: Record<string, number> = {};
+  for (let i = 0; i < args.length; i += 2) {
+    const key = PLAN_FLAGS[args[i]!];
+    const value = args[i + 1];
+    if (!key || value === undefined || value.trim() === '' || !Number.isFinite(Number(value))) fail(USAGE);
+    raw[key] = Number(value);
+  }
+  const parsed = planSettingsSchema.safeParse(raw);
+  if (!parsed.success) fail(parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n'));
+  return parsed.data;
+}
+
+async function plan(design: Design, settings: PlanSettings): Promise<object> {
+  const solver = await loadHighsSolver();
+  const planned = planDesign(design, { solver, settings, stopsTable: true, clock: () => performance.now() });
   if (!planned.ok) fail(planned.error.message);
   const p = planned.value;
   return {
@@ -56,6 +80,12 @@ function plan(design: Design): object {
     edgeLength: p.edgeLength,
     optimal: p.optimal,
     travelLowerBound: p.travelLowerBound,
+    lowerBound: p.travelLowerBound,
+    gapPercent: p.gapPercent,
+    settings: p.settings,
+    solver: solver.name,
+    stopsTable: p.stopsTable,
+    threadEnds: p.threadEnds.map(({ pass, end, point, place, reason }) => ({ pass, end, point, place, reason })),
     threadBudget: p.threadBudget,
     route: p.route.map((s) => ({ pass: s.pass, kind: s.kind, points: s.points })),
   };
@@ -70,6 +100,7 @@ function check(design: Design): object {
 }
 
 const [command, file, ...rest] = process.argv.slice(2);
-if ((command !== 'check' && command !== 'plan') || file === undefined || rest.length > 0) fail(USAGE);
+if ((command !== 'check' && command !== 'plan') || file === undefined || (command === 'check' && rest.length > 0)) fail(USAGE);
+const settings = command === 'plan' ? readSettings(rest) : null;
 const design = readDesign(file);
-process.stdout.write(`${JSON.stringify(command === 'plan' ? plan(design) : check(design))}\n`);
+process.stdout.write(`${JSON.stringify(settings ? await plan(design, settings) : check(design))}\n`);

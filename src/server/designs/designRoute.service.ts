@@ -5,6 +5,7 @@ import type { z } from 'zod';
 import type { Database, DesignRow } from '../../../db/schema.ts';
 import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
+import type { PlanSettings } from '../../../shared/route/planSettings.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import type { CheckAnswer, PlanAnswer } from '../engine/engine.types.ts';
 import { runEngine } from '../engine/enginePool.ts';
@@ -23,8 +24,8 @@ export async function checkDesignOnServer(design: Design): Promise<Result<CheckA
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
 }
 
-export async function planDesignOnServer(design: Design): Promise<Result<PlanAnswer, EngineFailure>> {
-  const r = await runEngine({ op: 'plan', design });
+export async function planDesignOnServer(design: Design, settings?: PlanSettings): Promise<Result<PlanAnswer, EngineFailure>> {
+  const r = await runEngine({ op: 'plan', design, ...(settings ? { settings } : {}) });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
 }

@@ -1,6 +1,7 @@
 import type { Budget } from './budget.ts';
 import type { ConnectivityCuts } from './connectivityCuts.ts';
 import type { MipSolver, SolveOutcome } from './mipSolver.ts';
+import { withFlowConnectivity } from './flowConnectivity.ts';
 import { separateOddCuts } from './oddCuts.ts';
 import { RowBuilder, type RppProgram } from './rppProgram.ts';
 
@@ -42,7 +43,7 @@ export function searchRoute(
 ): SearchResult {
   const until = budget.spentMs() + limitMs;
   const left = (): number => Math.max(0, until - budget.spentMs()) / 1000;
-  const session = solver.open(rpp.program);
+  const session = solver.open(withFlowConnectivity(rpp, cuts));
   let bound = -Infinity;
   let lpBound = -Infinity;
   let cutRounds = 0;

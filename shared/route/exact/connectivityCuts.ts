@@ -12,9 +12,11 @@ const EPS = 1e-6;
  * has one node per piece, one per fixed end off the lines, and D.
  */
 export class ConnectivityCuts {
-  private readonly nodeOf: Int32Array;
-  private readonly nodeCount: number;
-  private readonly targets: number[];
+  /** Support node of each kept vertex (and D, last): pieces contracted. */
+  readonly nodeOf: Int32Array;
+  readonly nodeCount: number;
+  /** Support nodes that the route must join: pieces and fixed ends off the lines. */
+  readonly targets: readonly number[];
   private readonly seen = new Set<string>();
 
   constructor(
@@ -44,16 +46,37 @@ export class ConnectivityCuts {
   }
 
   /**
-   * Cuts violated by a fractional point: a max-flow from the first target to each other one on the support graph
-   * (capacities = column values, closing edge 1); a flow below 2 gives the cut on the source side.
+   * Cuts violated by a fractional point, from a Gomory–Hu tree of the support graph (capacities = column values,
+   * closing edge 1; Gusfield's n − 1 max-flows): every violated cut between two targets shows among the tree's
+   * fundamental cuts, and each is checked against its parity-strengthened right-hand side (see addCut).
    */
   separateFractional(values: Float64Array, rows: RowBuilder): void {
-    const flow = new MaxFlow(this.nodeCount);
+    const n = this.nodeCount;
+    const flow = new MaxFlow(n);
     this.addSupport(flow, values, EPS);
-    const root = this.targets[0]!;
-    for (let i = 1; i < this.targets.length; i++) {
-      const value = flow.run(root, this.targets[i]!, 2);
-      if (value < 2 - EPS) this.addCut(rows, flow.sourceSide());
+    const parent = new Int32Array(n);
+    const weight = new Float64Array(n);
+    for (let s = 1; s < n; s++) {
+      weight[s] = flow.run(s, parent[s]!, 3);
+      const side = flow.sourceSide();
+      for (let j = s + 1; j < n; j++) if (parent[j] === parent[s] && side[j]) parent[j] = s;
+    }
+    const isTarget = new Uint8Array(n);
+    for (const t of this.targets) isTarget[t] = 1;
+    for (let v = 1; v < n; v++) {
+      if (weight[v]! >= 3 - EPS) continue;
+      const side = new Uint8Array(n);
+      const stack = [v];
+      while (stack.length > 0) {
+        const u = stack.pop()!;
+        side[u] = 1;
+        for (let w = u + 1; w < n; w++) if (parent[w] === u) stack.push(w);
+      }
+      let inside = 0;
+      for (const t of this.targets) inside += side[t]!;
+      if (inside === 0 || inside === this.targets.length) continue;
+      // The flow counts the closing edge too; the cut's right-hand side is for the columns alone.
+      if (weight[v]! - this.closingAcross(side) < this.rhsOf(side) - EPS) this.addCut(rows, side);
     }
   }
 
@@ -83,16 +106,34 @@ export class ConnectivityCuts {
     if (closing) flow.addEdge(this.nodeOf[closing[0]]!, this.nodeOf[closing[1]]!, 1);
   }
 
-  /** Adds x(δ(S)) + y(δ(S)) ≥ 2 − c(S) for S = nodes marked in `side`, once per distinct S. */
+  /**
+   * Adds x(δ(S)) + y(δ(S)) ≥ r for S = nodes marked in `side`, once per distinct S. The route crosses S at least twice
+   * (closing edge included) and, by parity, x(δ(S)) + y(δ(S)) ≡ Σ_{v∈S} odd(v) (mod 2): so r is the least number
+   * of that parity that is at least 2 − c(S), i.e. 2 or 3 without the closing edge across S, 2 or 1 with it.
+   */
   private addCut(rows: RowBuilder, side: Uint8Array): void {
     const key = side.join('');
     const complement = side.map((s) => 1 - s).join('');
     if (this.seen.has(key) || this.seen.has(complement)) return;
     this.seen.add(key);
-    const { colA, colB, edgeCols, closing } = this.rpp;
+    const { colA, colB, edgeCols } = this.rpp;
     const cols: number[] = [];
     for (let c = 0; c < edgeCols; c++) if (side[this.nodeOf[colA[c]!]!] !== side[this.nodeOf[colB[c]!]!]) cols.push(c);
-    const crossing = closing && side[this.nodeOf[closing[0]]!] !== side[this.nodeOf[closing[1]]!] ? 1 : 0;
-    rows.add(cols, cols.map(() => 1), 2 - crossing, Infinity);
+    rows.add(cols, cols.map(() => 1), this.rhsOf(side), Infinity);
+  }
+
+  private closingAcross(side: Uint8Array): number {
+    const { closing } = this.rpp;
+    return closing && side[this.nodeOf[closing[0]]!] !== side[this.nodeOf[closing[1]]!] ? 1 : 0;
+  }
+
+  /** The right-hand side for S (see addCut). */
+  private rhsOf(side: Uint8Array): number {
+    const { odd } = this.rpp;
+    const crossing = this.closingAcross(side);
+    let parity = 0;
+    for (let v = 0; v < odd.length; v++) if (side[this.nodeOf[v]!]) parity ^= odd[v]!;
+    const least = 2 - crossing;
+    return least % 2 === parity ? least : least + 1;
   }
 }

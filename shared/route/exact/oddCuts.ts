@@ -52,3 +52,4 @@ function subtree(children: readonly number[][], root: number, n: number): Uint8A
   }
   return inside;
 }
+

@@ -19,7 +19,8 @@ export interface RppInstance {
 /**
  * The integer program (Ghiani & Laporte, Math. Programming 87 (2000) 467–481, with the free ends of
  * engine-references.md §1.3 through a dummy vertex D):
- *   x_e ∈ {0,1,2} travel count on each reduced travel edge, x_r ∈ {0,1} extra traversal of each required edge,
+ *   x_e ∈ {0,1,2} travel count on each reduced travel edge (≤ 1 inside one piece), x_r ∈ {0,1} extra traversal of
+ *   each required edge,
  *   y_v ∈ {0,1} a free thread end at kept vertex v (an edge v–D), z_v ≥ 0 integer;
  *   parity: Σ_{e∋v} x_e + y_v + b_v = 2 z_v at every kept vertex (b_v: quilting-line ends and fixed ends at v, mod 2),
  *   and Σ_{e∋v} x_e + y_v ≥ 1 where b_v is odd (implied for integers, and it tightens the relaxation);
@@ -40,7 +41,7 @@ export interface RppProgram {
   readonly colCost: Float64Array;
   /** Number of x and y columns (the edge columns). */
   readonly edgeCols: number;
-  /** Columns [0, travelCols) are travel edges (in reduced.travel order), then required retraces, then y. */
+  /** Columns [0, travelCols) are the travel edges, in reduced.travel order. */
   readonly travelCols: number;
   readonly requiredCol: Int32Array;
   readonly endCol: Int32Array;
@@ -69,7 +70,12 @@ export function buildRppProgram(inst: RppInstance): RppProgram {
     upper.push(ub);
     return a.length - 1;
   };
-  for (const t of reduced.travel) add(t.a, t.b, t.cost, t.cost * quantum, 2);
+  // Two traversals of a path inside one piece are never needed: dropping both keeps parity, and the piece's own
+  // lines still join the two ends (Ghiani & Laporte 2000 bound such edges by 1). Between pieces, up to 2.
+  for (const t of reduced.travel) {
+    const samePiece = reduced.pieceOf[t.a]! >= 0 && reduced.pieceOf[t.a] === reduced.pieceOf[t.b];
+    add(t.a, t.b, t.cost, t.cost * quantum, samePiece ? 1 : 2);
+  }
   const travelCols = a.length;
   const requiredCol = Int32Array.from(reduced.required, (r) => (r.a === r.b ? -1 : add(r.a, r.b, r.cost, r.cost * quantum, 1)));
   const endCol = new Int32Array(k).fill(-1);

@@ -3,8 +3,9 @@
 Run with Debian's /usr/bin/python3 (the python3 on PATH may lack pulp). Reads a JSON list of instances from stdin:
   {"n", "edges": [[u, v, cost, kind, allowed]], "start", "end", "extraStops"}
 with cost the weighted length, kind "quilting" | "seam" | "edge", allowed whether travel may use the edge, and
-start/end a vertex or -1 (free). Writes a JSON list of {"travel", "groups", "seconds"}: the least travel over every
-travel group (per group: "pieces" and "travel"), and CBC's solve time for the instance.
+start/end a vertex or -1 (free), and an optional "timeLimit" in seconds (the benchmark's; tests give none). Writes a
+JSON list of {"travel", "groups", "seconds"}: the least travel over every travel group (per group: "pieces" and
+"travel"), and CBC's solve time for the instance; "travel" is null when CBC hit the time limit.
 
 The model is written straight on the planar graph, with none of the engine's reduction (an independent check of
 it): every allowed edge e gets an integer extra traversal count x_e in 0..2; a free thread end may sit at any vertex
@@ -20,7 +21,13 @@ import time
 
 import pulp
 
-CBC = pulp.COIN_CMD(path="/usr/bin/cbc", msg=0, gapRel=0, gapAbs=1e-9)
+def cbc(time_limit=None):
+    """CBC with no optimality gap; a time limit (seconds) only where the caller asks for one (the benchmark)."""
+    return pulp.COIN_CMD(path="/usr/bin/cbc", msg=0, gapRel=0, gapAbs=1e-9, timeLimit=time_limit)
+
+
+class TimeLimit(Exception):
+    pass
 
 
 class UnionFind:
@@ -51,7 +58,7 @@ def travel_groups(inst):
     return uf, groups
 
 
-def solve_group(inst, uf, root, start, end, extra_stops):
+def solve_group(inst, uf, root, start, end, extra_stops, time_limit):
     edges = inst["edges"]
     group_edges = [i for i, (u, v, _, _, allowed) in enumerate(edges) if allowed and uf.find(u) == root]
     required = [i for i in group_edges if edges[i][3] == "quilting"]
@@ -98,9 +105,12 @@ def solve_group(inst, uf, root, start, end, extra_stops):
     seconds = 0.0
     while True:
         t = time.perf_counter()
-        status = prob.solve(CBC)
+        left = None if time_limit is None else max(1, time_limit - seconds)
+        status = prob.solve(cbc(left))
         seconds += time.perf_counter() - t
-        if pulp.LpStatus[status] != "Optimal":
+        if pulp.LpStatus[status] != "Optimal" or prob.sol_status != pulp.LpSolutionOptimal:
+            if time_limit is not None and seconds >= time_limit - 1:
+                raise TimeLimit()
             raise SystemExit(f"CBC status {pulp.LpStatus[status]}")
         parts = UnionFind()
         for i in required:
@@ -133,12 +143,17 @@ def solve(inst):
     if extra and len(groups) > 1:
         raise SystemExit("extra stops are checked on one-group designs only")
     results, seconds = [], 0.0
-    for root in sorted(groups, key=lambda r: min(min(inst["edges"][i][:2]) for i in groups[r])):
-        s = start if start >= 0 and uf.find(start) == root else -1
-        e = end if end >= 0 and uf.find(end) == root else -1
-        result, secs = solve_group(inst, uf, root, s, e, extra)
-        results.append(result)
-        seconds += secs
+    time_limit = inst.get("timeLimit")
+    started = time.perf_counter()
+    try:
+        for root in sorted(groups, key=lambda r: min(min(inst["edges"][i][:2]) for i in groups[r])):
+            s = start if start >= 0 and uf.find(start) == root else -1
+            e = end if end >= 0 and uf.find(end) == root else -1
+            result, secs = solve_group(inst, uf, root, s, e, extra, time_limit)
+            results.append(result)
+            seconds += secs
+    except TimeLimit:
+        return {"travel": None, "groups": [], "seconds": time.perf_counter() - started}
     return {"travel": sum(r["travel"] for r in results), "groups": results, "seconds": seconds}
 
 

@@ -7,7 +7,7 @@ import { RowBuilder, type RppProgram } from './rppProgram.ts';
  * support graph (pieces contracted) sends one unit from the first piece to every other piece and fixed end, and
  * may use an edge only if the route travels it: f_ab + f_ba ≤ (T − 1)·x_e, with T the number of pieces to join
  * (the closing edge, always there, carries flow freely). This is the classic flow formulation of connectivity
- * (e.g. Magnanti & Wolsey, "Optimal trees", Handbooks in OR & MS 7 (1995) 503–615); it is weak on its own, but
+ * (e.g. Magnanti & Wolsey, "Optimal trees", Handbooks in OR & MS 7 (1995) 503–615; from memory); it is weak on its own, but
  * the connectivity and parity cuts added before it (connectivityCuts.ts, oddCuts.ts) carry the strength, and the
  * flow only rules out the routes that fall apart, which would otherwise each cost another integer solve.
  * Returns the program with the flow columns (cost 0) and rows appended; the edge columns keep their indices.

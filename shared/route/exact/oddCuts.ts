@@ -8,7 +8,7 @@ const EPS = 1e-6;
  * ends are odd in number must be left or entered by travel or a free end at least once: x(δ(S)) + y(δ(S)) ≥ 1.
  * These are Edmonds & Johnson's T-join (blossom) inequalities (Math. Programming 5 (1973) 88–124), with T the
  * odd kept vertices (and D when its closing edge makes it odd). Separated exactly by Padberg & Rao's method
- * (Math. of Operations Research 7 (1982) 67–80): a violated odd cut, if any, is among the fundamental cuts of a
+ * (Math. of Operations Research 7 (1982) 67–80; venue from memory): a violated odd cut, if any, is among the fundamental cuts of a
  * Gomory–Hu tree of the support graph, built here by Gusfield's n − 1 max-flows (SIAM J. Comput. 19 (1990) 143–155).
  */
 export function separateOddCuts(rpp: RppProgram, values: Float64Array, seen: Set<string>, rows: RowBuilder): void {

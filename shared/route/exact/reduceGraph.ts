@@ -16,7 +16,7 @@ export interface ReducedEdge {
 
 /**
  * The rural postman instance reduced after Christofides, Campos, Corberán & Mota (1981, Imperial College report
- * IC.O.R.81.5) and as used by Ghiani & Laporte (Math. Programming 87 (2000) 467–481):
+ * IC.O.R.81.5; report number from memory) and as used by Ghiani & Laporte (Math. Programming 87 (2000) 467–481):
  * - kept vertices: where quilting lines end or meet anything else, plus fixed route ends;
  * - required edges: the quilting lines, with chains through vertices that nothing else touches contracted;
  * - travel edges: one shortest travel path between two kept vertices, unless some other kept vertex splits it at

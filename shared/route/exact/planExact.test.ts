@@ -3,6 +3,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { PlanarGraph } from '../../graph/planarGraph.types.ts';
 import { planRoute, type PlanOptions, type RoutePlan } from '../planRoute.ts';
+import { archRowsDesign } from '../../../bench/multiPieceDesigns.ts';
+import { buildPlanarGraph } from '../../graph/planarGraph.ts';
 import { graphFromEdgeList, graphFromSegments } from '../testGraphs.ts';
 import { loadHighsSolver } from './highsSolver.ts';
 import type { MipSolver } from './mipSolver.ts';
@@ -108,5 +110,23 @@ describe('exact planner on E10 (rural postman, two pieces joined by edge travel)
     expect(rows.map((r) => Number(r.travelLength.toFixed(9)))).toEqual([4, 0, 0, 0]);
     expect(rows.map((r) => r.passes)).toEqual([1, 2, 2, 2]);
     expect(rows.every((r) => r.optimal)).toBe(true);
+  });
+});
+
+describe('time budget', () => {
+  it('a design too large for the budget still gets the best route found, with a true bound and its gap', () => {
+    // 38 arches on 6 ditch lines; 5 ms is far too little to prove it (it takes the exact search well over that).
+    const built = buildPlanarGraph({ ...archRowsDesign(2, 6, 8), start: [0, 0], end: [0, 0] });
+    if (!built.ok) throw new Error(built.error.message);
+    const rushed = planRoute(built.value, { start: [0, 0], end: [0, 0], exact: { solver, timeBudgetMs: 5 } });
+    const heuristic = planRoute(built.value, { start: [0, 0], end: [0, 0] });
+    expect(rushed.travelCost).toBeLessThanOrEqual(heuristic.travelCost + 1e-9);
+    expect(rushed.travelLowerBound).toBeLessThanOrEqual(rushed.travelCost + 1e-9);
+    expect(rushed.travelLowerBound).toBeGreaterThanOrEqual(heuristic.travelLowerBound - 1e-6);
+    if (!rushed.optimal) expect(rushed.gapPercent).toBeGreaterThan(0);
+    const patient = planRoute(built.value, { start: [0, 0], end: [0, 0], exact: { solver, timeBudgetMs: 60_000 } });
+    expect(patient.optimal).toBe(true);
+    // The rushed bound is a true bound: never above the proven optimum.
+    expect(rushed.travelLowerBound).toBeLessThanOrEqual(patient.travelCost + 1e-9);
   });
 });

@@ -5,8 +5,8 @@ import type { MipSolver } from './mipSolver.ts';
 
 /**
  * Runs the exact search a few times on a small block (three lines across it, joined only by edge travel) so that
- * WebAssembly's optimising compiler has the solver's hot code ready before the first real plan. Measured in a fresh
- * worker, the first search is several times slower than later ones (bench/routeEngine.bench.ts).
+ * WebAssembly's optimising compiler has the solver's hot code ready: the benchmark measures the planner in that
+ * steady state. (The engine workers skip it: the compiling then goes on in the background and slows the first task.)
  */
 export function warmUpSolver(solver: MipSolver, rounds = 4): void {
   const graph = warmUpGraph();

@@ -15,6 +15,7 @@ import type { PlanarGraph } from '../shared/graph/planarGraph.types.ts';
 import { planGroup } from '../shared/route/planGroup.ts';
 import { planRoute, type PlanStepTimes } from '../shared/route/planRoute.ts';
 import { findRouteGroups } from '../shared/route/routeGroups.ts';
+import { findEndPlaces, type EndCosts } from '../shared/route/threadEnds.ts';
 import { PathSearch } from '../shared/route/shortestPaths.ts';
 import { buildTravelGraph, EQUAL_TRAVEL_WEIGHTS } from '../shared/route/travelGraph.ts';
 import { backAndForthDesign, crosshatchDesign, piecedBlockDesign, randomWalkDesign } from './generators.ts';
@@ -86,23 +87,26 @@ function measure(name: string, design: Design): Row {
   const travel = buildTravelGraph(graph, EQUAL_TRAVEL_WEIGHTS, design.edgeTravel);
   const { groups } = findRouteGroups(graph, travel);
   const search = new PathSearch(travel);
+  // Free ends at no cost: the plain min T-join that networkx computes too (the hidden-end tie-break left out).
+  const plainEnds = { extraStops: 0, places: findEndPlaces(graph, null), costs: { tie: 0, open: 0, allowance: 0, solverTie: 0 } satisfies EndCosts };
   const edges = graph.edges.filter((e) => travel.cost[e.id]! >= 0).map((e) => [e.u, e.v, travel.cost[e.id]!]);
   const lowerBoundCosts: number[] = [];
   const pyGroups = groups.map((group) => {
-    const gp = planGroup(graph, search, group, -1, -1);
-    lowerBoundCosts.push(gp.lowerBoundCost);
+    const gp = planGroup(graph, search, group, -1, -1, plainEnds);
+    lowerBoundCosts.push(gp.lowerBound);
+    const walk = gp.passes[0]!;
     const parity = new Map<number, number>();
     for (const e of group.quiltingEdges) for (const v of [graph.edges[e]!.u, graph.edges[e]!.v]) parity.set(v, (parity.get(v) ?? 0) ^ 1);
     const terminals = [...parity].filter(([, p]) => p).map(([v]) => v);
-    const walkEdges = Array.from(gp.walk.edges, (e) => [graph.edges[e]!.u, graph.edges[e]!.v]);
-    const first = graph.edges[gp.walk.edges[0]!]!;
+    const walkEdges = Array.from(walk.edges, (e) => [graph.edges[e]!.u, graph.edges[e]!.v]);
+    const first = graph.edges[walk.edges[0]!]!;
     return {
       n: graph.vertices.length,
       edges,
       terminals,
       freeEnds: 2,
       walkEdges,
-      start: gp.walk.forward[0] === 1 ? first.u : first.v,
+      start: walk.forward[0] === 1 ? first.u : first.v,
     };
   });
   const stepMedian = (k: keyof PlanStepTimes): number => median(stepRuns.map((s) => s[k]));
@@ -114,7 +118,13 @@ function measure(name: string, design: Design): Row {
     passes: plan.passes,
     graphMs: median(graphTimes),
     planMs: median(planTimes),
-    steps: { travelGraph: stepMedian('travelGraph'), shortestPaths: stepMedian('shortestPaths'), matching: stepMedian('matching'), eulerWalk: stepMedian('eulerWalk') },
+    steps: {
+      travelGraph: stepMedian('travelGraph'),
+      shortestPaths: stepMedian('shortestPaths'),
+      matching: stepMedian('matching'),
+      eulerWalk: stepMedian('eulerWalk'),
+      exactSearch: stepMedian('exactSearch'),
+    },
     groups: pyGroups,
     lowerBoundCosts,
     lines,

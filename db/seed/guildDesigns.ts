@@ -2,11 +2,16 @@
 // the summary and route computed by the real planner. Idempotent: a design with the same owner and title is left alone.
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema.ts';
+import { loadHighsSolver } from '../../shared/route/exact/highsSolver.ts';
+import type { MipSolver } from '../../shared/route/exact/mipSolver.ts';
 import { planDesign } from '../../shared/route/planDesign.ts';
 import { buildDesignThumbnailSvg } from '../../shared/export/designSvg.ts';
 import { insertDesign, insertDesignVersion, upsertDesignRoute } from '../../src/server/designs/design.repository.ts';
 import { summaryOf } from '../../src/server/engine/engineSummaries.ts';
 import type { GuildDrawing } from './guildDrawings.ts';
+
+/** The exact search's solver, loaded once per seed run (as each engine worker loads its own). */
+let solver: Promise<MipSolver> | undefined;
 
 /** The design's id and whether this run created it. */
 export async function seedDesign(db: Kysely<Database>, ownerId: string, d: GuildDrawing): Promise<{ id: string; added: boolean }> {
@@ -18,7 +23,8 @@ export async function seedDesign(db: Kysely<Database>, ownerId: string, d: Guild
     .where('deleted_at', 'is', null)
     .executeTakeFirst();
   if (existing) return { id: existing.id, added: false };
-  const planned = planDesign(d.design);
+  solver ??= loadHighsSolver();
+  const planned = planDesign(d.design, { solver: await solver, clock: () => performance.now() });
   if (!planned.ok) throw new Error(`db/seed/guildDesigns: "${d.title}" cannot be planned: ${JSON.stringify(planned.error)}`);
   const plan = planned.value;
   const summary = summaryOf(plan);

@@ -1,6 +1,9 @@
 // Bundles the engine worker (src/server/engine/engine.worker.ts and the shared/ engine it imports) into one
 // ES module, dist/engine/engine.worker.mjs. Astro bundles the server into dist/server, but a worker thread
 // needs a file of its own; the server's engine pool loads this one (see src/server/engine/enginePool.ts).
+// The exact search's solver (npm `highs`) loads its WebAssembly file from beside the module that imports it,
+// so the build copies highs.wasm next to the bundle: the built app reads it from disk, never from the network.
+import { copyFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
 import path from 'node:path';
 import { ROOT } from './system.mjs';
@@ -9,7 +12,8 @@ export const ENGINE_WORKER_OUT = path.join(ROOT, 'dist', 'engine', 'engine.worke
 
 export function bundleEngineWorker() {
   // Loaded here, not at the top: the scripts import this file before `npm ci` has installed esbuild.
-  const { buildSync } = createRequire(import.meta.url)('esbuild');
+  const require = createRequire(import.meta.url);
+  const { buildSync } = require('esbuild');
   buildSync({
     entryPoints: [path.join(ROOT, 'src', 'server', 'engine', 'engine.worker.ts')],
     outfile: ENGINE_WORKER_OUT,
@@ -20,4 +24,5 @@ export function bundleEngineWorker() {
     sourcemap: true,
     logLevel: 'warning',
   });
+  copyFileSync(require.resolve('highs/runtime'), path.join(path.dirname(ENGINE_WORKER_OUT), 'highs.wasm'));
 }

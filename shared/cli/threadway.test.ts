@@ -45,6 +45,20 @@ describe('threadway CLI', () => {
     for (let i = 1; i < out.route.length; i++) expect(out.route[i].points[0]).toEqual(out.route[i - 1].points.at(-1));
   });
 
+  it('plan prints the proof and the stops-vs-travel table; --extra-stops plans with more passes', async () => {
+    // Free ends: E10's lines joined by one 4 in edge run; with one more stop no travel is needed (two passes), each
+    // pass starting and tying off at the block edge, under the binding (derived; exhaustive check in E10).
+    const free = { ...e10, start: undefined, end: undefined };
+    const r = await run('plan', write('free.json', free), '--extra-stops', '1', '--time-budget', '3000');
+    expect(r.status).toBe(0);
+    const out = JSON.parse(r.stdout);
+    expect(out).toMatchObject({ passes: 2, stops: 1, optimal: true, gapPercent: 0, lowerBound: 0, travelLength: 0 });
+    expect(out.settings).toEqual({ timeBudgetMs: 3000, extraStops: 1, hiddenEndAllowance: 0 });
+    expect(out.stopsTable.map((row: { travelLength: number }) => row.travelLength)).toEqual([4, 0, 0, 0]);
+    expect(out.threadEnds).toHaveLength(4);
+    for (const end of out.threadEnds) expect(end).toMatchObject({ place: 'edge', reason: 'hidden' });
+  });
+
   it('check measures the design’s own route, in centimetres too', async () => {
     const cm = (p: number[]) => p.map((v) => v * 2.54);
     const design = {
@@ -78,6 +92,9 @@ describe('threadway CLI', () => {
       [['plan', path.join(dir, 'missing.json')], /cannot read/],
       [['check', write('noroute.json', e10)], /no `route`/],
       [['frobnicate', 'x'], /usage/],
+      [['plan', write('flags.json', e10), '--extra-stops', '7'], /extraStops: At most 3 extra stops/],
+      [['plan', write('flags2.json', e10), '--time-budget', 'soon'], /usage/],
+      [['plan', write('flags3.json', e10), '--hidden-end-allowance', '-1'], /hiddenEndAllowance: The allowance cannot be negative/],
     ] as const;
     const results = await Promise.all(cases.map(([args]) => run(...args)));
     results.forEach((r, i) => {

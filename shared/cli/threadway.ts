@@ -1,7 +1,9 @@
 /**
  * Threadway command line, for batch use and scripting:
  *   npm run --silent threadway -- check FILE          route check of the design's own `route`
- *   npm run --silent threadway -- plan FILE           the planner's route
+ *   npm run --silent threadway -- plan FILE [--time-budget MS] [--extra-stops N] [--hidden-end-allowance LEN]
+ *                                                   the planner's route, its proof (optimal, lower bound, gap) and
+ *                                                   the stops-vs-travel table
  *   npm run --silent threadway -- fill FILE FILLS     the design with motifs added to its patches
  * FILE is a design JSON (shared/design/design.schema.ts); FILLS is `{ "fills": [{ "patch": "all" | n, "motif": {…} }] }`
  * (shared/motifs/fillDesign.ts; patches numbered in reading order). check and plan print one JSON object of
@@ -12,9 +14,12 @@ import { readFileSync } from 'node:fs';
 import { designSchema, type Design } from '../design/design.schema.ts';
 import { fillDesign, fillsSchema, type Fills } from '../motifs/fillDesign.ts';
 import { checkRoute } from '../route/checkRoute.ts';
+import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { planDesign } from '../route/planDesign.ts';
+import { planSettingsSchema, type PlanSettings } from '../route/planSettings.ts';
 
-const USAGE = 'usage: threadway (check|plan) FILE | threadway fill FILE FILLS';
+const USAGE =
+  'usage: threadway check FILE | threadway plan FILE [--time-budget MS] [--extra-stops N] [--hidden-end-allowance LEN] | threadway fill FILE FILLS';
 
 function fail(message: string): never {
   process.stderr.write(`threadway: ${message}\n`);
@@ -53,8 +58,28 @@ function readFills(file: string): Fills {
   return parsed.data;
 }
 
-function plan(design: Design): object {
-  const planned = planDesign(design);
+const PLAN_FLAGS: Record<string, keyof PlanSettings> = {
+  '--time-budget': 'timeBudgetMs',
+  '--extra-stops': 'extraStops',
+  '--hidden-end-allowance': 'hiddenEndAllowance',
+};
+
+function readSettings(args: readonly string[]): PlanSettings {
+  const raw: Record<string, number> = {};
+  for (let i = 0; i < args.length; i += 2) {
+    const key = PLAN_FLAGS[args[i]!];
+    const value = args[i + 1];
+    if (!key || value === undefined || value.trim() === '' || !Number.isFinite(Number(value))) fail(USAGE);
+    raw[key] = Number(value);
+  }
+  const parsed = planSettingsSchema.safeParse(raw);
+  if (!parsed.success) fail(parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('\n'));
+  return parsed.data;
+}
+
+async function plan(design: Design, settings: PlanSettings): Promise<object> {
+  const solver = await loadHighsSolver();
+  const planned = planDesign(design, { solver, settings, stopsTable: true, clock: () => performance.now() });
   if (!planned.ok) fail(planned.error.message);
   const p = planned.value;
   return {
@@ -71,6 +96,12 @@ function plan(design: Design): object {
     edgeLength: p.edgeLength,
     optimal: p.optimal,
     travelLowerBound: p.travelLowerBound,
+    lowerBound: p.travelLowerBound,
+    gapPercent: p.gapPercent,
+    settings: p.settings,
+    solver: solver.name,
+    stopsTable: p.stopsTable,
+    threadEnds: p.threadEnds.map(({ pass, end, point, place, reason }) => ({ pass, end, point, place, reason })),
     threadBudget: p.threadBudget,
     route: p.route.map((s) => ({ pass: s.pass, kind: s.kind, points: s.points })),
   };
@@ -91,8 +122,9 @@ function fill(design: Design, fillsFile: string): Design {
 }
 
 const [command, file, ...rest] = process.argv.slice(2);
-const arity = command === 'fill' ? 1 : 0;
-if ((command !== 'check' && command !== 'plan' && command !== 'fill') || file === undefined || rest.length !== arity) fail(USAGE);
+if ((command !== 'check' && command !== 'plan' && command !== 'fill') || file === undefined) fail(USAGE);
+if ((command === 'check' && rest.length > 0) || (command === 'fill' && rest.length !== 1)) fail(USAGE);
+const settings = command === 'plan' ? readSettings(rest) : null;
 const design = readDesign(file);
-const output = command === 'fill' ? fill(design, rest[0]!) : command === 'plan' ? plan(design) : check(design);
+const output = command === 'fill' ? fill(design, rest[0]!) : settings ? await plan(design, settings) : check(design);
 process.stdout.write(`${JSON.stringify(output)}\n`);

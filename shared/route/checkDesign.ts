@@ -4,7 +4,7 @@ import type { DesignProblem } from '../graph/designProblem.ts';
 import { findOddPoints } from '../graph/oddPoints.ts';
 import { findPieces } from '../graph/pieces.ts';
 import { ok, type Result } from '../result.ts';
-import { planDesign, type DesignPlan } from './planDesign.ts';
+import { planDesign, type DesignPlan, type DesignPlanOptions } from './planDesign.ts';
 
 /** Route check of a design (before any route is drawn). Lengths in the design's units. */
 export interface DesignCheck {
@@ -24,8 +24,9 @@ export interface DesignCheck {
   readonly plan: DesignPlan;
 }
 
-export function checkDesign(design: Design): Result<DesignCheck, DesignProblem> {
-  const planned = planDesign(design);
+/** Route check of a design; `options` go to the planner (the exact search's solver, settings). */
+export function checkDesign(design: Design, options: DesignPlanOptions = {}): Result<DesignCheck, DesignProblem> {
+  const planned = planDesign(design, options);
   if (!planned.ok) return planned;
   const plan = planned.value;
   const { graph } = plan;

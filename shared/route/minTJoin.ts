@@ -11,6 +11,23 @@ export interface TJoin {
   readonly openEnds: readonly number[];
   /** Σ integer travel cost of the paths (TravelGraph units). */
   readonly cost: number;
+  /** Σ integer end cost (see TJoinEnds.costOf) of the open ends. */
+  readonly endCost: number;
+}
+
+/**
+ * Free thread ends offered to the pairing: `count` dummy terminals (the route's free ends plus two per extra stop
+ * allowed). A dummy joins a terminal at `costOf(vertex)` (integer TravelGraph units; −1: no thread end may be
+ * there) and another dummy at 0 (an allowed end left unused).
+ */
+export interface TJoinEnds {
+  readonly count: number;
+  readonly costOf: (vertex: number) => number;
+}
+
+/** Free ends without costs, as the plain route inspection uses them. */
+export function plainEnds(count: number, notFree: readonly number[] = []): TJoinEnds {
+  return { count, costOf: (v) => (notFree.includes(v) ? -1 : 0) };
 }
 
 /** Work counters and step times (ms) for the benchmark; times are kept only when a clock is passed in. */
@@ -36,10 +53,10 @@ const FIRST_NEIGHBOURS = 12;
 
 /**
  * Exact minimum T-join over travel lines (Edmonds & Johnson, Math. Programming 5 (1973) 88–124): a minimum-cost
- * perfect matching of the terminals under shortest-path distances. `freeEnds` (0, 1 or 2) adds that many dummy
- * terminals joined at cost 0 to every real terminal and not to each other (engine-references.md §1.3): whichever
- * terminals they take become the route's free ends. Terminals in `notFree` may not be free ends (a fixed start off
- * the quilting lines: ending there again would mean travelling out and back, never better than stopping on the lines).
+ * perfect matching of the terminals under shortest-path distances. `ends` adds dummy terminals (free thread ends)
+ * joined to every real terminal at its end cost and to each other at 0 (engine-references.md §1.3): whichever
+ * terminals they take become free ends of the route's passes. A terminal with end cost −1 may not be a free end (a
+ * fixed start off the quilting lines: ending there again means travelling out and back, never better).
  *
  * Sparse and certified: each terminal first searches only until its nearest FIRST_NEIGHBOURS terminals are settled,
  * which gives candidate pairs and a radius r (every other terminal is at least r away). The matching on the
@@ -50,14 +67,13 @@ const FIRST_NEIGHBOURS = 12;
 export function findMinTJoin(
   search: PathSearch,
   terminals: readonly number[],
-  freeEnds: 0 | 1 | 2,
+  ends: TJoinEnds,
   stats?: PlannerStats,
-  notFree: readonly number[] = [],
 ): TJoin {
   const k = terminals.length;
-  const dummies = k === 0 ? 0 : freeEnds;
-  if ((k + dummies) % 2 === 1) throw new Error(`route/minTJoin: ${k} terminals and ${freeEnds} free ends cannot be paired`);
-  if (k === 0) return { pairs: [], paths: [], openEnds: [], cost: 0 };
+  const dummies = k === 0 ? 0 : ends.count;
+  if ((k + dummies) % 2 === 1) throw new Error(`route/minTJoin: ${k} terminals and ${ends.count} free ends cannot be paired`);
+  if (k === 0) return { pairs: [], paths: [], openEnds: [], cost: 0, endCost: 0 };
   // Terminal index per vertex (−1: not a terminal).
   const indexOf = new Int32Array(search.vertexCount).fill(-1);
   terminals.forEach((t, i) => {
@@ -65,18 +81,14 @@ export function findMinTJoin(
     indexOf[t] = i;
   });
 
-  const barred = new Uint8Array(k);
-  for (const v of notFree) {
-    const i = indexOf[v]!;
-    if (i >= 0) barred[i] = 1;
-  }
+  const endCost = Float64Array.from(terminals, (t) => ends.costOf(t));
   const reach = new Int32Array(k).fill(Math.min(k - 1, FIRST_NEIGHBOURS));
   const radius = new Float64Array(k);
   const candidates = new Map<number, number>();
   const stale = new Uint8Array(k).fill(1);
   for (;;) {
     timed(stats, 'searchMs', () => searchStale(search, terminals, indexOf, reach, stale, radius, candidates, stats));
-    const matching = timed(stats, 'matchMs', () => solve(k, dummies, candidates, barred));
+    const matching = timed(stats, 'matchMs', () => solve(k, dummies, candidates, endCost));
     if (stats) stats.matchings++;
     if (matching === null) {
       // The candidate graph has no perfect matching: widen every search.
@@ -85,7 +97,7 @@ export function findMinTJoin(
       continue;
     }
     const failing = timed(stats, 'matchMs', () => findUnpricedTerminals(k, candidates, radius, matching));
-    if (failing.length === 0) return timed(stats, 'searchMs', () => expand(search, terminals, k, matching, candidates));
+    if (failing.length === 0) return timed(stats, 'searchMs', () => expand(search, terminals, k, matching, candidates, endCost));
     for (const i of failing) widen(i, reach, stale, k);
   }
 }
@@ -126,8 +138,8 @@ function widen(i: number, reach: Int32Array, stale: Uint8Array, k: number): void
   stale[i] = 1;
 }
 
-function solve(k: number, dummies: number, candidates: Map<number, number>, barred: Uint8Array): PerfectMatching | null {
-  const size = candidates.size + dummies * k;
+function solve(k: number, dummies: number, candidates: Map<number, number>, endCost: Float64Array): PerfectMatching | null {
+  const size = candidates.size + dummies * k + (dummies * (dummies - 1)) / 2;
   const eu = new Int32Array(size);
   const ev = new Int32Array(size);
   const cost = new Float64Array(size);
@@ -139,9 +151,14 @@ function solve(k: number, dummies: number, candidates: Map<number, number>, barr
   }
   for (let dmy = 0; dmy < dummies; dmy++) {
     for (let i = 0; i < k; i++) {
-      if (barred[i]) continue;
+      if (endCost[i]! < 0) continue;
       eu[e] = i;
       ev[e] = k + dmy;
+      cost[e++] = endCost[i]!;
+    }
+    for (let other = dmy + 1; other < dummies; other++) {
+      eu[e] = k + dmy;
+      ev[e] = k + other;
       cost[e++] = 0;
     }
   }
@@ -168,15 +185,17 @@ function findUnpricedTerminals(k: number, candidates: Map<number, number>, radiu
   return out;
 }
 
-function expand(search: PathSearch, terminals: readonly number[], k: number, m: PerfectMatching, candidates: Map<number, number>): TJoin {
+function expand(search: PathSearch, terminals: readonly number[], k: number, m: PerfectMatching, candidates: Map<number, number>, endCost: Float64Array): TJoin {
   const pairs: (readonly [number, number])[] = [];
   const paths: number[][] = [];
   const openEnds: number[] = [];
   let cost = 0;
+  let openCost = 0;
   for (let i = 0; i < k; i++) {
     const j = m.mate[i]!;
     if (j >= k) {
       openEnds.push(terminals[i]!);
+      openCost += endCost[i]!;
       continue;
     }
     if (j < i) continue;
@@ -186,5 +205,5 @@ function expand(search: PathSearch, terminals: readonly number[], k: number, m: 
     pairs.push([terminals[i]!, target]);
     cost += candidates.get(i * k + j)!;
   }
-  return { pairs, paths, openEnds, cost };
+  return { pairs, paths, openEnds, cost, endCost: openCost };
 }

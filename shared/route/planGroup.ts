@@ -1,127 +1,146 @@
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
-import { findEulerWalk, type EulerWalk } from './eulerWalk.ts';
+import { buildPasses } from './buildPasses.ts';
+import { findEndOffers, type EndOffer } from './endOffers.ts';
+import type { EulerWalk } from './eulerWalk.ts';
 import { joinComponents } from './joinPieces.ts';
-import { findMinTJoin, timed, type PlannerStats } from './minTJoin.ts';
+import { findMinTJoin, timed, type PlannerStats, type TJoin } from './minTJoin.ts';
 import type { RouteGroup } from './routeGroups.ts';
 import type { PathSearch } from './shortestPaths.ts';
+import type { EndCosts, EndPlace } from './threadEnds.ts';
 import { UnionFind } from './unionFind.ts';
 
-/** How one pass was planned. */
+/** How the planner may end passes inside one group. */
+export interface GroupEnds {
+  /** Stops allowed beyond the group's one pass (each adds two free thread ends). */
+  readonly extraStops: number;
+  readonly places: readonly EndPlace[];
+  readonly costs: EndCosts;
+}
+
+/** How one group was planned. Costs are integers in TravelGraph units. */
 export interface GroupPlan {
-  readonly walk: EulerWalk;
-  /** Graph edge ids of the travel copies (each copy once per traversal). */
+  /** The group's passes in sewing order. */
+  readonly passes: readonly EulerWalk[];
+  /** Planar edge ids of the travel copies (each copy once per traversal). */
   readonly travelCopies: readonly number[];
-  /** Σ integer travel cost of the chosen route and of the lower bound (min T-join). */
   readonly travelCost: number;
-  readonly lowerBoundCost: number;
-  readonly lowerBoundEdges: readonly number[];
-  /** `exact`: one piece, or the min T-join already connects the pieces; otherwise the join that won. */
-  readonly method: 'exact' | 'tree-then-pairing' | 'pairing-then-double-tree';
+  /** Σ end cost of the free thread ends (see threadEnds.ts). */
+  readonly endCost: number;
+  /** No route over the group with this many stops has travelCost + endCost below this. */
+  readonly lowerBound: number;
+  /**
+   * - `exact`: one piece, or the min T-join already joins the pieces (proven);
+   * - `tree-then-pairing`, `pairing-then-double-tree`: the heuristic joins (not proven unless they meet the bound);
+   * - `branch-and-cut`: the exact planner (exact/planGroupExact.ts).
+   */
+  readonly method: 'exact' | 'tree-then-pairing' | 'pairing-then-double-tree' | 'branch-and-cut';
 }
 
 /**
- * Plans one pass over a travel group: fewest passes (one), then least travel.
+ * Plans one travel group: one pass plus at most `ends.extraStops` stops, least travel plus end costs.
  * Terminals are the group's odd points with the fixed ends toggled in (T = odd Δ {s} Δ {t}); missing ends become
- * free ends (engine-references.md §1.3). When the quilting lines form one piece this is route inspection and exact
- * (Edmonds & Johnson 1973; Orloff 1974 for optional travel lines). With several pieces the min T-join is a lower
- * bound (any route's travel contains a T-join); if its paths already connect the pieces (and any fixed end lying
- * off the quilting lines) it is optimal. Otherwise
- * two joins are tried and the cheaper kept:
+ * free ends, and each extra stop adds two more (engine-references.md §1.3). When the quilting lines form one piece
+ * this is route inspection and exact (Edmonds & Johnson 1973; Orloff 1974 for optional travel lines). With several
+ * pieces the min T-join is a lower bound (any route's travel contains a T-join); if its paths already connect the
+ * pieces (passes may also meet through free ends) it is optimal. Otherwise two joins are tried and the cheaper kept:
  *  (a) Frederickson (J. ACM 26 (1979) 538–554): spanning tree over the pieces, then pair the new odd points;
  *  (b) the min T-join, then a spanning tree over what is still apart, each tree path travelled twice.
+ * This heuristic is the exact planner's first upper bound and its fallback.
  */
-export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGroup, start: number, end: number, stats?: PlannerStats): GroupPlan {
+export function planGroup(graph: PlanarGraph, search: PathSearch, group: RouteGroup, start: number, end: number, ends: GroupEnds, stats?: PlannerStats): GroupPlan {
   const required = group.quiltingEdges;
-  const freeEnds = ((start < 0 ? 1 : 0) + (end < 0 ? 1 : 0)) as 0 | 1 | 2;
+  const freeEnds = (start < 0 ? 1 : 0) + (end < 0 ? 1 : 0);
+  const onLines = new Uint8Array(graph.vertices.length);
+  for (const e of required) onLines[graph.edges[e]!.u] = onLines[graph.edges[e]!.v] = 1;
+  // A fixed end off the quilting lines (a block corner) is never a free end: that would be a pass of no stitches.
+  const barred = (v: number): boolean => (v === start || v === end) && !onLines[v];
+  const endCount = freeEnds + 2 * ends.extraStops;
+  const pairing = (extra: readonly number[]): { join: TJoin; offers: Map<number, EndOffer | null> } => {
+    const terminals = findTerminals(graph, [required, extra], start, end);
+    const offers = endCount > 0 ? findEndOffers(search, terminals, ends.places, onLines, ends.costs, barred) : new Map<number, EndOffer | null>();
+    const costOf = (v: number): number => {
+      const o = offers.get(v);
+      return o ? o.travel + o.end : -1;
+    };
+    return { join: findMinTJoin(search, terminals, { count: endCount, costOf }, stats), offers };
+  };
+
+  const first = pairing([]);
+  const lowerBound = first.join.cost + first.join.endCost;
+  let best = settle(first.join, first.offers, []);
+  let method: GroupPlan['method'] = 'exact';
+  const mustReach = [...group.vertices];
+  for (const v of [start, end]) if (v >= 0 && !onLines[v] && !mustReach.includes(v)) mustReach.push(v);
+  const joined = componentsOf(graph, [required, best.copies], best.freeEnds);
+  if (countRoots(joined, mustReach) > 1) {
+    const pieces = componentsOf(graph, [required], []);
+    const tree = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => pieces.find(v)));
+    const treeEdges = tree.paths.flat();
+    const rejoin = pairing(treeEdges);
+    const a = settle(rejoin.join, rejoin.offers, treeEdges, tree.cost);
+    const treeB = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => joined.find(v)));
+    const treeEdgesB = treeB.paths.flat();
+    const b = { ...best, copies: [...best.copies, ...treeEdgesB, ...treeEdgesB], travel: best.travel + 2 * treeB.cost };
+    const aWins = a.travel + a.endCost <= b.travel + b.endCost;
+    best = aWins ? a : b;
+    method = aWins ? 'tree-then-pairing' : 'pairing-then-double-tree';
+  }
+  const passes = timed(stats, 'walkMs', () => buildPasses(graph, [...required, ...best.copies], best.freeEnds, start, end));
+  return { passes, travelCopies: best.copies, travelCost: best.travel, endCost: best.endCost, lowerBound, method };
+}
+
+interface Settled {
+  readonly copies: number[];
+  readonly freeEnds: number[];
+  readonly travel: number;
+  readonly endCost: number;
+}
+
+/** A pairing's travel copies and free ends, with each open terminal moved to where its offer puts the thread end. */
+function settle(join: TJoin, offers: Map<number, EndOffer | null>, extra: readonly number[], extraCost = 0): Settled {
+  const copies = [...extra, ...join.paths.flat()];
+  const freeEnds: number[] = [];
+  let travel = extraCost + join.cost;
+  let endCost = 0;
+  for (const t of join.openEnds) {
+    const o = offers.get(t)!;
+    freeEnds.push(o.vertex);
+    copies.push(...o.path);
+    travel += o.travel;
+    endCost += o.end;
+  }
+  return { copies, freeEnds, travel, endCost };
+}
+
+/** T = vertices of odd degree over the edge lists, toggled by the fixed ends; sorted. */
+function findTerminals(graph: PlanarGraph, lists: readonly (readonly number[])[], start: number, end: number): number[] {
   const parity = new Uint8Array(graph.vertices.length);
   const flipped: number[] = [];
   const flip = (v: number): void => {
     if (parity[v] === 0) flipped.push(v);
     parity[v]! ^= 1;
   };
-  const terminalsOf = (extra: readonly number[]): number[] => {
-    for (const list of [required, extra]) {
-      for (const e of list) {
-        flip(graph.edges[e]!.u);
-        flip(graph.edges[e]!.v);
-      }
-    }
-    if (start >= 0) flip(start);
-    if (end >= 0) flip(end);
-    const out: number[] = [];
-    for (const v of flipped) {
-      if (parity[v] === 1) out.push(v);
-      parity[v] = 0;
-    }
-    flipped.length = 0;
-    return out.sort((a, b) => a - b);
-  };
-
-  const onLines = new Uint8Array(graph.vertices.length);
-  for (const e of required) onLines[graph.edges[e]!.u] = onLines[graph.edges[e]!.v] = 1;
-  // With one end fixed off the quilting lines and the other free, the free end must not be that same point.
-  const notFree = freeEnds === 1 ? [start, end].filter((v) => v >= 0 && !onLines[v]) : [];
-  const join = findMinTJoin(search, terminalsOf([]), freeEnds, stats, notFree);
-  const joinEdges = join.paths.flat();
-  const lowerBound = { lowerBoundCost: join.cost, lowerBoundEdges: joinEdges };
-  let travelCopies = joinEdges;
-  let travelCost = join.cost;
-  let method: GroupPlan['method'] = 'exact';
-  let openEnds = join.openEnds;
-
-  // The route must reach a fixed start or end even when it lies off the quilting lines (a block corner): such an
-  // end counts as one more piece to join.
-  const mustReach = [...group.vertices];
-  for (const v of [start, end]) if (v >= 0 && !onLines[v] && !mustReach.includes(v)) mustReach.push(v);
-  const joined = componentsOf(graph, required, joinEdges);
-  if (countRoots(joined, mustReach) > 1) {
-    const pieces = componentsOf(graph, required);
-    const tree = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => pieces.find(v)));
-    const treeEdges = tree.paths.flat();
-    const rejoin = findMinTJoin(search, terminalsOf(treeEdges), freeEnds, stats, notFree);
-    const costA = tree.cost + rejoin.cost;
-    const treeB = timed(stats, 'searchMs', () => joinComponents(search, mustReach, (v) => joined.find(v)));
-    const costB = join.cost + 2 * treeB.cost;
-    if (costA <= costB) {
-      travelCopies = [...treeEdges, ...rejoin.paths.flat()];
-      travelCost = costA;
-      method = 'tree-then-pairing';
-      openEnds = rejoin.openEnds;
-    } else {
-      const treeEdgesB = treeB.paths.flat();
-      travelCopies = [...joinEdges, ...treeEdgesB, ...treeEdgesB];
-      travelCost = costB;
-      method = 'pairing-then-double-tree';
+  for (const list of lists) {
+    for (const e of list) {
+      flip(graph.edges[e]!.u);
+      flip(graph.edges[e]!.v);
     }
   }
-
-  const walkStart = start >= 0 ? start : pickStart(openEnds, end, graph, required);
-  const walk = timed(stats, 'walkMs', () => {
-    const copies = new Int32Array(required.length + travelCopies.length);
-    copies.set(required);
-    copies.set(travelCopies, required.length);
-    return findEulerWalk(graph, copies, walkStart);
-  });
-  const steps = walk.edges.length;
-  if (end >= 0 && steps > 0) {
-    const last = graph.edges[walk.edges[steps - 1]!]!;
-    const at = walk.forward[steps - 1] === 1 ? last.v : last.u;
-    if (at !== end) throw new Error(`route/planGroup: walk ends at ${at}, not at the fixed end ${end}`);
+  if (start >= 0) flip(start);
+  if (end >= 0) flip(end);
+  const out: number[] = [];
+  for (const v of flipped) {
+    if (parity[v] === 1) out.push(v);
+    parity[v] = 0; // a vertex flipped back and forth is listed more than once: report it once
   }
-  return { walk, travelCopies, travelCost, method, ...lowerBound };
+  return out.sort((a, b) => a - b);
 }
 
-/** With a free start: begin at a free end the pairing left open (not the fixed end), else anywhere on the lines. */
-function pickStart(openEnds: readonly number[], end: number, graph: PlanarGraph, required: readonly number[]): number {
-  const other = openEnds.find((v) => v !== end);
-  if (other !== undefined) return other;
-  if (end >= 0) return end;
-  return graph.edges[required[0]!]!.u;
-}
-
-function componentsOf(graph: PlanarGraph, ...lists: (readonly number[])[]): UnionFind {
+/** Components of the given edges; all free ends count as joined (passes meet through their thread ends). */
+function componentsOf(graph: PlanarGraph, lists: readonly (readonly number[])[], freeEnds: readonly number[]): UnionFind {
   const uf = new UnionFind(graph.vertices.length);
   for (const edges of lists) for (const e of edges) uf.union(graph.edges[e]!.u, graph.edges[e]!.v);
+  for (let i = 1; i < freeEnds.length; i++) uf.union(freeEnds[0]!, freeEnds[i]!);
   return uf;
 }
 

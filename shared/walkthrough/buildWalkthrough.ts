@@ -8,7 +8,8 @@ import { buildBlockPlaces, describePlace, findPatchVisits, type BlockPlaces } fr
 import { findPatchFaces } from './patchFaces.ts';
 import { namePatches } from './patchNames.ts';
 import { formatRulerLength } from './rulerLength.ts';
-import { passEndHints, RESTART_AT_EDGE_HINT, stitchHints } from './stepHints.ts';
+import type { ThreadEnd } from '../route/threadEnds.ts';
+import { passEndHints, RESTART_AT_EDGE_HINT, stitchHints, threadEndHint } from './stepHints.ts';
 import { joinPoints, patchWords, stitchInstruction, travelText, type TravelPart } from './stepText.ts';
 import type { RouteStrokeInput, Step, StepHint, Walkthrough } from './walkthrough.types.ts';
 
@@ -18,9 +19,14 @@ import type { RouteStrokeInput, Step, StepHint, Walkthrough } from './walkthroug
  * `start` step and closes with a `tie-off` step. Texts name the patch (faces of the seams and outline, see
  * patchFaces/patchNames), the direction from the quilter's seat (route/strokeDirection), lengths as read off a
  * ruler (rulerLength) and the place where the needle ends up (locate). An empty route gives no steps.
+ * `threadEnds` (the planner's, when the route is planned) add why each start and tie-off is where it is.
  * Throws (a caller bug) on a stroke with fewer than 2 points or a non-finite coordinate.
  */
-export function buildWalkthrough(design: Design, route: readonly RouteStrokeInput[]): Walkthrough {
+export function buildWalkthrough(
+  design: Design,
+  route: readonly RouteStrokeInput[],
+  threadEnds: readonly Pick<ThreadEnd, 'pass' | 'end' | 'place' | 'reason'>[] = [],
+): Walkthrough {
   route.forEach((stroke, i) => {
     if (stroke.points.length < 2 || stroke.points.some(([x, y]) => !Number.isFinite(x) || !Number.isFinite(y))) {
       throw new Error(`walkthrough/buildWalkthrough: stroke ${i} needs at least 2 finite points`);
@@ -52,6 +58,12 @@ export function buildWalkthrough(design: Design, route: readonly RouteStrokeInpu
     const endsMidPass = drafts[index + 1]?.kind !== 'tie-off';
     // A turn hint is given once for a run of straight lines that need the same turn, not on every line.
     const hints: StepHint[] = body.hints.filter((h) => h.kind !== 'turn-block' || h.text !== lastTurnHint);
+    if (draft.kind === 'start' || draft.kind === 'tie-off') {
+      const end = draft.kind === 'start' ? 'start' : 'tie-off';
+      const note = threadEnds.find((t) => t.pass === pass && t.end === end);
+      const why = note ? threadEndHint(note) : null;
+      if (why) hints.push(why);
+    }
     if (draft.kind === 'stitch') lastTurnHint = body.hints.find((h) => h.kind === 'turn-block')?.text ?? '';
     if (draft.kind !== 'start' && draft.kind !== 'tie-off' && endsMidPass && !restartHintGiven && atEdge(body.to)) {
       hints.push(RESTART_AT_EDGE_HINT);

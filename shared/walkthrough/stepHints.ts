@@ -1,4 +1,5 @@
 import { assertNever } from '../assertNever.ts';
+import type { ThreadEnd } from '../route/threadEnds.ts';
 import type { StrokeDirection } from '../route/strokeDirection.ts';
 import type { LineShape } from './lineShape.ts';
 import type { StepHint } from './walkthrough.types.ts';
@@ -48,3 +49,20 @@ export const RESTART_AT_EDGE_HINT: StepHint = {
   kind: 'stop-at-edge',
   text: 'If you need to stop (bobbin running low, a break), stop here at the edge: the restart will hide under the binding.',
 };
+
+/** Why the planner put a pass's start or tie-off where it is (route/threadEnds.ts); null when there is nothing to add. */
+export function threadEndHint(note: Pick<ThreadEnd, 'end' | 'place' | 'reason'>): StepHint | null {
+  const what = note.end === 'start' ? 'start' : 'stop';
+  switch (note.reason) {
+    case 'fixed':
+      return { kind: 'why-here', text: `This ${what} is where you set the route to ${note.end === 'start' ? 'begin' : 'end'}.` };
+    case 'hidden':
+      return note.place === 'seam'
+        ? { kind: 'why-here', text: `The planner put this ${what} on a seam: the small knot sinks into the ditch there.` }
+        : null; // at the edge, passEndHints already says the binding hides it
+    case 'no-hidden-place':
+      return { kind: 'why-here', text: `No route with as little travel has this ${what} on a seam or at the edge, so it is inside the patch.` };
+    default:
+      return assertNever(note.reason);
+  }
+}

@@ -21,7 +21,7 @@ export interface RouteStrokeInput {
 export type StepKind = 'start' | 'stitch' | 'travel' | 'tie-off';
 
 /** Why a hint is given; each hint's text says where the practice comes from in code, not on screen. */
-export type StepHintKind = 'turn-block' | 'keep-block-still' | 'stop-at-edge' | 'hide-tails';
+export type StepHintKind = 'turn-block' | 'keep-block-still' | 'stop-at-edge' | 'hide-tails' | 'why-here';
 
 export interface StepHint {
   readonly kind: StepHintKind;

@@ -61,6 +61,28 @@ describe('check and plan against worked example E9 (shared/notes/engine-referenc
     expect(check.body.error.fields['design.lines']).toMatch(/no quilting lines/);
   });
 
+  it('plans with settings: the proof, the stops-vs-travel table and where each thread end is', async () => {
+    // Two lines across the block, joined by 6 in of ditch or edge travel; one extra stop makes them two passes with
+    // no travel (worked by hand; the engine's own tests check such answers against CBC).
+    const d = await create('Two lines', block());
+    const plan = await ann.client.post(`/api/designs/${d.id}/plan`, { settings: { extraStops: 1, timeBudgetMs: 3000 } });
+    expect(plan.status, plan.text).toBe(200);
+    const p = plan.body.plan;
+    expect(p).toMatchObject({ passes: 2, stops: 1, optimal: true, gapPercent: 0, lowerBound: 0, travelLength: 0 });
+    expect(p.settings).toEqual({ extraStops: 1, timeBudgetMs: 3000, hiddenEndAllowance: 0 });
+    expect(p.stopsTable.map((r: { travelLength: number }) => Number(r.travelLength.toFixed(9)))).toEqual([6, 0, 0, 0]);
+    expect(p.threadEnds).toHaveLength(4);
+    for (const end of p.threadEnds) expect(end.place).toBe('edge');
+  });
+
+  it('refuses bad plan settings with 400, naming each field', async () => {
+    const d = await create('Bad settings', block());
+    const bad = await ann.client.post(`/api/designs/${d.id}/plan`, { settings: { extraStops: 9, timeBudgetMs: 50, colour: 'red' } });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['settings.extraStops']).toMatch(/At most 3 extra stops/);
+    expect(bad.body.error.fields['settings.timeBudgetMs']).toMatch(/at least 100 ms/);
+  });
+
   it('serves concurrent checks (the pool runs them in worker threads)', async () => {
     const d = await create('Concurrent', e9Grid(12));
     // One running and ENGINE_MAX_QUEUED_PER_ACCOUNT (4) waiting: all answered (a sixth could get 429).

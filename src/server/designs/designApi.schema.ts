@@ -2,6 +2,7 @@
 // server and the workbench refuse the same things (non-finite numbers, far-away points, 1-point lines, caps).
 import { z } from 'zod';
 import { DESIGN_LIMITS, designSchema } from '../../../shared/design/design.schema.ts';
+import { planSettingsSchema } from '../../../shared/route/planSettings.ts';
 import type { BodyLimit } from '../http.ts';
 import { pgInt } from '../inputRules.ts';
 import { isStorableText, UNSTORABLE_MESSAGE } from '../storableText.ts';
@@ -32,6 +33,9 @@ export const baseVersionSchema = z.object({ baseVersion: version }).strict();
 
 /** Optional unsaved draft: the workbench checks or plans what is on screen before it is saved. */
 export const draftSchema = z.object({ design: designSchema.optional() }).strict();
+
+/** Plan request: an optional draft and optional planner settings (time budget, extra stops, hidden-end allowance). */
+export const planRequestSchema = z.object({ design: designSchema.optional(), settings: planSettingsSchema.optional() }).strict();
 
 export const saveRouteSchema = z.discriminatedUnion('kind', [
   /** Keep the planner's route: the server plans the saved design again (same input, same route). */

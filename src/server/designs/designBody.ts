@@ -8,6 +8,7 @@ import { readBytesCapped } from '../readBody.ts';
 import { acceptParsedBody, BODY_SCHEMAS } from '../engine/designCodec.ts';
 import { runCodec } from '../engine/enginePool.ts';
 import type { AcceptBodyAnswer, BodyShape } from '../engine/engine.types.ts';
+import type { PlanSettings } from '../../../shared/route/planSettings.ts';
 import { DESIGN_BODY_LIMIT } from './designApi.schema.ts';
 import { engineFailureResponse } from './designHttp.ts';
 import { HEAVY_DESIGN_CHARS } from './designPayload.ts';
@@ -23,6 +24,7 @@ export interface BodyFields {
   create: { readonly title: string; readonly notes: string };
   update: { readonly baseVersion: number; readonly title?: string; readonly notes?: string };
   draft: Record<string, never>;
+  plan: { readonly settings?: PlanSettings };
   route: { readonly kind: 'planned' | 'own'; readonly designVersion: number };
 }
 

@@ -4,6 +4,7 @@ import type { Kysely } from 'kysely';
 import { z } from 'zod';
 import type { Database } from '../../../db/schema.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
+import type { PlanSettings } from '../../../shared/route/planSettings.ts';
 import { err, ok, type Result } from '../../../shared/result.ts';
 import type { CheckAnswer, DesignPayload, PlanAnswer } from '../engine/engine.types.ts';
 import { runEngine } from '../engine/enginePool.ts';
@@ -28,8 +29,13 @@ export async function checkDesignOnServer(design: DesignPayload, account: string
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
 }
 
-export async function planDesignOnServer(design: DesignPayload, account: string, signal?: AbortSignal): Promise<Result<PlanAnswer, EngineFailure>> {
-  const r = await runEngine({ op: 'plan', ...design }, { key: account, ...(signal ? { signal } : {}) });
+export async function planDesignOnServer(
+  design: DesignPayload,
+  account: string,
+  settings?: PlanSettings,
+  signal?: AbortSignal,
+): Promise<Result<PlanAnswer, EngineFailure>> {
+  const r = await runEngine({ op: 'plan', ...design, ...(settings ? { settings } : {}) }, { key: account, ...(signal ? { signal } : {}) });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
 }

@@ -5,7 +5,7 @@
 import type { z } from 'zod';
 import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
 import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
-import { createDesignSchema, draftSchema, saveRouteSchema, updateDesignSchema } from '../designs/designApi.schema.ts';
+import { createDesignSchema, draftSchema, planRequestSchema, saveRouteSchema, updateDesignSchema } from '../designs/designApi.schema.ts';
 import { assertNever } from '../../../shared/assertNever.ts';
 import type { AcceptBodyAnswer, AcceptStoredAnswer, BodyShape, PlainIssue } from './engine.types.ts';
 
@@ -13,6 +13,7 @@ export const BODY_SCHEMAS = {
   create: createDesignSchema,
   update: updateDesignSchema,
   draft: draftSchema,
+  plan: planRequestSchema,
   route: saveRouteSchema,
 } as const satisfies Record<BodyShape, z.ZodType>;
 
@@ -40,6 +41,7 @@ export function acceptParsedBody(shape: BodyShape, body: Record<string, unknown>
         routeText: null,
       };
     case 'draft':
+    case 'plan':
       return { ok: true, fields, designText: design ? JSON.stringify(design) : null, thumbnailSvg: null, routeText: null };
     case 'route':
       return { ok: true, fields, designText: null, thumbnailSvg: null, routeText: route ? JSON.stringify(route) : null };

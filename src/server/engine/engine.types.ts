@@ -6,6 +6,9 @@ import type { Point } from '../../../shared/geometry/point.ts';
 import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
 import type { GapCheck } from '../../../shared/gap/gapCheck.ts';
 import type { DesignCheck } from '../../../shared/route/checkDesign.ts';
+import type { PlanSettings } from '../../../shared/route/planSettings.ts';
+import type { StopsTableRow } from '../../../shared/route/stopsTable.ts';
+import type { ThreadEnd } from '../../../shared/route/threadEnds.ts';
 import type { RouteCheck } from '../../../shared/route/checkRoute.ts';
 import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
 import type { Stroke } from '../../../shared/route/routeStrokes.ts';
@@ -14,14 +17,15 @@ import type { Stroke } from '../../../shared/route/routeStrokes.ts';
  * itself (designSchema), so a heavy design is never parsed on the request thread. */
 export type DesignPayload = { readonly design: Design } | { readonly designText: string };
 
-/** Request bodies the design endpoints take (designApi.schema.ts): create, update, draft (check/plan), route. */
-export type BodyShape = 'create' | 'update' | 'draft' | 'route';
+/** Request bodies the design endpoints take (designApi.schema.ts): create, update, draft (check), plan, route. */
+export type BodyShape = 'create' | 'update' | 'draft' | 'plan' | 'route';
 
 /**
  * Engine tasks:
  * - `summary`: the figures stored with a saved design (for the designs table);
  * - `check`: route check of the design, of its own `route` if it has one, thread budget, gap check;
- * - `plan`: the planner's route with its figures;
+ * - `plan`: the planner's route with its figures, the proof of its travel and the stops-vs-travel table; `settings`
+ *   (time budget, extra stops, hidden-end allowance) were checked by planSettingsSchema; missing: the defaults;
  * - `ownRoute`: route check of the design's own `route` with drawing strokes (for saving it); the route comes
  *   inside the design, or as JSON text (`routeText`) checked against the design here;
  * Design codec tasks (the codec pool, never behind planning):
@@ -32,7 +36,7 @@ export type BodyShape = 'create' | 'update' | 'draft' | 'route';
 export type EngineTask =
   | ({ readonly op: 'summary' } & DesignPayload)
   | ({ readonly op: 'check' } & DesignPayload)
-  | ({ readonly op: 'plan' } & DesignPayload)
+  | ({ readonly op: 'plan'; readonly settings?: PlanSettings } & DesignPayload)
   | ({ readonly op: 'ownRoute'; readonly routeText?: string } & DesignPayload)
   | { readonly op: 'acceptBody'; readonly text: string; readonly shape: BodyShape }
   | { readonly op: 'acceptStored'; readonly text: string; readonly thumbnail: boolean }
@@ -122,6 +126,18 @@ export interface PlanAnswer extends PlanFigures {
   readonly units: Design['units'];
   readonly route: readonly Stroke[];
   readonly threadBudget: ThreadBudget;
+  /** The same bound as `travelLowerBound` (design units), under the name the planner's answer uses. */
+  readonly lowerBound: number;
+  /** (travel − lower bound) / travel in percent: 0 when proven; how far from best the route may be otherwise. */
+  readonly gapPercent: number;
+  /** Least travel for 0–3 extra stops (each row proven or with its bound). */
+  readonly stopsTable: readonly StopsTableRow[];
+  /** Every pass's start and tie-off: where it is (edge, seam, open) and why it is there. */
+  readonly threadEnds: readonly ThreadEnd[];
+  /** The settings the plan was made with (defaults filled in). */
+  readonly settings: PlanSettings;
+  /** The exact search's figures: kept vertices of the reduced graph, time spent (ms); null when not needed. */
+  readonly exactSearch: { readonly keptVertices: number; readonly ms: number } | null;
 }
 
 export type EngineAnswer<T> = { readonly ok: true; readonly value: T } | { readonly ok: false; readonly problem: DesignProblem };

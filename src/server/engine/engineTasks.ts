@@ -3,7 +3,8 @@
 import { checkGap } from '../../../shared/gap/gapCheck.ts';
 import { checkDesign } from '../../../shared/route/checkDesign.ts';
 import { checkRoute } from '../../../shared/route/checkRoute.ts';
-import { planDesign } from '../../../shared/route/planDesign.ts';
+import type { MipSolver } from '../../../shared/route/exact/mipSolver.ts';
+import { planDesign, type DesignPlanOptions } from '../../../shared/route/planDesign.ts';
 import { assertNever } from '../../../shared/assertNever.ts';
 import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
 import { buildDesignSvg } from '../../../shared/export/designSvg.ts';
@@ -16,16 +17,23 @@ function designOf(payload: DesignPayload): Design {
   return 'designText' in payload ? parseDesignText(payload.designText) : payload.design;
 }
 
-export function runEngineTask<T extends EngineTask>(task: T): EngineAnswers[T['op']];
-export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']] {
+/** What a worker holds for every task: the loaded solver for the exact search and a clock for its time budget. */
+export interface EngineContext {
+  readonly solver: MipSolver | null;
+  readonly clock: () => number;
+}
+
+export function runEngineTask<T extends EngineTask>(task: T, context: EngineContext): EngineAnswers[T['op']];
+export function runEngineTask(task: EngineTask, context: EngineContext): EngineAnswers[EngineTask['op']] {
+  const exact: DesignPlanOptions = { solver: context.solver, clock: context.clock };
   switch (task.op) {
     case 'summary': {
-      const planned = planDesign(designOf(task));
+      const planned = planDesign(designOf(task), exact);
       return planned.ok ? { ok: true, value: summaryOf(planned.value) } : { ok: false, problem: planned.error };
     }
     case 'check': {
       const design = designOf(task);
-      const checked = checkDesign(design);
+      const checked = checkDesign(design, exact);
       if (!checked.ok) return { ok: false, problem: checked.error };
       const { plan, ...check } = checked.value;
       let ownRoute = null;
@@ -51,10 +59,24 @@ export function runEngineTask(task: EngineTask): EngineAnswers[EngineTask['op']]
       return strokes.ok ? { ok: true, value: { check: own.value, strokes: strokes.value } } : { ok: false, problem: strokes.error };
     }
     case 'plan': {
-      const planned = planDesign(designOf(task));
+      const planned = planDesign(designOf(task), { ...exact, stopsTable: true, ...(task.settings ? { settings: task.settings } : {}) });
       if (!planned.ok) return { ok: false, problem: planned.error };
       const plan = planned.value;
-      return { ok: true, value: { ...figuresOf(plan), units: plan.units, route: plan.route, threadBudget: plan.threadBudget } };
+      return {
+        ok: true,
+        value: {
+          ...figuresOf(plan),
+          units: plan.units,
+          route: plan.route,
+          threadBudget: plan.threadBudget,
+          lowerBound: plan.travelLowerBound,
+          gapPercent: plan.gapPercent,
+          stopsTable: plan.stopsTable ?? [],
+          threadEnds: plan.threadEnds,
+          settings: plan.settings,
+          exactSearch: plan.exactSearch ? { keptVertices: plan.exactSearch.keptVertices, ms: plan.exactSearch.ms } : null,
+        },
+      };
     }
     case 'acceptBody':
       return acceptBody(task.text, task.shape);

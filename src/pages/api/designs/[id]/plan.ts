@@ -1,5 +1,7 @@
-// POST /api/designs/:id/plan { design? } — the planner's route for the saved design or an unsaved draft.
-// 200 { designVersion, draft, plan: { passes, stops, …figures, optimal, travelLowerBound, units, route, threadBudget } }.
+// POST /api/designs/:id/plan { design?, settings? } — the planner's route for the saved design or an unsaved draft.
+// settings: { timeBudgetMs (100–6000, default 2000), extraStops (0–3), hiddenEndAllowance (design units, default 0) }.
+// 200 { designVersion, draft, plan: { passes, stops, …figures, optimal, travelLowerBound, lowerBound, gapPercent,
+// stopsTable, threadEnds, settings, units, route, threadBudget } }.
 // 429 rate_limited when this account already has its share of checks and plans waiting; 503 engine_busy.
 import type { APIRoute } from 'astro';
 import { json } from '../../../../server/http.ts';
@@ -11,11 +13,11 @@ export const POST = (async ({ locals, params, request }) => {
   const owned = await requireOwnedDesign(locals, params);
   if (!owned.ok) return owned.error;
   const account = owned.value.user.id;
-  const body = await readDesignBody(request, 'draft', account);
+  const body = await readDesignBody(request, 'plan', account);
   if (!body.ok) return body.error;
   const { row } = owned.value;
   const draft = body.value.design;
-  const planned = await planDesignOnServer(designPayloadOf(row, draft?.text ?? null), account, request.signal);
+  const planned = await planDesignOnServer(designPayloadOf(row, draft?.text ?? null), account, body.value.fields.settings, request.signal);
   if (!planned.ok) return planned.error.kind === 'problem' ? designProblemResponse(planned.error.problem) : engineFailureResponse(planned.error.failure);
   return json({ designVersion: row.version, draft: draft !== null, plan: planned.value });
 }) satisfies APIRoute;

@@ -1,0 +1,122 @@
+import type { PlanarGraph } from '../../graph/planarGraph.types.ts';
+import { buildPasses } from '../buildPasses.ts';
+import type { GroupEnds, GroupPlan } from '../planGroup.ts';
+import type { RouteGroup } from '../routeGroups.ts';
+import { endCostAt, solverEndCostAt } from '../threadEnds.ts';
+import type { TravelGraph } from '../travelGraph.ts';
+import { searchRoute, type SearchResult } from './branchAndCut.ts';
+import type { Budget } from './budget.ts';
+import { ConnectivityCuts } from './connectivityCuts.ts';
+import type { MipSolver } from './mipSolver.ts';
+import { reduceGraph } from './reduceGraph.ts';
+import { buildRppProgram, type RppProgram } from './rppProgram.ts';
+
+/** Figures of one exact search, for the benchmark and the answer. */
+export interface ExactStats {
+  readonly pieces: number;
+  readonly keptVertices: number;
+  readonly reducedEdges: number;
+  readonly cutRounds: number;
+  readonly cuts: number;
+  readonly integerSolves: number;
+  /** Linear relaxation bound with the cuts found (integer cost units). */
+  readonly lpBound: number;
+  /** The search's own best objective (cost units; Infinity when it found none) and whether it proved it least. */
+  readonly objective: number;
+  readonly proven: boolean;
+  /** Time spent (budget ms: wall time with a clock, else solver time). */
+  readonly ms: number;
+}
+
+export interface ExactGroupPlan {
+  readonly plan: GroupPlan;
+  readonly stats: ExactStats;
+}
+
+/**
+ * The exact planner for one travel group (rural postman with free or fixed ends and up to `ends.extraStops`
+ * extra stops): reduce the graph (Christofides et al. 1981), build the integer program (Ghiani & Laporte 2000),
+ * search within `limitMs` of the budget. `upper` is a route already known (the heuristic's): the answer is the
+ * better of the two, with the best lower bound known; `proven` (lowerBound ≥ cost) only when the search proved it.
+ */
+export function planGroupExact(
+  graph: PlanarGraph,
+  travel: TravelGraph,
+  group: RouteGroup,
+  start: number,
+  end: number,
+  ends: GroupEnds,
+  upper: GroupPlan,
+  solver: MipSolver,
+  budget: Budget,
+  limitMs: number,
+): ExactGroupPlan {
+  const t0 = budget.spentMs();
+  const fixedEnds = [start, end].filter((v) => v >= 0);
+  const reduced = reduceGraph(graph, travel, group.quiltingEdges, fixedEnds, ends.places);
+  const onLines = new Uint8Array(reduced.kept.length);
+  for (const r of reduced.required) onLines[r.a] = onLines[r.b] = 1;
+  const barred = (v: number, i: number): boolean => fixedEnds.includes(v) && !onLines[i];
+  const endCost = Float64Array.from(reduced.kept, (v, i) => (barred(v, i) ? -1 : endCostAt(ends.costs, ends.places, v)));
+  const solverEndCost = Float64Array.from(reduced.kept, (v, i) => (barred(v, i) ? -1 : solverEndCostAt(ends.costs, ends.places, v)));
+  const keptStart = start >= 0 ? reduced.keptIndex[start]! : -1;
+  const keptEnd = end >= 0 ? reduced.keptIndex[end]! : -1;
+  const rpp = buildRppProgram({ reduced, start: keptStart, end: keptEnd, extraStops: ends.extraStops, endCost, solverEndCost, quantum: travel.quantum });
+  const cuts = new ConnectivityCuts(reduced, rpp, [keptStart, keptEnd].filter((v) => v >= 0));
+  const upperCost = upper.travelCost + upper.endCost;
+  // A solver objective exceeds the cost-unit objective (times quantum) by at most 3·solverTie per thread end.
+  const freeEnds = (start < 0 ? 1 : 0) + (end < 0 ? 1 : 0) + 2 * ends.extraStops;
+  const slack = 3 * ends.costs.solverTie * freeEnds;
+  const found: SearchResult = searchRoute(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum);
+  const stats: ExactStats = {
+    pieces: reduced.pieceCount,
+    keptVertices: reduced.kept.length,
+    reducedEdges: reduced.travel.length + reduced.required.length,
+    cutRounds: found.cutRounds,
+    cuts: found.cuts,
+    integerSolves: found.integerSolves,
+    lpBound: found.lpBound,
+    objective: found.objective,
+    proven: found.proven,
+    ms: budget.spentMs() - t0,
+  };
+  const lowerBound = Math.max(upper.lowerBound, Math.min(found.bound, upperCost));
+  if (found.values === null || found.objective > upperCost || (found.objective === upperCost && !found.proven)) {
+    // The heuristic's route stands; the search may still have proven it optimal. The solver proves its optimum up to
+    // its absolute gap (1e-9 design units) and weighs thread ends by solverTie, so its optimum may sit that much above.
+    const tolerance = (slack + 1e-9) / travel.quantum + 1e-9 * upperCost;
+    if (found.proven && found.objective > upperCost + tolerance) {
+      throw new Error(`route/exact/planGroupExact: proven optimum ${found.objective} above a known route ${upperCost}`);
+    }
+    return { plan: { ...upper, lowerBound: found.proven ? upperCost : lowerBound }, stats };
+  }
+  const plan = expand(graph, group, rpp, reduced, found.values, start, end);
+  return { plan: { ...plan, lowerBound: found.proven ? plan.travelCost + plan.endCost : Math.max(upper.lowerBound, Math.min(found.bound, plan.travelCost + plan.endCost)) }, stats };
+}
+
+/** Turns a solution into travel copies, free ends and passes. */
+function expand(graph: PlanarGraph, group: RouteGroup, rpp: RppProgram, reduced: ReturnType<typeof reduceGraph>, values: Float64Array, start: number, end: number): GroupPlan {
+  const copies: number[] = [];
+  let travelCost = 0;
+  let endCost = 0;
+  for (let c = 0; c < rpp.travelCols; c++) {
+    const times = Math.round(values[c]!);
+    const t = reduced.travel[c]!;
+    for (let i = 0; i < times; i++) copies.push(...t.edges);
+    travelCost += times * t.cost;
+  }
+  reduced.required.forEach((r, i) => {
+    const c = rpp.requiredCol[i]!;
+    if (c < 0 || Math.round(values[c]!) === 0) return;
+    copies.push(...r.edges);
+    travelCost += r.cost;
+  });
+  const freeEnds: number[] = [];
+  rpp.endCol.forEach((c, v) => {
+    if (c < 0 || Math.round(values[c]!) === 0) return;
+    freeEnds.push(reduced.kept[v]!);
+    endCost += rpp.colCost[c]!;
+  });
+  const passes = buildPasses(graph, [...group.quiltingEdges, ...copies], freeEnds, start, end);
+  return { passes, travelCopies: copies, travelCost, endCost, lowerBound: 0, method: 'branch-and-cut' };
+}

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { up as repairCopiedSummaries } from '../../../db/migrations/2026_12_04_0900_repair_copied_design_summaries.ts';
 import { createAccount, type TestAccount } from '../../helpers/accounts.ts';
 import { closeTestDb, testDb } from '../../helpers/db.ts';
+import { waitForFigures } from '../../helpers/designFigures.ts';
 import { block } from '../designFixtures.ts';
 
 let teacher: TestAccount;
@@ -39,8 +40,10 @@ describe('copying a template whose route is the teacher’s own order', () => {
   it('gives a copy that opens, keeps the own order as an own route, and leaves the designs list working', async () => {
     const copy = await quilter.client.post(`/api/templates/${templateId}/copy`, {});
     expect(copy.status, copy.text).toBe(201);
-    const one = await quilter.client.get(`/api/designs/${copy.body.designId}`);
-    expect(one.status, one.text).toBe(200);
+    const opened = await quilter.client.get(`/api/designs/${copy.body.designId}`);
+    expect(opened.status, opened.text).toBe(200);
+    // Saves (copies too) never wait for the planner: the figures follow from the engine a moment later.
+    const one = { body: { design: await waitForFigures(quilter.client, copy.body.designId) } };
     // The designs table holds the planner's figures for the drawing, not the own order's: for these two lines the
     // least travel is 6 in (the 4 odd points pair up 6 in apart along the right or left edge; the same analytic
     // figure as in tests/api/designsEngine.test.ts), proven least.
@@ -61,6 +64,9 @@ describe('copying a template whose route is the teacher’s own order', () => {
   it('reads a summary that fails its schema as "no figures" instead of failing the whole list', async () => {
     const good = await quilter.client.post('/api/designs', { title: 'A good neighbour', design: block() });
     const bad = await quilter.client.post('/api/designs', { title: 'Broken figures', design: block() });
+    // Let the engine write both designs' figures first, so nothing overwrites the broken row afterwards.
+    await waitForFigures(quilter.client, good.body.design.id);
+    await waitForFigures(quilter.client, bad.body.design.id);
     await testDb().updateTable('design').set({ summary: JSON.stringify({ passes: 'many', optimal: null }) }).where('id', '=', bad.body.design.id).execute();
     const list = await quilter.client.get('/api/designs');
     expect(list.status, list.text).toBe(200);
@@ -84,13 +90,14 @@ describe('migration 2026_12_04_0900: rows written by the old copy', () => {
     };
     const broken = await owner.client.post('/api/designs', { title: 'Old copy', design: block() });
     const brokenId = broken.body.design.id as string;
+    await waitForFigures(owner.client, brokenId);
     await db.updateTable('design').set({ summary: JSON.stringify(ownFigures) }).where('id', '=', brokenId).execute();
     await db
       .insertInto('design_route')
       .values({ design_id: brokenId, kind: 'planned', strokes: JSON.stringify([{ pass: 1, kind: 'stitch', points: [[0, 3], [12, 3]], length: 12 }]), summary: JSON.stringify(ownFigures), design_version: 1 })
       .execute();
     const fine = await owner.client.post('/api/designs', { title: 'Saved normally', design: block() });
-    const fineSummary = fine.body.design.summary;
+    const fineSummary = (await waitForFigures(owner.client, fine.body.design.id)).summary;
     expect(fineSummary).toMatchObject({ optimal: true });
 
     await repairCopiedSummaries(db);

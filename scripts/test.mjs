@@ -82,7 +82,7 @@ try {
   };
   // Two Vitest runs, `unit` then `app`: the CPU-heavy unit files (property tests, outside solvers) never compete
   // with the browser tests for the two cores, and a failure in one run never hides the other's results.
-  const totals = { passed: 0, failed: 0, skipped: 0 };
+  const totals = { passed: 0, failed: 0, skipped: 0, failedFiles: 0 };
   exitCode = 0;
   for (const project of ['unit', 'app']) {
     const jsonReport = path.join(outputDir, `vitest-${project}.json`);
@@ -100,11 +100,13 @@ try {
       totals.passed += report.numPassedTests;
       totals.failed += report.numFailedTests;
       totals.skipped += report.numPendingTests + report.numTodoTests;
+      // A file that fails before its tests run (a beforeAll) counts no failed test: report it too.
+      totals.failedFiles += report.numFailedTestSuites;
     } else {
       exitCode = 1;
     }
   }
-  console.log(`\n${totals.passed} passed, ${totals.failed} failed, ${totals.skipped} skipped`);
+  console.log(`\n${totals.passed} passed, ${totals.failed} failed, ${totals.skipped} skipped; ${totals.failedFiles} test files failed`);
 } catch (error) {
   console.error(error);
   exitCode = 1;

@@ -5,6 +5,8 @@
 // fsync on: a confirmed commit must survive even the crash-like 'immediate' stop.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TestClient, type ApiResponse } from '../helpers/client.ts';
+import { connectDatabase } from '../../db/connect.ts';
+import { createAccount } from '../helpers/accounts.ts';
 import { startThrowawayApp, type ThrowawayApp } from '../helpers/throwawayApp.ts';
 
 type Pt = [number, number];
@@ -22,9 +24,13 @@ let app: ThrowawayApp;
 let quilter: TestClient;
 beforeAll(async () => {
   app = await startThrowawayApp();
-  quilter = new TestClient(app.url);
-  const signUp = await quilter.post('/api/accounts', { email: 'restart@guild.test', password: 'quilting-is-fun-42', displayName: 'Restart Quilter', units: 'in' });
-  expect(signUp.status, signUp.text).toBe(201);
+  // Sign-up is confirmed by e-mail; this instance sends none, so the account is written to its database.
+  const db = connectDatabase(app.databaseUrl, 1);
+  try {
+    quilter = (await createAccount({ email: 'restart@guild.test', displayName: 'Restart Quilter', target: { appUrl: app.url, db } })).client;
+  } finally {
+    await db.destroy();
+  }
 }, 180_000);
 afterAll(async () => {
   await app?.close();

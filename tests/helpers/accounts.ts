@@ -3,7 +3,8 @@
 // sign-in API; and the seeded demo guild (db/seed/demo-accounts.json).
 import { readFileSync } from 'node:fs';
 import { hash } from '@node-rs/argon2';
-import type { Role } from '../../db/schema.ts';
+import type { Kysely } from 'kysely';
+import type { Database, Role } from '../../db/schema.ts';
 import { TestClient } from './client.ts';
 import { testDb } from './db.ts';
 
@@ -34,24 +35,32 @@ function passwordHash(password: string): Promise<string> {
   return h;
 }
 
+/** Another app instance and its database (tests/helpers/throwawayApp.ts); the shared test server otherwise. */
+export interface AccountTarget {
+  appUrl: string;
+  db: Kysely<Database>;
+}
+
 /** Writes a new account to the database as given, then signs it in through POST /api/session. */
-export async function createAccount(opts: { role?: Role; email?: string; password?: string; displayName?: string } = {}): Promise<TestAccount> {
+export async function createAccount(
+  opts: { role?: Role; email?: string; password?: string; displayName?: string; target?: AccountTarget } = {},
+): Promise<TestAccount> {
   const role = opts.role ?? 'quilter';
   const email = opts.email ?? uniqueEmail(role);
   const password = opts.password ?? DEFAULT_PASSWORD;
   const displayName = opts.displayName ?? `Test ${role}`;
-  const row = await testDb()
+  const row = await (opts.target?.db ?? testDb())
     .insertInto('account')
     .values({ email, display_name: displayName, password_hash: await passwordHash(password), role, units: 'in' })
     .returning('id')
     .executeTakeFirstOrThrow();
-  const client = await signIn(email, password);
+  const client = await signIn(email, password, opts.target?.appUrl);
   return { id: row.id, email, password, displayName, role, client };
 }
 
 /** A new client signed in through POST /api/session; throws when the sign-in fails. */
-export async function signIn(email: string, password: string): Promise<TestClient> {
-  const client = new TestClient();
+export async function signIn(email: string, password: string, appUrl?: string): Promise<TestClient> {
+  const client = new TestClient(appUrl);
   const res = await client.post('/api/session', { email, password });
   if (res.status !== 200) throw new Error(`tests/helpers/accounts: sign-in as ${email} failed (${res.status}): ${res.text}`);
   return client;

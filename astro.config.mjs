@@ -4,6 +4,7 @@ import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
 import { fileURLToPath } from 'node:url';
+import { importAliases } from './importAliases.mjs';
 
 // Server output on Node (standalone). Configuration is read at run time through astro:env:
 // scripts/start.mjs and scripts/test.mjs set these for the local database and fakes.
@@ -41,10 +42,7 @@ export default defineConfig({
   vite: {
     plugins: [tailwindcss()],
     resolve: {
-      alias: {
-        '@shared': fileURLToPath(new URL('./shared', import.meta.url)),
-        '@db': fileURLToPath(new URL('./db', import.meta.url)),
-      },
+      alias: importAliases,
     },
   },
   env: {

@@ -1,11 +1,14 @@
 import { defineConfig } from 'vitest/config';
+import { importAliases } from './importAliases.mjs';
 
 // Two projects: `unit` needs nothing running; `app` needs the database, mail sink and built server
 // that scripts/test.mjs starts and describes through environment variables (see DEVELOPERS.md).
 export default defineConfig({
+  resolve: { alias: importAliases },
   test: {
     projects: [
       {
+        extends: true,
         test: {
           name: 'unit',
           include: ['shared/**/*.test.ts', 'src/**/*.test.ts', 'db/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts'],
@@ -14,6 +17,7 @@ export default defineConfig({
         },
       },
       {
+        extends: true,
         test: {
           name: 'app',
           include: ['tests/api/**/*.test.ts', 'tests/browser/**/*.test.ts'],

@@ -7,12 +7,12 @@
  */
 import { execFileSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
-import type { Design } from '../shared/design/design.schema.ts';
-import { buildPlanarGraph } from '../shared/graph/planarGraph.ts';
-import { loadHighsSolver } from '../shared/route/exact/highsSolver.ts';
-import { warmUpSolver } from '../shared/route/exact/warmUp.ts';
-import { planRoute, type PlanOptions, type RoutePlan } from '../shared/route/planRoute.ts';
-import { archRowsDesign, END_CHOICES, patchFillDesign, squareInSquareDesign } from './multiPieceDesigns.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
+import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
+import { warmUpSolver } from '@shared/route/exact/warmUp.ts';
+import { planRoute, type PlanOptions, type RoutePlan } from '@shared/route/planRoute.ts';
+import { archRowsDesign, END_CHOICES, patchFillDesign, squareInSquareDesign } from '@shared/testing/multiPieceDesigns.ts';
 
 const RUNS = Number(process.env.BENCH_RUNS ?? 5);
 const ORACLE = fileURLToPath(new URL('../tests/reference/rpp_cbc_oracle.py', import.meta.url));

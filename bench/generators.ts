@@ -3,9 +3,9 @@
  * before/after timings compare like with like (the reason flatbush's bench uses mulberry32).
  * All designs are 12 in blocks unless a size is given; coordinates in inches.
  */
-import type { Design } from '../shared/design/design.schema.ts';
-import type { Point, Polyline } from '../shared/geometry/point.ts';
-import { seededRandom } from '../shared/seededRandom.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
+import { seededRandom } from '@shared/seededRandom.ts';
 
 /** mulberry32 (see shared/seededRandom.ts), under the name the benches and reference tests use. */
 export const mulberry32 = seededRandom;

@@ -8,16 +8,16 @@
  */
 import { execFileSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
-import type { Design } from '../shared/design/design.schema.ts';
-import { buildPlanarGraph } from '../shared/graph/planarGraph.ts';
-import { blockOutline } from '../shared/graph/prepareGraph.ts';
-import type { PlanarGraph } from '../shared/graph/planarGraph.types.ts';
-import { planGroup } from '../shared/route/planGroup.ts';
-import { planRoute, type PlanStepTimes } from '../shared/route/planRoute.ts';
-import { findRouteGroups } from '../shared/route/routeGroups.ts';
-import { findEndPlaces, type EndCosts } from '../shared/route/threadEnds.ts';
-import { PathSearch } from '../shared/route/shortestPaths.ts';
-import { buildTravelGraph, EQUAL_TRAVEL_WEIGHTS } from '../shared/route/travelGraph.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
+import { blockOutline } from '@shared/graph/prepareGraph.ts';
+import type { PlanarGraph } from '@shared/graph/planarGraph.types.ts';
+import { planGroup } from '@shared/route/planGroup.ts';
+import { planRoute, type PlanStepTimes } from '@shared/route/planRoute.ts';
+import { findRouteGroups } from '@shared/route/routeGroups.ts';
+import { findEndPlaces, type EndCosts } from '@shared/route/threadEnds.ts';
+import { PathSearch } from '@shared/route/shortestPaths.ts';
+import { buildTravelGraph, EQUAL_TRAVEL_WEIGHTS } from '@shared/route/travelGraph.ts';
 import { backAndForthDesign, crosshatchDesign, piecedBlockDesign, randomWalkDesign } from './generators.ts';
 
 const RUNS = Number(process.env.BENCH_RUNS ?? 5);

@@ -13,9 +13,9 @@ import { chmodSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } 
 import os from 'node:os';
 import path from 'node:path';
 import { chromium } from 'playwright-core';
-import type { Design } from '../shared/design/design.schema.ts';
-import type { Point, Polyline } from '../shared/geometry/point.ts';
-import { buildPiecedLayout } from '../shared/layouts/piecedLayouts.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
+import { buildPiecedLayout } from '@shared/layouts/piecedLayouts.ts';
 import { mulberry32 } from './generators.ts';
 import { ensurePostgres } from '../scripts/lib/system.mjs';
 import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from '../scripts/lib/postgres.mjs';

@@ -2,7 +2,7 @@
 
 declare namespace App {
   interface Locals {
-    user: import('./server/auth/session.ts').SessionUser | null;
-    session: import('./server/auth/session.ts').SessionInfo | null;
+    user: import('@server/auth/session.ts').SessionUser | null;
+    session: import('@server/auth/session.ts').SessionInfo | null;
   }
 }

@@ -2,16 +2,16 @@
 // catchErrors (so it also sees failures of the steps after it),
 // originCheck (cross-site state-changing requests, API or page → 403), authenticate (session cookie → locals.user).
 import { defineMiddleware, sequence } from 'astro:middleware';
-import { db } from './server/db.ts';
-import { problem } from './server/http.ts';
-import { isForeignRequest } from './server/originCheck.ts';
-import { withSecurityHeaders } from './server/securityHeaders.ts';
-import { databaseUnavailableResponse, isDatabaseUnavailable, logDatabaseUnavailable } from './server/dbOutage.ts';
-import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from './server/auth/session.ts';
+import { db } from '@server/db.ts';
+import { problem } from '@server/http.ts';
+import { isForeignRequest } from '@server/originCheck.ts';
+import { withSecurityHeaders } from '@server/securityHeaders.ts';
+import { databaseUnavailableResponse, isDatabaseUnavailable, logDatabaseUnavailable } from '@server/dbOutage.ts';
+import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionToken } from '@server/auth/session.ts';
 // Loaded with the middleware, i.e. when the server takes its first request: starts the lesson-release e-mail sweep.
-import './server/classes/releaseSchedule.ts';
+import '@server/classes/releaseSchedule.ts';
 // … and the sweep that removes photo objects an interrupted upload left behind.
-import './server/photos/orphanSchedule.ts';
+import '@server/photos/orphanSchedule.ts';
 
 const isApi = (url: URL) => url.pathname === '/api' || url.pathname.startsWith('/api/');
 

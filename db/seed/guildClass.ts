@@ -3,9 +3,9 @@
 // its two lessons and the enrollments are written like class.service does. Idempotent by owner + title.
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema.ts';
-import { publishTemplate } from '../../src/server/templates/template.service.ts';
-import { enrollStudent } from '../../src/server/classes/class.repository.ts';
-import { generateJoinCode } from '../../src/server/classes/joinCode.ts';
+import { publishTemplate } from '@server/templates/template.service.ts';
+import { enrollStudent } from '@server/classes/class.repository.ts';
+import { generateJoinCode } from '@server/classes/joinCode.ts';
 import { seedDesign } from './guildDesigns.ts';
 import { marigoldDrawing } from './guildDrawings.ts';
 

@@ -2,12 +2,12 @@
 // the summary and route computed by the real planner. Idempotent: a design with the same owner and title is left alone.
 import type { Kysely } from 'kysely';
 import type { Database } from '../schema.ts';
-import { loadHighsSolver } from '../../shared/route/exact/highsSolver.ts';
-import type { MipSolver } from '../../shared/route/exact/mipSolver.ts';
-import { planDesign } from '../../shared/route/planDesign.ts';
-import { buildDesignThumbnailSvg } from '../../shared/export/designSvg.ts';
-import { insertDesign, insertDesignVersion, upsertDesignRoute } from '../../src/server/designs/design.repository.ts';
-import { summaryOf } from '../../src/server/engine/engineSummaries.ts';
+import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
+import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import { planDesign } from '@shared/route/planDesign.ts';
+import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
+import { insertDesign, insertDesignVersion, upsertDesignRoute } from '@server/designs/design.repository.ts';
+import { summaryOf } from '@server/engine/engineSummaries.ts';
 import type { GuildDrawing } from './guildDrawings.ts';
 
 /** The exact search's solver, loaded once per seed run (as each engine worker loads its own). */

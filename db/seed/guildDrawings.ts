@@ -1,9 +1,9 @@
 // The demo guild's drawings (invented content), built with the real layout and motif generators and checked by
 // designSchema. Pure: no database here (guildDesigns.ts and guildClass.ts store them).
-import { designSchema, type Design } from '../../shared/design/design.schema.ts';
-import { buildPiecedLayout, type PiecedLayoutId } from '../../shared/layouts/piecedLayouts.ts';
-import { generateMotif, type MotifParamsInput } from '../../shared/motifs/motifs.ts';
-import type { Polyline } from '../../shared/geometry/point.ts';
+import { designSchema, type Design } from '@shared/design/design.schema.ts';
+import { buildPiecedLayout, type PiecedLayoutId } from '@shared/layouts/piecedLayouts.ts';
+import { generateMotif, type MotifParamsInput } from '@shared/motifs/motifs.ts';
+import type { Polyline } from '@shared/geometry/point.ts';
 
 export interface GuildDrawing {
   title: string;

@@ -3,7 +3,7 @@
 import { readFileSync } from 'node:fs';
 import { sql } from 'kysely';
 import { connectDatabase } from '../connect.ts';
-import { hashPassword } from '../../src/server/auth/password.ts';
+import { hashPassword } from '@server/auth/password.ts';
 import type { Role, UnitsPreference } from '../schema.ts';
 import { seedGuildContent } from './guildContent.ts';
 

@@ -2,7 +2,7 @@
 // `code` comes from a closed union so clients (and tests) can branch on it; `fields` maps an input
 // path ("email", "items.0.name") to a message a person can act on.
 import type { z } from 'zod';
-import { err, ok, type Result } from '../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { readBytesCapped } from './readBody.ts';
 import { findUnstorableText, UNSTORABLE_MESSAGE } from './storableText.ts';
 

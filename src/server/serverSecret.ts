@@ -2,7 +2,7 @@
 // process agrees on them and they survive restarts. (Invitation links have their own, configurable key.)
 import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 const cache = new Map<string, Uint8Array>();
 

@@ -5,7 +5,7 @@
 // fsync on: a confirmed commit must survive even the crash-like 'immediate' stop.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TestClient, type ApiResponse } from '../helpers/client.ts';
-import { connectDatabase } from '../../db/connect.ts';
+import { connectDatabase } from '@db/connect.ts';
 import { createAccount } from '../helpers/accounts.ts';
 import { startThrowawayApp, type ThrowawayApp } from '../helpers/throwawayApp.ts';
 

@@ -3,7 +3,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createAccount, type TestAccount } from '../helpers/accounts.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
-import { seededRandom } from '../../shared/seededRandom.ts';
+import { seededRandom } from '@shared/seededRandom.ts';
 
 type Pt = [number, number];
 /** 2,000 freehand-like strokes of 100 points (seeded random walks, steps up to 0.2 in): 200,000 points. */

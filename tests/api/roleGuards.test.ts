@@ -1,6 +1,6 @@
 // Every route in tests/helpers/guardedRoutes.ts, for anonymous, quilter, teacher and admin visitors.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Role } from '../../db/schema.ts';
+import type { Role } from '@db/schema.ts';
 import { createAccount } from '../helpers/accounts.ts';
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb } from '../helpers/db.ts';

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createAccount } from '../helpers/accounts.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
 import { linksIn, readCapturedMail, waitForMail } from '../helpers/mail.ts';
-import { signInviteToken } from '../../src/server/classes/inviteToken.ts';
+import { signInviteToken } from '@server/classes/inviteToken.ts';
 import { buildWorld, DAY, expectStatus, insertDesignWithRoute, iso, saveRoute, type World } from './teachingWorld.ts';
 
 let w: World;

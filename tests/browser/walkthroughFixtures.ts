@@ -1,8 +1,8 @@
 // A lesson-sized block for the walkthrough browser tests, built through the real APIs: a 12 in half-square
 // triangle with ribbon candy in the top-left triangle and straight lines in the bottom-right one (W's motif
 // generators), the planner's route kept (PUT /api/designs/:id/route), then published as a template.
-import { buildPiecedLayout } from '../../shared/layouts/piecedLayouts.ts';
-import { generateMotif } from '../../shared/motifs/motifs.ts';
+import { buildPiecedLayout } from '@shared/layouts/piecedLayouts.ts';
+import { generateMotif } from '@shared/motifs/motifs.ts';
 import type { TestAccount } from '../helpers/accounts.ts';
 
 export function ribbonCandyBlock(): Record<string, unknown> {

@@ -3,7 +3,7 @@
 // find everything saved, then see the design in the list. Screenshots: $TEST_OUTPUT_DIR/screenshots/workbench-*.
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { fitBlockViewport, toScreen } from '../../src/components/editor/viewport.ts';
+import { fitBlockViewport, toScreen } from '@components/editor/viewport.ts';
 import { DEFAULT_PASSWORD, uniqueEmail } from '../helpers/accounts.ts';
 import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
 import { finishSignUpFromMail } from '../helpers/signUpFlow.ts';

@@ -4,7 +4,7 @@
 import { readFileSync } from 'node:fs';
 import { hash } from '@node-rs/argon2';
 import type { Kysely } from 'kysely';
-import type { Database, Role } from '../../db/schema.ts';
+import type { Database, Role } from '@db/schema.ts';
 import { TestClient } from './client.ts';
 import { testDb } from './db.ts';
 

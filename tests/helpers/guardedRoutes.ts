@@ -4,7 +4,7 @@
 //   page — anonymous → 302 to /sign-in?next=<path>; role too low → 404 page.
 // `request` must be harmless for a visitor who is allowed (e.g. an empty body that fails validation);
 // an allowed visitor must get neither 401, nor 404, nor a redirect to sign-in.
-import type { Role } from '../../db/schema.ts';
+import type { Role } from '@db/schema.ts';
 
 export interface GuardedRoute {
   kind: 'api' | 'page';

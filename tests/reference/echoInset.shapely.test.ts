@@ -1,10 +1,10 @@
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import type { Point } from '../../shared/geometry/point.ts';
-import { buildPiecedLayout, PIECED_LAYOUTS } from '../../shared/layouts/piecedLayouts.ts';
-import { buildEchoRings } from '../../shared/motifs/echo.ts';
-import { seededRandom } from '../../shared/seededRandom.ts';
+import type { Point } from '@shared/geometry/point.ts';
+import { buildPiecedLayout, PIECED_LAYOUTS } from '@shared/layouts/piecedLayouts.ts';
+import { buildEchoRings } from '@shared/motifs/echo.ts';
+import { seededRandom } from '@shared/seededRandom.ts';
 
 /**
  * Reference check against an independent implementation: Shapely 1.8.5's negative buffer with mitred joins

@@ -1,8 +1,8 @@
 import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import type { Design } from '../../shared/design/design.schema.ts';
-import type { Point, Polyline } from '../../shared/geometry/point.ts';
-import { findWidestGap } from '../../shared/gap/gapCheck.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
+import { findWidestGap } from '@shared/gap/gapCheck.ts';
 import { mulberry32 } from '../../bench/generators.ts';
 
 /**

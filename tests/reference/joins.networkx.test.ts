@@ -1,15 +1,15 @@
 import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { applyCommand } from '../../shared/design/commands.ts';
-import { designSchema, type Design } from '../../shared/design/design.schema.ts';
-import type { Polyline } from '../../shared/geometry/point.ts';
-import { findJoins } from '../../shared/joins/findJoins.ts';
-import { commandForJoin } from '../../shared/joins/joinCommand.ts';
-import { findTravelParts } from '../../shared/joins/lineGroups.ts';
-import { buildPiecedLayout, type PiecedLayoutId } from '../../shared/layouts/piecedLayouts.ts';
-import { generateMotif } from '../../shared/motifs/motifs.ts';
-import { planDesign } from '../../shared/route/planDesign.ts';
+import { applyCommand } from '@shared/design/commands.ts';
+import { designSchema, type Design } from '@shared/design/design.schema.ts';
+import type { Polyline } from '@shared/geometry/point.ts';
+import { findJoins } from '@shared/joins/findJoins.ts';
+import { commandForJoin } from '@shared/joins/joinCommand.ts';
+import { findTravelParts } from '@shared/joins/lineGroups.ts';
+import { buildPiecedLayout, type PiecedLayoutId } from '@shared/layouts/piecedLayouts.ts';
+import { generateMotif } from '@shared/motifs/motifs.ts';
+import { planDesign } from '@shared/route/planDesign.ts';
 
 /**
  * Reference check against independent implementations: Shapely's exact distances between travel parts and

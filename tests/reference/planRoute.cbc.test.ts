@@ -1,13 +1,13 @@
 import { spawn } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { multiPieceDesigns } from '../../bench/multiPieceDesigns.ts';
-import type { Design } from '../../shared/design/design.schema.ts';
-import { buildPlanarGraph } from '../../shared/graph/planarGraph.ts';
-import type { PlanarGraph } from '../../shared/graph/planarGraph.types.ts';
-import { loadHighsSolver } from '../../shared/route/exact/highsSolver.ts';
-import type { MipSolver } from '../../shared/route/exact/mipSolver.ts';
-import { planRoute, type RoutePlan } from '../../shared/route/planRoute.ts';
+import { multiPieceDesigns } from '@shared/testing/multiPieceDesigns.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
+import type { PlanarGraph } from '@shared/graph/planarGraph.types.ts';
+import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
+import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import { planRoute, type RoutePlan } from '@shared/route/planRoute.ts';
 
 // Independent reference: an exact rural postman model written straight on the planar graph (no reduction) and
 // solved by Debian's coinor-cbc through python3-pulp (tests/reference/rpp_cbc_oracle.py). The engine's model is the

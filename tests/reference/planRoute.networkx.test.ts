@@ -1,12 +1,12 @@
 import { execFileSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { describe, expect, it } from 'vitest';
-import type { DesignInput } from '../../shared/design/design.schema.ts';
-import { designSchema } from '../../shared/design/design.schema.ts';
-import { buildPlanarGraph } from '../../shared/graph/planarGraph.ts';
-import type { Point } from '../../shared/geometry/point.ts';
-import { planRoute } from '../../shared/route/planRoute.ts';
-import { seededRandom as makeRandom } from '../../shared/seededRandom.ts';
+import type { DesignInput } from '@shared/design/design.schema.ts';
+import { designSchema } from '@shared/design/design.schema.ts';
+import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
+import type { Point } from '@shared/geometry/point.ts';
+import { planRoute } from '@shared/route/planRoute.ts';
+import { seededRandom as makeRandom } from '@shared/seededRandom.ts';
 
 // Independent reference: Debian's python3-networkx 2.8 (exact Dijkstra + Van Rantwijk max_weight_matching turned
 // into a min-cost perfect matching), run by tests/reference/networkx_route_oracle.py on the same planar graphs.

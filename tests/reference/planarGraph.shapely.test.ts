@@ -1,10 +1,10 @@
 import { execFileSync } from 'node:child_process';
 import { describe, expect, it } from 'vitest';
-import type { Design } from '../../shared/design/design.schema.ts';
-import type { Point, Polyline } from '../../shared/geometry/point.ts';
-import { buildPlanarGraph } from '../../shared/graph/planarGraph.ts';
-import type { PlanarGraph } from '../../shared/graph/planarGraph.types.ts';
-import { blockOutline } from '../../shared/graph/prepareGraph.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
+import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
+import type { PlanarGraph } from '@shared/graph/planarGraph.types.ts';
+import { blockOutline } from '@shared/graph/prepareGraph.ts';
 import { mulberry32 } from '../../bench/generators.ts';
 
 /**

@@ -14,7 +14,7 @@ import type { LinearProgram, MipSession, MipSolver, SolveOutcome, SparseRows, So
 /**
  * HiGHS options for every solve: silent, exact MIP optimality (no relative or absolute gap allowed beyond rounding).
  * Its primal heuristics and symmetry detection are off: the planner brings its own first route, and on these small
- * programs they cost more than they save (measured on bench/multiPieceDesigns.ts: about 20 % less search time).
+ * programs they cost more than they save (measured on shared/testing/multiPieceDesigns.ts: about 20 % less search time).
  */
 const BASE_OPTIONS = {
   output_flag: false,

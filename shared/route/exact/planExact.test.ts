@@ -3,7 +3,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { PlanarGraph } from '../../graph/planarGraph.types.ts';
 import { planRoute, type PlanOptions, type RoutePlan } from '../planRoute.ts';
-import { archRowsDesign } from '../../../bench/multiPieceDesigns.ts';
+import { archRowsDesign } from '../../testing/multiPieceDesigns.ts';
 import { buildPlanarGraph } from '../../graph/planarGraph.ts';
 import { graphFromEdgeList, graphFromSegments } from '../testGraphs.ts';
 import { loadHighsSolver } from './highsSolver.ts';

@@ -1,4 +1,4 @@
-import { buildPiecedLayout, type PiecedLayoutId } from '../../../shared/layouts/piecedLayouts.ts';
+import { buildPiecedLayout, type PiecedLayoutId } from '@shared/layouts/piecedLayouts.ts';
 
 /** Fabric tones for patches, read from the palette tokens (src/styles/global.css). */
 const PATCH_FILLS = ['var(--color-muslin-100)', 'var(--color-muslin-300)', 'var(--color-denim-500)', 'var(--color-sage-500)'];

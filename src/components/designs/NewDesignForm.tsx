@@ -1,7 +1,7 @@
 import { useId, useState, type FormEvent } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
-import { COMMON_BLOCK_SIZES } from '../../../shared/layouts/blockSizes.ts';
-import { PIECED_LAYOUTS, type PiecedLayoutId } from '../../../shared/layouts/piecedLayouts.ts';
+import type { Units } from '@shared/design/design.schema.ts';
+import { COMMON_BLOCK_SIZES } from '@shared/layouts/blockSizes.ts';
+import { PIECED_LAYOUTS, type PiecedLayoutId } from '@shared/layouts/piecedLayouts.ts';
 import { apiRequest } from './apiClient.ts';
 import { createdDesignId } from './designsApi.ts';
 import { LayoutPreview } from './LayoutPreview.tsx';

@@ -1,4 +1,4 @@
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 
 /** What went wrong with a request, as the UI needs to tell it apart. */
 export type ApiFailure =

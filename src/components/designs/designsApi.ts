@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { designSchema, unitsSchema } from '../../../shared/design/design.schema.ts';
+import { designSchema, unitsSchema } from '@shared/design/design.schema.ts';
 
 /** Sort keys the design list accepts (GET /api/designs?sort=). */
 export const DESIGN_SORTS = ['title', 'updated', 'passes', 'stops', 'travel', 'thread'] as const;

@@ -1,4 +1,4 @@
-import type { Units } from '../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 
 /** Eighths of an inch as quilters write them: 12, 12 1/2, 3/8. Other values keep two decimals. */
 export function formatInches(value: number): string {

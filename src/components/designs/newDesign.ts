@@ -1,6 +1,6 @@
 import { z } from 'zod';
-import { DESIGN_LIMITS, DESIGN_VERSION, designSchema, unitsSchema, type Design } from '../../../shared/design/design.schema.ts';
-import { buildPiecedLayout, PIECED_LAYOUTS, type PiecedLayoutId } from '../../../shared/layouts/piecedLayouts.ts';
+import { DESIGN_LIMITS, DESIGN_VERSION, designSchema, unitsSchema, type Design } from '@shared/design/design.schema.ts';
+import { buildPiecedLayout, PIECED_LAYOUTS, type PiecedLayoutId } from '@shared/layouts/piecedLayouts.ts';
 
 const layoutIds = PIECED_LAYOUTS.map((l) => l.id) as [PiecedLayoutId, ...PiecedLayoutId[]];
 

@@ -1,6 +1,6 @@
 import { useEffect, useId, useState, type KeyboardEvent } from 'react';
-import type { DesignCommand } from '../../../shared/design/commands.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import type { DesignCommand } from '@shared/design/commands.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import { BLOCK_SETTING_FIELDS, defaultOf, ownValueOf, settingCommand, type BlockSettingField } from './blockSettingsForm.ts';
 
 export interface BlockSettingsPanelProps {

@@ -1,6 +1,6 @@
 import { useId } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
-import { MOTIFS, type MotifKind } from '../../../shared/motifs/motifs.ts';
+import type { Units } from '@shared/design/design.schema.ts';
+import { MOTIFS, type MotifKind } from '@shared/motifs/motifs.ts';
 import { MOTIF_FIELDS } from './motifForm.ts';
 
 export interface MotifPanelProps {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { applyCommand } from '../../../shared/design/commands.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import { applyCommand } from '@shared/design/commands.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import { defaultOf, settingCommand } from './blockSettingsForm.ts';
 
 const block: Design = { version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [], edgeTravel: true, thread: { spi: 12 } };

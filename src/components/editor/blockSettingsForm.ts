@@ -1,6 +1,6 @@
-import { applyCommand, type DesignCommand } from '../../../shared/design/commands.ts';
-import { bindingBandOf, designSchema, type Design, type ThreadSettings } from '../../../shared/design/design.schema.ts';
-import { THREAD_DEFAULTS } from '../../../shared/route/threadBudget.ts';
+import { applyCommand, type DesignCommand } from '@shared/design/commands.ts';
+import { bindingBandOf, designSchema, type Design, type ThreadSettings } from '@shared/design/design.schema.ts';
+import { THREAD_DEFAULTS } from '@shared/route/threadBudget.ts';
 
 /** A number the quilter may set for the block; `thread` keys live in `design.thread`, `bindingBand` on the design. */
 export type BlockSettingKey = keyof ThreadSettings | 'bindingBand';

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
+import { designSchema, type Design } from '@shared/design/design.schema.ts';
 
 /**
  * Unsaved edits kept in the browser (localStorage) so nothing is lost when the network or the server

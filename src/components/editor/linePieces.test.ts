@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import { findLinePieces } from './linePieces.ts';
 
 const base: Design = { version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [], edgeTravel: true };

@@ -1,6 +1,6 @@
-import type { Design } from '../../../shared/design/design.schema.ts';
-import { buildPlanarGraph } from '../../../shared/graph/planarGraph.ts';
-import { findPieces } from '../../../shared/graph/pieces.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
+import { findPieces } from '@shared/graph/pieces.ts';
 
 /** Above this many quilting lines the canvas draws lines in one colour: colouring pieces is a view nicety, not worth a stall. */
 export const MAX_LINES_FOR_PIECE_COLOURS = 3000;

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { generateMotif, MOTIFS, motifParamsSchema } from '../../../shared/motifs/motifs.ts';
+import { generateMotif, MOTIFS, motifParamsSchema } from '@shared/motifs/motifs.ts';
 import { buildMotifParams, defaultMotifValues, MOTIF_FIELDS } from './motifForm.ts';
 
 describe('motif panel values', () => {

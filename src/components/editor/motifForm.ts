@@ -1,5 +1,5 @@
-import type { Units } from '../../../shared/design/design.schema.ts';
-import type { MotifKind } from '../../../shared/motifs/motifs.ts';
+import type { Units } from '@shared/design/design.schema.ts';
+import type { MotifKind } from '@shared/motifs/motifs.ts';
 
 /** One number the motif panel asks for. `length` fields are in the design's units. */
 export interface MotifField {

@@ -1,4 +1,4 @@
-import type { Units } from '../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 
 /** One ruler mark: its position in design units and its rank (0 = whole unit, larger = finer). */
 export interface Tick {

@@ -1,4 +1,4 @@
-import { assertNever } from '../../../shared/assertNever.ts';
+import { assertNever } from '@shared/assertNever.ts';
 
 /**
  * Where the design stands against the server. Edits are numbered (`revision`); the server has

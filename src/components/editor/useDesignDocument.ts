@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { parseDesignRecord, type DesignRecord } from '../designs/designsApi.ts';
 import { clearDraft, loadDraft, saveDraft } from './draftStore.ts';

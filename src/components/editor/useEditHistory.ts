@@ -1,7 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { Design } from '../../../shared/design/design.schema.ts';
-import type { DesignCommand } from '../../../shared/design/commands.ts';
-import { canRedo, canUndo, createHistory, pushCommand, redo, undo, type History } from '../../../shared/design/history.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { DesignCommand } from '@shared/design/commands.ts';
+import { canRedo, canUndo, createHistory, pushCommand, redo, undo, type History } from '@shared/design/history.ts';
 
 export interface EditHistory {
   /** Applies a document command as one undo step. */

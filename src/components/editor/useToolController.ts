@@ -1,11 +1,11 @@
 import { useCallback, useMemo, useRef, useState } from 'react';
-import type { DesignCommand, LineTarget } from '../../../shared/design/commands.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
-import type { Point, Polyline } from '../../../shared/geometry/point.ts';
-import { createDrawTool, stepDrawTool, type DrawMode, type DrawToolState } from '../../../shared/editor/drawTools.ts';
-import { projectOntoGuide, type Guide } from '../../../shared/editor/guides.ts';
-import { collectSnapTargets, snapPoint, type SnapKind } from '../../../shared/editor/snap.ts';
-import type { ToolEvent } from '../../../shared/editor/tool.types.ts';
+import type { DesignCommand, LineTarget } from '@shared/design/commands.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
+import { createDrawTool, stepDrawTool, type DrawMode, type DrawToolState } from '@shared/editor/drawTools.ts';
+import { projectOntoGuide, type Guide } from '@shared/editor/guides.ts';
+import { collectSnapTargets, snapPoint, type SnapKind } from '@shared/editor/snap.ts';
+import type { ToolEvent } from '@shared/editor/tool.types.ts';
 import type { CanvasPointer } from './canvas/EditorStage.tsx';
 import type { ToolId } from './Toolbar.tsx';
 import { orientOwnRoute, pickLine } from './tools/pickLine.ts';

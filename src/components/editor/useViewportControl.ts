@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 import { fitBlockViewport, panBy, zoomAt, zoomTo, ZOOM_STEP, type Viewport } from './viewport.ts';
 
 /** Keyboard pan step in CSS px (Shift: four times as far). */

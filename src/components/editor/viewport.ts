@@ -1,5 +1,5 @@
-import type { Point } from '../../../shared/geometry/point.ts';
-import { inchesPerUnit, type Units } from '../../../shared/design/design.schema.ts';
+import type { Point } from '@shared/geometry/point.ts';
+import { inchesPerUnit, type Units } from '@shared/design/design.schema.ts';
 
 /**
  * How the block sits on screen: `scale` CSS pixels per design unit, and the screen position (CSS px)

@@ -1,5 +1,5 @@
 import { memo, type ReactNode } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 import { formatDistance, formatMinutes } from '../designs/formatFigures.ts';
 import type { GapView, RouteCheckView, RouteFigures, ThreadBudgetView } from './routeCheckView.ts';
 

@@ -1,4 +1,4 @@
-import type { Units } from '../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 import { formatDistance } from '../designs/formatFigures.ts';
 import { RoutePlayerControls } from './RoutePlayerControls.tsx';
 import type { RoutePlayer } from './useRoutePlayer.ts';

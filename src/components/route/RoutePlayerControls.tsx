@@ -1,5 +1,5 @@
 import { useId } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 import { formatDistance } from '../designs/formatFigures.ts';
 import { PLAYER_SPEEDS, type RoutePlayer } from './useRoutePlayer.ts';
 

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import type { Design } from '../../../shared/design/design.schema.ts';
-import { checkGap } from '../../../shared/gap/gapCheck.ts';
-import { checkDesign } from '../../../shared/route/checkDesign.ts';
-import { checkRoute } from '../../../shared/route/checkRoute.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { checkGap } from '@shared/gap/gapCheck.ts';
+import { checkDesign } from '@shared/route/checkDesign.ts';
+import { checkRoute } from '@shared/route/checkRoute.ts';
 import { parseCheckAnswer } from './routeCheckView.ts';
 
 // The check answer as the server assembles it from the shared engine (src/server/engine/engineTasks.ts),

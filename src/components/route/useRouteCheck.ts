@@ -1,5 +1,5 @@
 import { useEffect, useRef, useState } from 'react';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { parseCheckAnswer, type RouteCheckView } from './routeCheckView.ts';
 

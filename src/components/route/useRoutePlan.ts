@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useState } from 'react';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { planAnswerSchema, savedRouteAnswerSchema, type PlanAnswer, type SavedRoute } from './routeApi.ts';
 

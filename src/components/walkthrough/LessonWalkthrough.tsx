@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { z } from 'zod';
-import { parseWalkthroughInput } from '../../../shared/walkthrough/walkthroughInput.ts';
+import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
 import { useProgressSync } from './useProgressSync.ts';
 import { WalkthroughView } from './WalkthroughView.tsx';
 

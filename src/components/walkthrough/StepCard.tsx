@@ -1,5 +1,5 @@
-import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
-import { directionWords } from '../../../shared/walkthrough/stepText.ts';
+import type { Step } from '@shared/walkthrough/walkthrough.types.ts';
+import { directionWords } from '@shared/walkthrough/stepText.ts';
 
 export interface StepCardProps {
   readonly step: Step;

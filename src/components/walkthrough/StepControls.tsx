@@ -1,6 +1,6 @@
 import { useId } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
-import { formatRulerLength } from '../../../shared/walkthrough/rulerLength.ts';
+import type { Units } from '@shared/design/design.schema.ts';
+import { formatRulerLength } from '@shared/walkthrough/rulerLength.ts';
 import { PLAYER_SPEEDS } from '../route/useRoutePlayer.ts';
 import type { StepPlayer } from './useStepPlayer.ts';
 

@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { Circle, Group, Layer, RegularPolygon, Shape, Text } from 'react-konva';
-import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
+import type { Step } from '@shared/walkthrough/walkthrough.types.ts';
 import type { CanvasTheme } from '../editor/canvasTheme.ts';
 import { tracePolylines } from '../editor/canvas/drawPolylines.ts';
 import type { Viewport } from '../editor/viewport.ts';

@@ -1,5 +1,5 @@
-import type { SafetyCaution } from '../../../shared/walkthrough/safetyCautions.ts';
-import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
+import type { SafetyCaution } from '@shared/walkthrough/safetyCautions.ts';
+import type { Step } from '@shared/walkthrough/walkthrough.types.ts';
 
 export interface StepListProps {
   readonly title: string;

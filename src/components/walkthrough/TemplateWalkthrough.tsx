@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { parseWalkthroughInput } from '../../../shared/walkthrough/walkthroughInput.ts';
+import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
 import { useProgressSync } from './useProgressSync.ts';
 import { WalkthroughView } from './WalkthroughView.tsx';
 

@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
-import type { Design } from '../../../shared/design/design.schema.ts';
-import type { NamedPatch } from '../../../shared/walkthrough/patchNames.ts';
-import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { NamedPatch } from '@shared/walkthrough/patchNames.ts';
+import type { Step } from '@shared/walkthrough/walkthrough.types.ts';
 import { readCanvasTheme } from '../editor/canvasTheme.ts';
 import { BlockLayer } from '../editor/canvas/BlockLayer.tsx';
 import { EditorStage } from '../editor/canvas/EditorStage.tsx';

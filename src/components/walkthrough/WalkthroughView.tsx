@@ -1,8 +1,8 @@
 import { useEffect, useMemo } from 'react';
-import type { Design } from '../../../shared/design/design.schema.ts';
-import { buildWalkthrough } from '../../../shared/walkthrough/buildWalkthrough.ts';
-import { findSafetyCautions } from '../../../shared/walkthrough/safetyCautions.ts';
-import type { RouteStrokeInput } from '../../../shared/walkthrough/walkthrough.types.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { buildWalkthrough } from '@shared/walkthrough/buildWalkthrough.ts';
+import { findSafetyCautions } from '@shared/walkthrough/safetyCautions.ts';
+import type { RouteStrokeInput } from '@shared/walkthrough/walkthrough.types.ts';
 import { KeyList } from './KeyList.tsx';
 import { StepCard } from './StepCard.tsx';
 import { StepControls } from './StepControls.tsx';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { designSchema } from '../../../shared/design/design.schema.ts';
-import { buildWalkthrough } from '../../../shared/walkthrough/buildWalkthrough.ts';
-import type { RouteStrokeInput } from '../../../shared/walkthrough/walkthrough.types.ts';
+import { designSchema } from '@shared/design/design.schema.ts';
+import { buildWalkthrough } from '@shared/walkthrough/buildWalkthrough.ts';
+import type { RouteStrokeInput } from '@shared/walkthrough/walkthrough.types.ts';
 import { buildPlayback } from '../route/routePlayback.ts';
 import { buildStepSpans, findStepAt } from './stepTimeline.ts';
 

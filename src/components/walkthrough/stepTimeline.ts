@@ -1,4 +1,4 @@
-import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
+import type { Step } from '@shared/walkthrough/walkthrough.types.ts';
 import type { Playback } from '../route/routePlayback.ts';
 
 /** Where each step lies on the player's distance axis (design units from the route's start). */

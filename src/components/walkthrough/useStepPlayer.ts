@@ -1,6 +1,6 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import type { Units } from '../../../shared/design/design.schema.ts';
-import type { Step } from '../../../shared/walkthrough/walkthrough.types.ts';
+import type { Units } from '@shared/design/design.schema.ts';
+import type { Step } from '@shared/walkthrough/walkthrough.types.ts';
 import { needleAt, type NeedlePosition, type RouteStroke } from '../route/routePlayback.ts';
 import { PLAYER_SPEEDS, useRoutePlayer, type RoutePlayer } from '../route/useRoutePlayer.ts';
 import { buildStepSpans, findStepAt, type StepSpan } from './stepTimeline.ts';

@@ -3,14 +3,14 @@
 // one a note to its owner (src/server/accounts/signUpRequest.ts). Limited per client address and per e-mail.
 import type { APIRoute } from 'astro';
 import { PUBLIC_ORIGIN } from 'astro:env/server';
-import { db } from '../../server/db.ts';
-import { json, readJson } from '../../server/http.ts';
-import { signUpSchema } from '../../server/accounts/account.schema.ts';
-import { SIGN_UP_VALID_HOURS, pruneSignUpRequests, requestSignUp } from '../../server/accounts/signUpRequest.ts';
-import { reserveAll } from '../../server/auth/attemptGate.ts';
-import { signUpGates } from '../../server/auth/authLimits.ts';
-import { rateLimitedResponse } from '../../server/auth/rateLimitResponse.ts';
-import { clientIp } from '../../server/clientIp.ts';
+import { db } from '@server/db.ts';
+import { json, readJson } from '@server/http.ts';
+import { signUpSchema } from '@server/accounts/account.schema.ts';
+import { SIGN_UP_VALID_HOURS, pruneSignUpRequests, requestSignUp } from '@server/accounts/signUpRequest.ts';
+import { reserveAll } from '@server/auth/attemptGate.ts';
+import { signUpGates } from '@server/auth/authLimits.ts';
+import { rateLimitedResponse } from '@server/auth/rateLimitResponse.ts';
+import { clientIp } from '@server/clientIp.ts';
 
 export const POST = (async (context) => {
   const body = await readJson(context.request, signUpSchema);

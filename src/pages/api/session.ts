@@ -1,16 +1,16 @@
 // /api/session — GET: who is signed in (401 when nobody); POST: sign in; DELETE: sign out.
 import type { APIRoute } from 'astro';
-import { db } from '../../server/db.ts';
-import { json, problem, readJson } from '../../server/http.ts';
-import { signInSchema } from '../../server/accounts/account.schema.ts';
-import { toAccountJson } from '../../server/accounts/accountJson.ts';
-import { requireUser } from '../../server/auth/guards.ts';
-import { DEVICE_COOKIE } from '../../server/auth/knownDevice.ts';
-import { setDeviceCookie } from '../../server/auth/deviceCookie.ts';
-import { rateLimitedResponse } from '../../server/auth/rateLimitResponse.ts';
-import { attemptSignIn } from '../../server/auth/signInAttempt.ts';
-import { createSession, deleteSessionCookie, generateSessionToken, invalidateSession, setSessionCookie } from '../../server/auth/session.ts';
-import { clientIp } from '../../server/clientIp.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { signInSchema } from '@server/accounts/account.schema.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { DEVICE_COOKIE } from '@server/auth/knownDevice.ts';
+import { setDeviceCookie } from '@server/auth/deviceCookie.ts';
+import { rateLimitedResponse } from '@server/auth/rateLimitResponse.ts';
+import { attemptSignIn } from '@server/auth/signInAttempt.ts';
+import { createSession, deleteSessionCookie, generateSessionToken, invalidateSession, setSessionCookie } from '@server/auth/session.ts';
+import { clientIp } from '@server/clientIp.ts';
 
 const ACCOUNT_HINT =
   'This account has had many wrong passwords from devices it has not been used on. Sign in from a device you have signed in from before, or reset your password by e-mail (that also lets this device in).';

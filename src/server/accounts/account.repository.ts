@@ -1,6 +1,6 @@
 // Queries on `account` only. Rows become camelCase domain objects here; rules live in account.service.ts.
 import { sql, type Kysely, type Transaction } from 'kysely';
-import type { AccountRow, Database, Role, UnitsPreference } from '../../../db/schema.ts';
+import type { AccountRow, Database, Role, UnitsPreference } from '@db/schema.ts';
 
 export interface Account {
   id: string;

@@ -1,8 +1,8 @@
 // Account rules: sign-up, sign-in, settings and role changes. Expected failures are Result values,
 // tagged by `kind`; the API routes turn them into HTTP answers.
 import type { Kysely } from 'kysely';
-import type { Database, Role, UnitsPreference } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database, Role, UnitsPreference } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { hashPassword, verifyPassword } from '../auth/password.ts';
 import { changePasswordHash } from '../auth/passwordChange.ts';
 import {

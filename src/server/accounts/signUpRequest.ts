@@ -4,8 +4,8 @@
 // The pending sign-up keeps only the password's hash and the SHA-256 of the token.
 import type { Kysely } from 'kysely';
 import { sql } from 'kysely';
-import type { Database, UnitsPreference } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database, UnitsPreference } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { hashPassword } from '../auth/password.ts';
 import { generateSessionToken, hashToken } from '../auth/session.ts';
 import { sendEmail, type OutgoingEmail } from '../mail/mailer.ts';

@@ -4,7 +4,7 @@
 // wait twice as long as the one before (from `firstMs` up to `maxMs`). A success releases or clears the gate.
 import { sql, type Kysely, type RawBuilder } from 'kysely';
 import { RATE_LIMIT_SCALE } from 'astro:env/server';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { pruneRateLimits } from './rateLimit.ts';
 
 export interface SlowDown {

@@ -2,7 +2,7 @@
 // to the API (sign-in reads it; sign-in, password reset and password change write it).
 import type { AstroCookies } from 'astro';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { DEVICE_COOKIE, DEVICE_DAYS, newDeviceId, rememberDevice, type DeviceAccount } from './knownDevice.ts';
 import { deviceKey } from './signInAttempt.ts';
 

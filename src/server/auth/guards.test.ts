@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Role } from '../../../db/schema.ts';
+import type { Role } from '@db/schema.ts';
 import { hasRole, requireRole, requireUser, safeNextPath } from './guards.ts';
 
 const user = (role: Role) => ({ id: 'u', email: 'a@b.test', displayName: 'A', role, units: 'in' as const, createdAt: new Date(0) });

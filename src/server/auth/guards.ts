@@ -4,8 +4,8 @@
 // API routes: anonymous → 401 `unauthenticated`; signed in but below the role → 404 `not_found`,
 // the same answer as for a route that does not exist (an admin-only endpoint is not revealed to a
 // quilter). Pages: anonymous → redirect to /sign-in?next=<path>; below the role → the 404 page.
-import type { Role } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Role } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { problem } from '../http.ts';
 import type { SessionInfo, SessionUser } from './session.ts';
 

@@ -2,7 +2,7 @@
 // link): every unused reset link ends (here, and by the account_password_changed trigger for any other writer)
 // and every session except the one making the change (none, for a reset link).
 import type { Kysely, Transaction } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { invalidateAccountSessions } from './session.ts';
 
 export async function setPasswordHash(trx: Transaction<Database>, accountId: string, passwordHash: string, keepSessionId?: string, now = new Date()): Promise<void> {

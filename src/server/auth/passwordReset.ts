@@ -1,8 +1,8 @@
 // Password-reset tokens: 20 random bytes (base32) e-mailed as a link; only the SHA-256 is stored.
 // A token works once and for RESET_VALID_MINUTES; using it revokes every session of the account.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { setPasswordHash } from './passwordChange.ts';
 import { generateSessionToken, hashToken } from './session.ts';
 

@@ -3,7 +3,7 @@
 // before the work: see attemptGate.ts (which also slows down); the rules for account endpoints are in authLimits.ts.
 import { sql, type Kysely } from 'kysely';
 import { RATE_LIMIT_SCALE } from 'astro:env/server';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 export interface RateLimitRule {
   /** Attempts allowed per window, before RATE_LIMIT_SCALE is applied. */

@@ -4,7 +4,7 @@ import type { AstroCookies } from 'astro';
 import { sha256 } from '@oslojs/crypto/sha2';
 import { encodeBase32LowerCaseNoPadding, encodeHexLowerCase } from '@oslojs/encoding';
 import type { Kysely, Transaction } from 'kysely';
-import type { Database, Role, UnitsPreference } from '../../../db/schema.ts';
+import type { Database, Role, UnitsPreference } from '@db/schema.ts';
 
 export interface SessionUser {
   id: string;

@@ -3,8 +3,8 @@
 // cannot pass a check none of them has counted yet. A success gives the address its attempt back and clears the
 // account's (or device's) failures; the browser is remembered as a known device of the account.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { findAccountRowByEmail, rowToAccount, type Account } from '../accounts/account.repository.ts';
 import { getDummyHash } from '../accounts/account.service.ts';
 import { serverSecret } from '../serverSecret.ts';

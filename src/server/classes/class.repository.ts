@@ -1,6 +1,6 @@
 // Queries on class, lesson and enrollment. Rows become camelCase JSON in classJson.ts.
 import { sql, type Kysely, type Transaction } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
 

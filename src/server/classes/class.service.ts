@@ -1,8 +1,8 @@
 // Rules for classes and lessons: creating them, which template versions a lesson may use, and joining by code.
 import type { Kysely } from 'kysely';
 import type { z } from 'zod';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import type { SessionUser } from '../auth/session.ts';
 import type { createClassSchema, createLessonSchema, updateClassSchema, updateLessonSchema } from './class.schema.ts';
 import { enrollStudent } from './class.repository.ts';

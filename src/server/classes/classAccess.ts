@@ -3,7 +3,7 @@
 // on every request: a teacher demoted to quilter stops managing their classes at once (the classes stay, read-only
 // for their students and managed by admins; see DEVELOPERS.md "Who may see what").
 import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
-import type { ClassTable, Database } from '../../../db/schema.ts';
+import type { ClassTable, Database } from '@db/schema.ts';
 import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
 

@@ -1,7 +1,7 @@
 // Class invitations by e-mail: a signed, expiring, single-use link per address (see inviteToken.ts).
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { hashToken } from '../auth/session.ts';
 import type { SessionUser } from '../auth/session.ts';
 import { sendEmail } from '../mail/mailer.ts';

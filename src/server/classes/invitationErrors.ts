@@ -1,5 +1,5 @@
 // Plain answers for invitation links that cannot be used. The wording tells the student what to do next.
-import { assertNever } from '../../../shared/assertNever.ts';
+import { assertNever } from '@shared/assertNever.ts';
 import { problem } from '../http.ts';
 import type { AcceptProblem } from './invitation.service.ts';
 

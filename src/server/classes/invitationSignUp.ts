@@ -3,8 +3,8 @@
 // only, and joins the class in the same transaction. Another address signs up the usual way (by e-mailed link).
 // Saying "this address already has an account" here tells nothing to someone who could not read its mail anyway.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { insertAccount, rowToAccount, type Account } from '../accounts/account.repository.ts';
 import type { SignUpInput } from '../accounts/signUpRequest.ts';
 import { hashPassword } from '../auth/password.ts';

@@ -3,7 +3,7 @@
 import { randomBytes } from 'node:crypto';
 import { INVITE_SECRET } from 'astro:env/server';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 let cached: Uint8Array | undefined;
 

@@ -3,7 +3,7 @@
 // the database keeps only SHA-256(id), plus the expiry and when the invitation was used (single use).
 import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import { encodeBase32LowerCaseNoPadding } from '@oslojs/encoding';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 
 export interface SignedToken {
   token: string;

@@ -1,7 +1,7 @@
 // Walkthrough progress per student and lesson: the step the student is on, how many steps the walkthrough has,
 // whether the lesson is finished, and when they were last active. Saved by the walkthrough island.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 export interface ProgressJson {
   lessonId: string;

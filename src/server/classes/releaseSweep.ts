@@ -3,7 +3,7 @@
 // is unique, so a second sweep, a restart or two server processes racing cannot send it twice.
 // Students who joined after a lesson came out are not told about it (they see it in the class anyway).
 import { sql, type Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { sendEmail } from '../mail/mailer.ts';
 import { lessonReleasedEmail } from './teachingEmails.ts';
 

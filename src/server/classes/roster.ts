@@ -1,7 +1,7 @@
 // The teacher's roster: per enrolled student, lessons finished, where they are now (the lesson they touched
 // last, its step and total), when they were last active, and how many photos they uploaded. Plus CSV export.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 export interface RosterEntry {
   studentId: string;

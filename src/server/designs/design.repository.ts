@@ -2,7 +2,7 @@
 // scoped by owner: a design that is not yours is the same as one that does not exist. Rules live in
 // design.service.ts; rows become domain objects in designRecord.ts.
 import { sql, type Kysely, type Transaction } from 'kysely';
-import type { Database, DesignRouteKind, DesignRouteRow, DesignRow, DesignVersionRow } from '../../../db/schema.ts';
+import type { Database, DesignRouteKind, DesignRouteRow, DesignRow, DesignVersionRow } from '@db/schema.ts';
 
 export type Db = Kysely<Database> | Transaction<Database>;
 

@@ -4,8 +4,8 @@
 // thumbnail and no figures, and designDerive.ts computes the figures afterwards (the caller asks for it).
 // Drawings travel as validated JSON text (designBody.ts, designPayload.ts), never parsed here.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import {
   findDesignRoute,
   findOwnedDesign,

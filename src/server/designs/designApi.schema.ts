@@ -1,8 +1,8 @@
 // Request shapes for /api/designs/… (zod). Designs themselves go through the shared designSchema, so the
 // server and the workbench refuse the same things (non-finite numbers, far-away points, 1-point lines, caps).
 import { z } from 'zod';
-import { DESIGN_LIMITS, designSchema } from '../../../shared/design/design.schema.ts';
-import { planSettingsSchema } from '../../../shared/route/planSettings.ts';
+import { DESIGN_LIMITS, designSchema } from '@shared/design/design.schema.ts';
+import { planSettingsSchema } from '@shared/route/planSettings.ts';
 import type { BodyLimit } from '../http.ts';
 import { pgInt } from '../inputRules.ts';
 import { isStorableText, UNSTORABLE_MESSAGE } from '../storableText.ts';

@@ -2,13 +2,13 @@
 // one (a design near the 200,000-point cap is ~3 MB) is read as bytes here and parsed and validated by the same
 // schemas in the codec worker, so the request thread never parses it (see designPayload.ts).
 import { z } from 'zod';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { invalidInput, problem, readJson, tooLarge } from '../http.ts';
 import { readBytesCapped } from '../readBody.ts';
 import { acceptParsedBody, BODY_SCHEMAS } from '../engine/designCodec.ts';
 import { runCodec } from '../engine/enginePool.ts';
 import type { AcceptBodyAnswer, BodyShape } from '../engine/engine.types.ts';
-import type { PlanSettings } from '../../../shared/route/planSettings.ts';
+import type { PlanSettings } from '@shared/route/planSettings.ts';
 import { DESIGN_BODY_LIMIT } from './designApi.schema.ts';
 import { engineFailureResponse } from './designHttp.ts';
 import { HEAVY_DESIGN_CHARS } from './designPayload.ts';

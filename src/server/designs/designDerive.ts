@@ -4,7 +4,7 @@
 // rebuilds list thumbnails written before thumbnails had a point budget (in the codec pool). The designs list
 // asks again for rows still pending (e.g. after a server restart), so figures always appear eventually.
 // In memory only: nothing here must survive a restart.
-import type { DesignRow } from '../../../db/schema.ts';
+import type { DesignRow } from '@db/schema.ts';
 import { db } from '../db.ts';
 import { isDatabaseUnavailable } from '../dbOutage.ts';
 import { runCodec, runEngine } from '../engine/enginePool.ts';

@@ -1,8 +1,8 @@
 // Pieces every /api/designs/… endpoint shares: the owner guard (401 anonymous; 404 for a design that is not
 // yours, is deleted, or whose id is not even a uuid), the 409 body, and how engine outcomes become responses.
-import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
-import { assertNever } from '../../../shared/assertNever.ts';
+import type { DesignProblem } from '@shared/graph/designProblem.ts';
+import { err, ok, type Result } from '@shared/result.ts';
+import { assertNever } from '@shared/assertNever.ts';
 import { requireUser, type SignedIn } from '../auth/guards.ts';
 import { db } from '../db.ts';
 import { problem } from '../http.ts';

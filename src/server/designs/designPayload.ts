@@ -1,7 +1,7 @@
 // Design JSON between the database, the workers and the response, as text. A light design is validated on the
 // request thread (a few milliseconds at most); a heavy one (more than HEAVY_DESIGN_CHARS of JSON, up to the
 // 200,000-point cap) goes to the codec worker, so the request thread only moves strings.
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { acceptStored } from '../engine/designCodec.ts';
 import { runCodec } from '../engine/enginePool.ts';
 import type { AcceptStoredAnswer } from '../engine/engine.types.ts';

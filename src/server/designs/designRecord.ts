@@ -3,9 +3,9 @@
 // Figures are different: they are derived data (the engine can always compute them again), so a summary or a
 // saved route that fails its schema is logged and read as absent; one bad row never turns a list into a 500.
 import { z } from 'zod';
-import type { DesignRouteRow, DesignRow } from '../../../db/schema.ts';
+import type { DesignRouteRow, DesignRow } from '@db/schema.ts';
 import type { DesignRecordRow, DesignVersionRecordRow } from './design.repository.ts';
-import type { Design } from '../../../shared/design/design.schema.ts';
+import type { Design } from '@shared/design/design.schema.ts';
 import type { DesignSummary, RouteFigures } from '../engine/engine.types.ts';
 
 const figure = z.number().finite();

@@ -2,10 +2,10 @@
 // (DesignProblem) and the pool's failures (time cap, busy) come back as values the endpoints turn into answers.
 import type { Kysely } from 'kysely';
 import { z } from 'zod';
-import type { Database } from '../../../db/schema.ts';
-import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
-import type { PlanSettings } from '../../../shared/route/planSettings.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import type { DesignProblem } from '@shared/graph/designProblem.ts';
+import type { PlanSettings } from '@shared/route/planSettings.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import type { CheckAnswer, DesignPayload, PlanAnswer } from '../engine/engine.types.ts';
 import { runEngine } from '../engine/enginePool.ts';
 import { summaryOf, threadSummaryOf } from '../engine/engineSummaries.ts';

@@ -3,10 +3,10 @@
 // every other request, so heavy designs go through these functions in a worker (the codec pool, see
 // enginePool.ts) and only text crosses back. Light designs use the same functions on the request thread.
 import type { z } from 'zod';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
-import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
+import { designSchema, type Design } from '@shared/design/design.schema.ts';
+import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
 import { createDesignSchema, draftSchema, planRequestSchema, saveRouteSchema, updateDesignSchema } from '../designs/designApi.schema.ts';
-import { assertNever } from '../../../shared/assertNever.ts';
+import { assertNever } from '@shared/assertNever.ts';
 import type { AcceptBodyAnswer, AcceptStoredAnswer, BodyShape, PlainIssue } from './engine.types.ts';
 
 export const BODY_SCHEMAS = {

@@ -1,17 +1,17 @@
 // What crosses the worker boundary: plain, structured-clonable data only.
 // The main thread validates every design (designSchema) before it sends a task.
-import type { Design } from '../../../shared/design/design.schema.ts';
-import type { DesignSvgOptions } from '../../../shared/export/designSvg.ts';
-import type { Point } from '../../../shared/geometry/point.ts';
-import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
-import type { GapCheck } from '../../../shared/gap/gapCheck.ts';
-import type { DesignCheck } from '../../../shared/route/checkDesign.ts';
-import type { PlanSettings } from '../../../shared/route/planSettings.ts';
-import type { StopsTableRow } from '../../../shared/route/stopsTable.ts';
-import type { ThreadEnd } from '../../../shared/route/threadEnds.ts';
-import type { RouteCheck } from '../../../shared/route/checkRoute.ts';
-import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
-import type { Stroke } from '../../../shared/route/routeStrokes.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { DesignSvgOptions } from '@shared/export/designSvg.ts';
+import type { Point } from '@shared/geometry/point.ts';
+import type { DesignProblem } from '@shared/graph/designProblem.ts';
+import type { GapCheck } from '@shared/gap/gapCheck.ts';
+import type { DesignCheck } from '@shared/route/checkDesign.ts';
+import type { PlanSettings } from '@shared/route/planSettings.ts';
+import type { StopsTableRow } from '@shared/route/stopsTable.ts';
+import type { ThreadEnd } from '@shared/route/threadEnds.ts';
+import type { RouteCheck } from '@shared/route/checkRoute.ts';
+import type { ThreadBudget } from '@shared/route/threadBudget.ts';
+import type { Stroke } from '@shared/route/routeStrokes.ts';
 
 /** A design for the engine: parsed and validated by the caller, or JSON text the worker parses and validates
  * itself (designSchema), so a heavy design is never parsed on the request thread. */

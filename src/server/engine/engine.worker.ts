@@ -4,7 +4,7 @@
 // `ok: false` with its stack, and the worker stays up for the next task. Bundled to dist/engine/engine.worker.mjs
 // by scripts/lib/engineWorker.mjs (which copies highs.wasm beside the bundle).
 import { parentPort } from 'node:worker_threads';
-import { loadHighsSolver } from '../../../shared/route/exact/highsSolver.ts';
+import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
 import type { WorkerReply } from './workerPool.ts';
 import type { EngineTask } from './engine.types.ts';
 import { runEngineTask, type EngineContext } from './engineTasks.ts';

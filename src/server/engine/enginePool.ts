@@ -4,7 +4,7 @@
 // the scripts start the server with cwd = repo root). `astro dev`: the TypeScript worker through tsx.
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
-import type { Result } from '../../../shared/result.ts';
+import type { Result } from '@shared/result.ts';
 import type { EngineAnswers, EngineTask } from './engine.types.ts';
 import { WorkerPool, type JobOptions, type PoolFailure } from './workerPool.ts';
 

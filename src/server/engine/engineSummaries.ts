@@ -1,5 +1,5 @@
 // Figures cut from the planner's answer, for the designs table and saved routes (no strokes, no graph).
-import type { ThreadBudget } from '../../../shared/route/threadBudget.ts';
+import type { ThreadBudget } from '@shared/route/threadBudget.ts';
 import type { DesignSummary, PlanFigures } from './engine.types.ts';
 
 /** The route figures of a plan (any object carrying them, e.g. DesignPlan or PlanAnswer). */

@@ -1,13 +1,13 @@
 // The engine work a worker does for one task: calls into shared/ and trims the answer to what the API
 // sends (no planar graph, no per-step timings). Runs inside the worker thread; also callable directly.
-import { checkGap } from '../../../shared/gap/gapCheck.ts';
-import { checkDesign } from '../../../shared/route/checkDesign.ts';
-import { checkRoute } from '../../../shared/route/checkRoute.ts';
-import type { MipSolver } from '../../../shared/route/exact/mipSolver.ts';
-import { planDesign, type DesignPlanOptions } from '../../../shared/route/planDesign.ts';
-import { assertNever } from '../../../shared/assertNever.ts';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
-import { buildDesignSvg } from '../../../shared/export/designSvg.ts';
+import { checkGap } from '@shared/gap/gapCheck.ts';
+import { checkDesign } from '@shared/route/checkDesign.ts';
+import { checkRoute } from '@shared/route/checkRoute.ts';
+import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import { planDesign, type DesignPlanOptions } from '@shared/route/planDesign.ts';
+import { assertNever } from '@shared/assertNever.ts';
+import { designSchema, type Design } from '@shared/design/design.schema.ts';
+import { buildDesignSvg } from '@shared/export/designSvg.ts';
 import type { DesignPayload, EngineAnswers, EngineTask } from './engine.types.ts';
 import { acceptBody, acceptStored, parseDesignText, plainIssues } from './designCodec.ts';
 import { figuresOf, summaryOf } from './engineSummaries.ts';

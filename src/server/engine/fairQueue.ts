@@ -3,7 +3,7 @@
 // hundred plans waits behind its own jobs, not in front of everyone else's. Two lanes: `interactive` (a
 // person waits for the answer: checks, plans) before `background` (figures for the designs table).
 // Pure bookkeeping, no timers or workers: workerPool.ts decides when to take a job and where it runs.
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 
 export type Lane = 'interactive' | 'background';
 

@@ -3,13 +3,13 @@
 // the route check; kinds from the traced pieces: a quilting edge is `stitch` the first time and `retrace` after,
 // seams are `ditch`, the outline is `edge`. A run on no design line is drawn as `stitch` (the route check's
 // warnings and figures say whether it counts as edge travel in the binding band or as off-line stitching).
-import type { Design } from '../../../shared/design/design.schema.ts';
-import type { Point } from '../../../shared/geometry/point.ts';
-import type { DesignProblem } from '../../../shared/graph/designProblem.ts';
-import { traceRoute } from '../../../shared/graph/traceRoute.ts';
-import { ok, type Result } from '../../../shared/result.ts';
-import type { RouteCheck } from '../../../shared/route/checkRoute.ts';
-import type { StrokeKind } from '../../../shared/route/routeStrokes.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point } from '@shared/geometry/point.ts';
+import type { DesignProblem } from '@shared/graph/designProblem.ts';
+import { traceRoute } from '@shared/graph/traceRoute.ts';
+import { ok, type Result } from '@shared/result.ts';
+import type { RouteCheck } from '@shared/route/checkRoute.ts';
+import type { StrokeKind } from '@shared/route/routeStrokes.ts';
 import type { RouteStroke } from './engine.types.ts';
 
 export function buildOwnRouteStrokes(design: Design, check: RouteCheck): Result<RouteStroke[], DesignProblem> {

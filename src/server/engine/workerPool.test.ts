@@ -1,6 +1,6 @@
 import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
-import { designSchema } from '../../../shared/design/design.schema.ts';
+import { designSchema } from '@shared/design/design.schema.ts';
 import type { EngineAnswers, EngineTask } from './engine.types.ts';
 import { engineWorkerLocation } from './enginePool.ts';
 import { WorkerPool } from './workerPool.ts';

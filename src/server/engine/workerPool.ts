@@ -5,7 +5,7 @@
 // Fairness: jobs carry a key (the account); waiting jobs are served round-robin between keys (fairQueue.ts),
 // one key may hold only so many jobs waiting and so many workers, and a job that waits too long gives up.
 import { Worker } from 'node:worker_threads';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { FairQueue, type Lane } from './fairQueue.ts';
 
 export interface WorkerPoolOptions {

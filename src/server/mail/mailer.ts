@@ -5,7 +5,7 @@
 import nodemailer from 'nodemailer';
 import { MAIL_FROM, SMTP_HOST, SMTP_PORT } from 'astro:env/server';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 
 export interface OutgoingEmail {
   to: string;

@@ -5,7 +5,7 @@
 // first address that is not a trusted proxy is the client (RFC 7239 section 7.4 describes the same reading for
 // the Forwarded header).
 import { BlockList, isIP } from 'node:net';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 
 export interface ProxyTrust {
   readonly trusts: (address: string) => boolean;

@@ -4,7 +4,7 @@
 // of them rows still name, and removes the others once they are older than the grace period (so an upload in
 // progress, whose row is moments away, is never touched).
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import type { StoredObject } from '../storage/objectStore.ts';
 
 /** An upload writes its objects and its row within seconds; a quarter of an hour is far beyond any in progress. */

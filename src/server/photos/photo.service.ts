@@ -2,7 +2,7 @@
 // Objects are written before the row; if the row insert fails the objects are removed again.
 import { randomUUID } from 'node:crypto';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { deleteObject, putObject } from '../storage/objectStore.ts';
 import type { ProcessedPhoto } from './photoImage.ts';
 

@@ -1,7 +1,7 @@
 // Removing stored photo objects before the rows go (a class or lesson delete cascades to lesson_photo, which
 // would otherwise leave the objects behind in the bucket).
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { deleteObject } from '../storage/objectStore.ts';
 
 export async function deletePhotoObjectsOf(db: Kysely<Database>, scope: { lessonId: string } | { classId: string }): Promise<void> {

@@ -4,7 +4,7 @@
 // Every accepted photo is decoded and re-encoded as JPEG: EXIF (GPS, camera, time), XMP and ICC data are dropped
 // (sharp writes no metadata unless asked), after turning the pixels upright by the EXIF orientation.
 import sharp, { type Metadata } from 'sharp';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 
 /** 15 MB: a phone photo is 2–8 MB; anything larger is refused before it is decoded. */
 export const MAX_UPLOAD_BYTES = 15 * 1024 * 1024;

@@ -5,7 +5,7 @@
 //   a planned route's figures are exactly that, an own order's are not, so those are computed by the engine;
 // - design_route holds the route itself, kept with its kind ('own' when the figures carry no proof status).
 // Anything that does not fit the stored shapes is left out rather than written half-valid.
-import type { DesignRouteKind } from '../../../db/schema.ts';
+import type { DesignRouteKind } from '@db/schema.ts';
 import type { DesignSummary } from '../engine/engine.types.ts';
 import { designSummarySchema, savedRouteStrokesSchema, savedRouteSummarySchema, type SavedRouteSummary } from '../designs/designRecord.ts';
 

@@ -1,10 +1,10 @@
 // The bridge to the workbench's tables (design, design_version, design_route): reading a teacher's design with
 // its saved route to publish it, and writing a copy of a template version into a quilter's designs.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { designSchema, type Design } from '../../../shared/design/design.schema.ts';
-import { buildDesignThumbnailSvg } from '../../../shared/export/designSvg.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { designSchema, type Design } from '@shared/design/design.schema.ts';
+import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import type { TemplateVersionRow } from './template.repository.ts';
 import { routeFiguresSchema, routeStrokesSchema, type RouteFigures, type RouteStroke } from './routeSnapshot.schema.ts';
 import { copiedDesignSummary, copiedRoute } from './copiedFigures.ts';

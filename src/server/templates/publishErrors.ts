@@ -1,5 +1,5 @@
 // HTTP answers for the expected ways publishing can fail.
-import { assertNever } from '../../../shared/assertNever.ts';
+import { assertNever } from '@shared/assertNever.ts';
 import { problem } from '../http.ts';
 import type { PublishError } from './template.service.ts';
 

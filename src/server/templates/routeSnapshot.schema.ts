@@ -2,7 +2,7 @@
 // routeStrokes.ts); the figures are the route check summary the design endpoints stored with the route.
 // Both are parsed when read from jsonb, and unknown figure keys are kept (the summary may grow).
 import { z } from 'zod';
-import { pointSchema } from '../../../shared/design/design.schema.ts';
+import { pointSchema } from '@shared/design/design.schema.ts';
 
 export const strokeSchema = z.object({
   pass: z.number().int().min(0),

@@ -1,7 +1,7 @@
 // Queries on template and template_version. A template row carries who owns it and who may see it; every
 // published version is a separate, immutable row (a database trigger refuses updates).
 import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
-import type { Database, Difficulty, TemplateTable, TemplateVersionTable, TemplateVisibility, UnitsPreference } from '../../../db/schema.ts';
+import type { Database, Difficulty, TemplateTable, TemplateVersionTable, TemplateVisibility, UnitsPreference } from '@db/schema.ts';
 import { SIZE_BUCKETS, type GalleryQuery } from './template.schema.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;

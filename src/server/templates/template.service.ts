@@ -2,8 +2,8 @@
 // and leaves older versions untouched (lessons and copies keep pointing at the version they used).
 import { encodeBase32LowerCaseNoPadding } from '@oslojs/encoding';
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
-import { err, ok, type Result } from '../../../shared/result.ts';
+import type { Database } from '@db/schema.ts';
+import { err, ok, type Result } from '@shared/result.ts';
 import { loadPublishableDesign, type DesignSourceError } from './designSource.ts';
 import { insertTemplate, insertVersion, lockTemplate, findVersion, type TemplateRow, type TemplateVersionRow, type VersionContent } from './template.repository.ts';
 import type { newVersionSchema, publishTemplateSchema } from './template.schema.ts';

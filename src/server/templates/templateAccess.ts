@@ -2,7 +2,7 @@
 // only through its link token; a class-only one the students of a class with a released lesson that uses it
 // (the same rule also opens unlisted templates to those students, since their teacher chose it for them).
 import { sql, type Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
 import type { TemplateRow } from './template.repository.ts';

@@ -1,7 +1,7 @@
 // The one template read used by the API and the pages: visibility checked, latest (or a chosen) version,
 // the version list, and the share link for those who may edit.
 import type { Kysely } from 'kysely';
-import type { Database } from '../../../db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import type { SessionUser } from '../auth/session.ts';
 import { isUuid } from '../classes/classAccess.ts';
 import { findTemplate, findTemplateByLink, findTemplateCard, findVersion, listVersionNumbers, type TemplateRow } from './template.repository.ts';

@@ -3,7 +3,7 @@
 // tests/helpers/guardedRoutes.ts (the role-guard list) must agree with the rows. Refusals never carry the thing's
 // data, and nothing answers 500.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Role } from '../../../db/schema.ts';
+import type { Role } from '@db/schema.ts';
 import { closeTestDb } from '../../helpers/db.ts';
 import { guardedRoutes } from '../../helpers/guardedRoutes.ts';
 import { matrixExemptions, matrixRows, type Answer } from './accessMatrix.ts';

@@ -3,7 +3,7 @@
 // copy wrote the own order's figures (no lower bound, `optimal: null`) as the design's planner summary, and both
 // GET /api/designs and GET /api/designs/:id answered 500 for the quilter.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { up as repairCopiedSummaries } from '../../../db/migrations/2026_12_04_0900_repair_copied_design_summaries.ts';
+import { up as repairCopiedSummaries } from '@db/migrations/2026_12_04_0900_repair_copied_design_summaries.ts';
 import { createAccount, type TestAccount } from '../../helpers/accounts.ts';
 import { closeTestDb, testDb } from '../../helpers/db.ts';
 import { waitForFigures } from '../../helpers/designFigures.ts';

@@ -1,6 +1,6 @@
 import { Group, Layer, Rect, Shape } from 'react-konva';
-import type { Design } from '../../../../shared/design/design.schema.ts';
-import { bindingBandOf } from '../../../../shared/design/design.schema.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import { bindingBandOf } from '@shared/design/design.schema.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { visibleWorld } from '../viewport.ts';

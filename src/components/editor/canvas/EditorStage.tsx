@@ -1,8 +1,8 @@
 import type Konva from 'konva';
 import { useRef } from 'react';
 import { Stage } from 'react-konva';
-import type { Point } from '../../../../shared/geometry/point.ts';
-import type { Units } from '../../../../shared/design/design.schema.ts';
+import type { Point } from '@shared/geometry/point.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 import { panBy, pinchViewport, toWorld, zoomAt, type Viewport } from '../viewport.ts';
 
 /** A pointer event on the canvas, already in design units; tools consume these. */

@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import type Konva from 'konva';
 import { Image } from 'react-konva';
-import type { Point, Polyline } from '../../../../shared/geometry/point.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
 import type { Viewport } from '../viewport.ts';
 
 /** Lines drawn alike: one colour and width (CSS px). */

@@ -1,6 +1,6 @@
 import { Circle, Group, Layer, Line, Shape } from 'react-konva';
-import type { Point, Polyline } from '../../../../shared/geometry/point.ts';
-import type { Guide } from '../../../../shared/editor/guides.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
+import type { Guide } from '@shared/editor/guides.ts';
 import type { GapView } from '../../route/routeCheckView.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';

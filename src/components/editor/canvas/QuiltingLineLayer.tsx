@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { Circle, Group, Layer, RegularPolygon, Shape, Text } from 'react-konva';
-import type { Point, Polyline } from '../../../../shared/geometry/point.ts';
+import type { Point, Polyline } from '@shared/geometry/point.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';

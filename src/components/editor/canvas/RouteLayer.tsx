@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { Circle, Group, Layer, Label, Shape, Tag, Text } from 'react-konva';
-import type { StrokeKind } from '../../../../shared/route/routeStrokes.ts';
+import type { StrokeKind } from '@shared/route/routeStrokes.ts';
 import { arrowMarks, passStarts, type NeedlePosition, type RouteStroke } from '../../route/routePlayback.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';

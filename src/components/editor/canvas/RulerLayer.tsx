@@ -1,5 +1,5 @@
 import { Layer, Shape } from 'react-konva';
-import type { Units } from '../../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import { buildRulerTicks } from '../rulerTicks.ts';
 import { RULER_PX, toScreen, toWorld, type Viewport } from '../viewport.ts';

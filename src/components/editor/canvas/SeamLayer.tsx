@@ -1,6 +1,6 @@
 import { Group, Layer, Line, Shape } from 'react-konva';
-import type { Polyline } from '../../../../shared/geometry/point.ts';
-import type { Patch } from '../../../../shared/layouts/patch.ts';
+import type { Polyline } from '@shared/geometry/point.ts';
+import type { Patch } from '@shared/layouts/patch.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';

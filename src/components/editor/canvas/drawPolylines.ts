@@ -1,5 +1,5 @@
 import type { Context } from 'konva/lib/Context';
-import type { Polyline } from '../../../../shared/geometry/point.ts';
+import type { Polyline } from '@shared/geometry/point.ts';
 
 /** Adds each polyline as a sub-path of the current path (one stroke call draws them all: thousands of lines stay cheap). */
 export function tracePolylines(ctx: Context, lines: readonly Polyline[]): void {

@@ -1,6 +1,6 @@
-import type { DesignCommand, LineTarget } from '../../../../shared/design/commands.ts';
-import type { Design } from '../../../../shared/design/design.schema.ts';
-import type { Point } from '../../../../shared/geometry/point.ts';
+import type { DesignCommand, LineTarget } from '@shared/design/commands.ts';
+import type { Design } from '@shared/design/design.schema.ts';
+import type { Point } from '@shared/geometry/point.ts';
 import { buildPlayback, needleAt } from '../../route/routePlayback.ts';
 
 /** Ends closer than this (design units) count as shared when joining: 1/64 in or 0.04 cm. */

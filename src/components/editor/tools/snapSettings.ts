@@ -1,4 +1,4 @@
-import type { Units } from '../../../../shared/design/design.schema.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 
 /** Snap radius on screen: points within this many CSS px of a target jump to it. */
 export const SNAP_RADIUS_PX = 10;

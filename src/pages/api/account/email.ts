@@ -1,14 +1,14 @@
 // PUT /api/account/email — change the sign-in e-mail (current password required). A notice goes to
 // the old address, so a hijacked session cannot quietly move the account.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { emailChangeSchema } from '../../../server/accounts/account.schema.ts';
-import { changeEmail } from '../../../server/accounts/account.service.ts';
-import { toAccountJson } from '../../../server/accounts/accountJson.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { sendEmail } from '../../../server/mail/mailer.ts';
-import { emailChangedNotice } from '../../../server/mail/accountEmails.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { emailChangeSchema } from '@server/accounts/account.schema.ts';
+import { changeEmail } from '@server/accounts/account.service.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { sendEmail } from '@server/mail/mailer.ts';
+import { emailChangedNotice } from '@server/mail/accountEmails.ts';
 
 export const PUT = (async ({ locals, request }) => {
   const signedIn = requireUser(locals);

@@ -1,12 +1,12 @@
 // /api/account — GET: the signed-in account; PATCH: change display name and/or units preference.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { profileUpdateSchema } from '../../../server/accounts/account.schema.ts';
-import { findAccountRowById, rowToAccount } from '../../../server/accounts/account.repository.ts';
-import { updateProfile } from '../../../server/accounts/account.service.ts';
-import { toAccountJson } from '../../../server/accounts/accountJson.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { profileUpdateSchema } from '@server/accounts/account.schema.ts';
+import { findAccountRowById, rowToAccount } from '@server/accounts/account.repository.ts';
+import { updateProfile } from '@server/accounts/account.service.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { requireUser } from '@server/auth/guards.ts';
 
 export const GET = (async ({ locals }) => {
   const signedIn = requireUser(locals);

@@ -1,12 +1,12 @@
 // PUT /api/account/password — change the password (current one required); every reset link and every other
 // session end, and this browser stays a known device (see src/server/auth/knownDevice.ts).
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { passwordChangeSchema } from '../../../server/accounts/account.schema.ts';
-import { changePassword } from '../../../server/accounts/account.service.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { rememberThisDevice } from '../../../server/auth/deviceCookie.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { passwordChangeSchema } from '@server/accounts/account.schema.ts';
+import { changePassword } from '@server/accounts/account.service.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { rememberThisDevice } from '@server/auth/deviceCookie.ts';
 
 export const PUT = (async ({ locals, request, cookies, url }) => {
   const signedIn = requireUser(locals);

@@ -2,14 +2,14 @@
 // quilter), signs it in and remembers the browser as a known device → 201 { account }. The link works once.
 import type { APIRoute } from 'astro';
 import { z } from 'zod';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { resetTokenSchema } from '../../../server/accounts/account.schema.ts';
-import { toAccountJson } from '../../../server/accounts/accountJson.ts';
-import { confirmSignUp, type ConfirmProblem } from '../../../server/accounts/signUpRequest.ts';
-import { rememberThisDevice } from '../../../server/auth/deviceCookie.ts';
-import { createSession, generateSessionToken, setSessionCookie } from '../../../server/auth/session.ts';
-import { assertNever } from '../../../../shared/assertNever.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { resetTokenSchema } from '@server/accounts/account.schema.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { confirmSignUp, type ConfirmProblem } from '@server/accounts/signUpRequest.ts';
+import { rememberThisDevice } from '@server/auth/deviceCookie.ts';
+import { createSession, generateSessionToken, setSessionCookie } from '@server/auth/session.ts';
+import { assertNever } from '@shared/assertNever.ts';
 
 const confirmSchema = z.strictObject({ token: resetTokenSchema });
 

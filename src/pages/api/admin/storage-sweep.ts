@@ -2,9 +2,9 @@
 // upload that a crash interrupted) → { checked, removed, failed }. The server also does this by itself at start and
 // every hour (src/server/photos/orphanSchedule.ts); objects younger than 15 minutes are always kept.
 import type { APIRoute } from 'astro';
-import { json } from '../../../server/http.ts';
-import { requireRole } from '../../../server/auth/guards.ts';
-import { sweepOrphanPhotosNow } from '../../../server/photos/orphanSchedule.ts';
+import { json } from '@server/http.ts';
+import { requireRole } from '@server/auth/guards.ts';
+import { sweepOrphanPhotosNow } from '@server/photos/orphanSchedule.ts';
 
 export const POST = (async ({ locals }) => {
   const admin = requireRole(locals, 'admin');

@@ -1,15 +1,15 @@
 // /api/classes/:id — GET: the class and its lessons (students: released lessons only, no join code);
 // PATCH: change title, description, start date or price (teacher, admin); DELETE: remove the class (teacher, admin).
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { findClassAccess, isManager } from '../../../server/classes/classAccess.ts';
-import { findClassRow, listLessons } from '../../../server/classes/class.repository.ts';
-import { toClassJson, toLessonJson } from '../../../server/classes/classJson.ts';
-import { updateClassSchema } from '../../../server/classes/class.schema.ts';
-import { updateClass } from '../../../server/classes/class.service.ts';
-import { deletePhotoObjectsOf } from '../../../server/photos/photoCleanup.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
+import { findClassRow, listLessons } from '@server/classes/class.repository.ts';
+import { toClassJson, toLessonJson } from '@server/classes/classJson.ts';
+import { updateClassSchema } from '@server/classes/class.schema.ts';
+import { updateClass } from '@server/classes/class.service.ts';
+import { deletePhotoObjectsOf } from '@server/photos/photoCleanup.ts';
 
 const notFound = () => problem(404, 'not_found', 'Not found.');
 

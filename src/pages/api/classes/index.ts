@@ -1,13 +1,13 @@
 // /api/classes — GET: my classes { teaching, enrolled } (teaching: only while the account is a teacher); POST: a
 // teacher creates a class → 201 { class }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, readJson } from '../../../server/http.ts';
-import { hasRole, requireRole, requireUser } from '../../../server/auth/guards.ts';
-import { createClassSchema } from '../../../server/classes/class.schema.ts';
-import { createClass } from '../../../server/classes/class.service.ts';
-import { findClassRow, listClassesFor } from '../../../server/classes/class.repository.ts';
-import { toClassJson } from '../../../server/classes/classJson.ts';
+import { db } from '@server/db.ts';
+import { json, readJson } from '@server/http.ts';
+import { hasRole, requireRole, requireUser } from '@server/auth/guards.ts';
+import { createClassSchema } from '@server/classes/class.schema.ts';
+import { createClass } from '@server/classes/class.service.ts';
+import { findClassRow, listClassesFor } from '@server/classes/class.repository.ts';
+import { toClassJson } from '@server/classes/classJson.ts';
 
 export const GET = (async ({ locals }) => {
   const signedIn = requireUser(locals);

@@ -2,13 +2,13 @@
 // Wrong codes are rate-limited per account (the code space is large, but guessing must stay slow). The attempt is
 // reserved before the lookup and given back when the code was right, so a parallel burst cannot pass the cap.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { releaseAttempt, reserveAttempt, type GateRule } from '../../../server/auth/attemptGate.ts';
-import { rateLimitedResponse } from '../../../server/auth/rateLimitResponse.ts';
-import { joinSchema } from '../../../server/classes/class.schema.ts';
-import { joinByCode } from '../../../server/classes/class.service.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { releaseAttempt, reserveAttempt, type GateRule } from '@server/auth/attemptGate.ts';
+import { rateLimitedResponse } from '@server/auth/rateLimitResponse.ts';
+import { joinSchema } from '@server/classes/class.schema.ts';
+import { joinByCode } from '@server/classes/class.service.ts';
 
 /** 20 wrong join codes per hour per account. */
 const JOIN_RULE: GateRule = { limit: 20, windowMs: 60 * 60 * 1000 };

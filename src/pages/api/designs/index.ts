@@ -2,16 +2,16 @@
 // POST /api/designs { title, notes?, design } — create; 201 { design }. Returns at once: the figures
 //   (`summary`) follow when the route engine has them (`summaryPending` until then; the list shows them).
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { invalidInput, json } from '../../../server/http.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { createDesign, drawingOf } from '../../../server/designs/design.service.ts';
-import { listQuerySchema } from '../../../server/designs/designApi.schema.ts';
-import { readDesignBody } from '../../../server/designs/designBody.ts';
-import { requestDesignDerive } from '../../../server/designs/designDerive.ts';
-import { designResponse } from '../../../server/designs/designHttp.ts';
-import { listOwnedDesigns } from '../../../server/designs/designList.repository.ts';
-import { storedSummary } from '../../../server/designs/designRecord.ts';
+import { db } from '@server/db.ts';
+import { invalidInput, json } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { createDesign, drawingOf } from '@server/designs/design.service.ts';
+import { listQuerySchema } from '@server/designs/designApi.schema.ts';
+import { readDesignBody } from '@server/designs/designBody.ts';
+import { requestDesignDerive } from '@server/designs/designDerive.ts';
+import { designResponse } from '@server/designs/designHttp.ts';
+import { listOwnedDesigns } from '@server/designs/designList.repository.ts';
+import { storedSummary } from '@server/designs/designRecord.ts';
 
 export const GET = (async ({ locals, url }) => {
   const signedIn = requireUser(locals);

@@ -2,18 +2,18 @@
 // route strokes and figures, and the signed-in student's progress); students only once it is released.
 // PATCH { title?, releaseAt?, notes?, templateVersionId? } and DELETE: the class's teacher and admins.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { findLessonAccess, isManager } from '../../../server/classes/classAccess.ts';
-import { findLessonRow } from '../../../server/classes/class.repository.ts';
-import { toLessonJson } from '../../../server/classes/classJson.ts';
-import { updateLessonSchema } from '../../../server/classes/class.schema.ts';
-import { canUseTemplateVersion, updateLesson } from '../../../server/classes/class.service.ts';
-import { readProgress } from '../../../server/classes/progress.ts';
-import { findVersionById } from '../../../server/templates/template.repository.ts';
-import { toVersionJson } from '../../../server/templates/templateJson.ts';
-import { deletePhotoObjectsOf } from '../../../server/photos/photoCleanup.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findLessonAccess, isManager } from '@server/classes/classAccess.ts';
+import { findLessonRow } from '@server/classes/class.repository.ts';
+import { toLessonJson } from '@server/classes/classJson.ts';
+import { updateLessonSchema } from '@server/classes/class.schema.ts';
+import { canUseTemplateVersion, updateLesson } from '@server/classes/class.service.ts';
+import { readProgress } from '@server/classes/progress.ts';
+import { findVersionById } from '@server/templates/template.repository.ts';
+import { toVersionJson } from '@server/templates/templateJson.ts';
+import { deletePhotoObjectsOf } from '@server/photos/photoCleanup.ts';
 
 const notFound = () => problem(404, 'not_found', 'Not found.');
 

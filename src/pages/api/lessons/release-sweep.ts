@@ -3,10 +3,10 @@
 // never sends an e-mail twice.
 import type { APIRoute } from 'astro';
 import { PUBLIC_ORIGIN } from 'astro:env/server';
-import { db } from '../../../server/db.ts';
-import { json } from '../../../server/http.ts';
-import { requireRole } from '../../../server/auth/guards.ts';
-import { sweepLessonReleases } from '../../../server/classes/releaseSweep.ts';
+import { db } from '@server/db.ts';
+import { json } from '@server/http.ts';
+import { requireRole } from '@server/auth/guards.ts';
+import { sweepLessonReleases } from '@server/classes/releaseSweep.ts';
 
 export const POST = (async ({ locals, url }) => {
   const signedIn = requireRole(locals, 'admin');

@@ -3,13 +3,13 @@
 // that used the link becomes a known device of the account (it proved the mailbox; see knownDevice.ts), which
 // is the way back in when strangers have slowed sign-ins to the account down.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { resetConfirmSchema } from '../../../server/accounts/account.schema.ts';
-import { hashPassword } from '../../../server/auth/password.ts';
-import { rememberThisDevice } from '../../../server/auth/deviceCookie.ts';
-import { consumePasswordReset, type ResetTokenError } from '../../../server/auth/passwordReset.ts';
-import { assertNever } from '../../../../shared/assertNever.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { resetConfirmSchema } from '@server/accounts/account.schema.ts';
+import { hashPassword } from '@server/auth/password.ts';
+import { rememberThisDevice } from '@server/auth/deviceCookie.ts';
+import { consumePasswordReset, type ResetTokenError } from '@server/auth/passwordReset.ts';
+import { assertNever } from '@shared/assertNever.ts';
 
 function tokenMessage(e: ResetTokenError): string {
   switch (e) {

@@ -3,17 +3,17 @@
 // (authLimits.ts), reserved before anything is sent, so rotating X-Forwarded-For or a parallel burst gains nothing.
 import type { APIRoute } from 'astro';
 import { PUBLIC_ORIGIN } from 'astro:env/server';
-import { db } from '../../../server/db.ts';
-import { json, readJson } from '../../../server/http.ts';
-import { resetRequestSchema } from '../../../server/accounts/account.schema.ts';
-import { findAccountRowByEmail } from '../../../server/accounts/account.repository.ts';
-import { RESET_VALID_MINUTES, createPasswordReset } from '../../../server/auth/passwordReset.ts';
-import { reserveAll } from '../../../server/auth/attemptGate.ts';
-import { resetGates } from '../../../server/auth/authLimits.ts';
-import { rateLimitedResponse } from '../../../server/auth/rateLimitResponse.ts';
-import { clientIp } from '../../../server/clientIp.ts';
-import { sendEmail } from '../../../server/mail/mailer.ts';
-import { passwordResetEmail } from '../../../server/mail/accountEmails.ts';
+import { db } from '@server/db.ts';
+import { json, readJson } from '@server/http.ts';
+import { resetRequestSchema } from '@server/accounts/account.schema.ts';
+import { findAccountRowByEmail } from '@server/accounts/account.repository.ts';
+import { RESET_VALID_MINUTES, createPasswordReset } from '@server/auth/passwordReset.ts';
+import { reserveAll } from '@server/auth/attemptGate.ts';
+import { resetGates } from '@server/auth/authLimits.ts';
+import { rateLimitedResponse } from '@server/auth/rateLimitResponse.ts';
+import { clientIp } from '@server/clientIp.ts';
+import { sendEmail } from '@server/mail/mailer.ts';
+import { passwordResetEmail } from '@server/mail/accountEmails.ts';
 
 export const POST = (async (context) => {
   const body = await readJson(context.request, resetRequestSchema);

@@ -1,13 +1,13 @@
 // /api/photos/:id — GET (?size=thumb): the photo's bytes, proxied from the object store, only to the student who
 // uploaded it, the class's teacher and admins (everyone else: 404). DELETE: the student or the teacher/admin.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { problem } from '../../../server/http.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import type { SessionUser } from '../../../server/auth/session.ts';
-import { findClassAccess, isManager, isUuid } from '../../../server/classes/classAccess.ts';
-import { deletePhoto, findPhotoRow } from '../../../server/photos/photo.service.ts';
-import { getObject } from '../../../server/storage/objectStore.ts';
+import { db } from '@server/db.ts';
+import { problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import type { SessionUser } from '@server/auth/session.ts';
+import { findClassAccess, isManager, isUuid } from '@server/classes/classAccess.ts';
+import { deletePhoto, findPhotoRow } from '@server/photos/photo.service.ts';
+import { getObject } from '@server/storage/objectStore.ts';
 
 async function findVisiblePhoto(user: SessionUser, id: string | undefined) {
   if (!isUuid(id)) return null;

@@ -1,16 +1,16 @@
 // /api/templates/:id — GET: the latest version with the version list (visibility rules in templateAccess.ts);
 // PUT: publish a new version (owner or admin): fields left out are kept; `designId` re-takes the drawing and route.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { json, problem, readJson } from '../../../server/http.ts';
-import { requireUser } from '../../../server/auth/guards.ts';
-import { isUuid } from '../../../server/classes/classAccess.ts';
-import { findTemplate } from '../../../server/templates/template.repository.ts';
-import { newVersionSchema } from '../../../server/templates/template.schema.ts';
-import { publishNewVersion } from '../../../server/templates/template.service.ts';
-import { canEditTemplate } from '../../../server/templates/templateAccess.ts';
-import { readTemplateDetail } from '../../../server/templates/templateDetail.ts';
-import { publishErrorResponse } from '../../../server/templates/publishErrors.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { isUuid } from '@server/classes/classAccess.ts';
+import { findTemplate } from '@server/templates/template.repository.ts';
+import { newVersionSchema } from '@server/templates/template.schema.ts';
+import { publishNewVersion } from '@server/templates/template.service.ts';
+import { canEditTemplate } from '@server/templates/templateAccess.ts';
+import { readTemplateDetail } from '@server/templates/templateDetail.ts';
+import { publishErrorResponse } from '@server/templates/publishErrors.ts';
 
 export const GET = (async ({ locals, params }) => {
   const detail = await readTemplateDetail(db, locals.user, { by: 'id', id: params['id'] });

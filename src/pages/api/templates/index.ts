@@ -1,15 +1,15 @@
 // /api/templates — GET: the public gallery (anyone; ?q, motif, difficulty, size=small|medium|large, page);
 // POST: a teacher publishes one of their designs (with its saved route) as a template → 201.
 import type { APIRoute } from 'astro';
-import { db } from '../../../server/db.ts';
-import { invalidInput, json, readJson } from '../../../server/http.ts';
-import { requireRole } from '../../../server/auth/guards.ts';
-import { GALLERY_PAGE_SIZE, listGallery } from '../../../server/templates/template.repository.ts';
-import { galleryQuerySchema, publishTemplateSchema } from '../../../server/templates/template.schema.ts';
-import { publishTemplate } from '../../../server/templates/template.service.ts';
-import { publishErrorResponse } from '../../../server/templates/publishErrors.ts';
-import { templateLinkPath, toTemplateCardJson, toVersionJson } from '../../../server/templates/templateJson.ts';
-import { findTemplateCard } from '../../../server/templates/template.repository.ts';
+import { db } from '@server/db.ts';
+import { invalidInput, json, readJson } from '@server/http.ts';
+import { requireRole } from '@server/auth/guards.ts';
+import { GALLERY_PAGE_SIZE, listGallery } from '@server/templates/template.repository.ts';
+import { galleryQuerySchema, publishTemplateSchema } from '@server/templates/template.schema.ts';
+import { publishTemplate } from '@server/templates/template.service.ts';
+import { publishErrorResponse } from '@server/templates/publishErrors.ts';
+import { templateLinkPath, toTemplateCardJson, toVersionJson } from '@server/templates/templateJson.ts';
+import { findTemplateCard } from '@server/templates/template.repository.ts';
 
 export const GET = (async ({ url }) => {
   const query = galleryQuerySchema.safeParse(Object.fromEntries(url.searchParams));

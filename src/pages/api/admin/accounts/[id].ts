@@ -1,11 +1,11 @@
 // PATCH /api/admin/accounts/:id — admins only: change an account's role. The last admin stays an admin.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem, readJson } from '../../../../server/http.ts';
-import { accountIdSchema, roleChangeSchema } from '../../../../server/accounts/account.schema.ts';
-import { setRole } from '../../../../server/accounts/account.service.ts';
-import { toAccountJson } from '../../../../server/accounts/accountJson.ts';
-import { requireRole } from '../../../../server/auth/guards.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { accountIdSchema, roleChangeSchema } from '@server/accounts/account.schema.ts';
+import { setRole } from '@server/accounts/account.service.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { requireRole } from '@server/auth/guards.ts';
 
 export const PATCH = (async ({ locals, request, params }) => {
   const admin = requireRole(locals, 'admin');

@@ -1,11 +1,11 @@
 // GET /api/admin/accounts?q=&page=&pageSize= — admins only: search accounts by e-mail or name, paged.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { invalidInput, json } from '../../../../server/http.ts';
-import { accountListQuerySchema } from '../../../../server/accounts/account.schema.ts';
-import { searchAccounts } from '../../../../server/accounts/account.repository.ts';
-import { toAccountJson } from '../../../../server/accounts/accountJson.ts';
-import { requireRole } from '../../../../server/auth/guards.ts';
+import { db } from '@server/db.ts';
+import { invalidInput, json } from '@server/http.ts';
+import { accountListQuerySchema } from '@server/accounts/account.schema.ts';
+import { searchAccounts } from '@server/accounts/account.repository.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { requireRole } from '@server/auth/guards.ts';
 
 export const GET = (async ({ locals, url }) => {
   const admin = requireRole(locals, 'admin');

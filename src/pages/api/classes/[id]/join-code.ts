@@ -1,10 +1,10 @@
 // /api/classes/:id/join-code — POST: draw a new join code (the old one stops working) → { joinCode }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findClassAccess, isManager } from '../../../../server/classes/classAccess.ts';
-import { regenerateJoinCode } from '../../../../server/classes/class.service.ts';
+import { db } from '@server/db.ts';
+import { json, problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
+import { regenerateJoinCode } from '@server/classes/class.service.ts';
 
 export const POST = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

@@ -1,14 +1,14 @@
 // /api/classes/:id/lessons — GET: the lessons (students: released only); POST: add a dated lesson (teacher, admin)
 // { title, releaseAt, notes (Markdown), templateVersionId } → 201 { lesson }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem, readJson } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findClassAccess, isManager } from '../../../../server/classes/classAccess.ts';
-import { findLessonRow, listLessons } from '../../../../server/classes/class.repository.ts';
-import { toLessonJson } from '../../../../server/classes/classJson.ts';
-import { createLessonSchema } from '../../../../server/classes/class.schema.ts';
-import { canUseTemplateVersion, createLesson } from '../../../../server/classes/class.service.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
+import { findLessonRow, listLessons } from '@server/classes/class.repository.ts';
+import { toLessonJson } from '@server/classes/classJson.ts';
+import { createLessonSchema } from '@server/classes/class.schema.ts';
+import { canUseTemplateVersion, createLesson } from '@server/classes/class.service.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

@@ -1,11 +1,11 @@
 // /api/classes/:id/photos — GET (?lessonId, ?studentId): the photo gallery. The teacher and admins see every
 // student's photos; a student sees only their own.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findClassAccess, isManager, isUuid } from '../../../../server/classes/classAccess.ts';
-import { listPhotos } from '../../../../server/photos/photo.service.ts';
+import { db } from '@server/db.ts';
+import { json, problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager, isUuid } from '@server/classes/classAccess.ts';
+import { listPhotos } from '@server/photos/photo.service.ts';
 
 export const GET = (async ({ locals, params, url }) => {
   const signedIn = requireUser(locals);

@@ -1,10 +1,10 @@
 // /api/classes/:id/roster.csv — GET: the roster as CSV (RFC 4180), downloaded as a file (teacher, admin).
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { problem } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findClassAccess, isManager } from '../../../../server/classes/classAccess.ts';
-import { readRoster, rosterToCsv } from '../../../../server/classes/roster.ts';
+import { db } from '@server/db.ts';
+import { problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
+import { readRoster, rosterToCsv } from '@server/classes/roster.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

@@ -1,10 +1,10 @@
 // /api/classes/:id/roster — GET: per student, lessons finished, current step, last active, photos (teacher, admin).
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findClassAccess, isManager } from '../../../../server/classes/classAccess.ts';
-import { readRoster } from '../../../../server/classes/roster.ts';
+import { db } from '@server/db.ts';
+import { json, problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
+import { readRoster } from '@server/classes/roster.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

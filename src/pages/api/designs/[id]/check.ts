@@ -3,10 +3,10 @@
 // 400 names a line the engine refuses; 422 engine_timeout; 429 rate_limited (this account's queue is full);
 // 503 engine_busy.
 import type { APIRoute } from 'astro';
-import { json } from '../../../../server/http.ts';
-import { readDesignBody } from '../../../../server/designs/designBody.ts';
-import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
-import { checkDesignOnServer, designPayloadOf } from '../../../../server/designs/designRoute.service.ts';
+import { json } from '@server/http.ts';
+import { readDesignBody } from '@server/designs/designBody.ts';
+import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '@server/designs/designHttp.ts';
+import { checkDesignOnServer, designPayloadOf } from '@server/designs/designRoute.service.ts';
 
 export const POST = (async ({ locals, params, request }) => {
   const owned = await requireOwnedDesign(locals, params);

@@ -1,11 +1,11 @@
 // GET /api/designs/:id/export.svg — the design at true size as an SVG file (with the saved route when it was
 // computed for the current version; otherwise the quilting lines, and a remark that the route is out of date).
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { findDesignRoute } from '../../../../server/designs/design.repository.ts';
-import { engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
-import { toSavedRouteJson } from '../../../../server/designs/designRecord.ts';
-import { runCodec } from '../../../../server/engine/enginePool.ts';
+import { db } from '@server/db.ts';
+import { findDesignRoute } from '@server/designs/design.repository.ts';
+import { engineFailureResponse, requireOwnedDesign } from '@server/designs/designHttp.ts';
+import { toSavedRouteJson } from '@server/designs/designRecord.ts';
+import { runCodec } from '@server/engine/enginePool.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);

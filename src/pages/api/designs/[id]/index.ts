@@ -3,12 +3,12 @@
 //   Returns at once; a new drawing's figures follow (`summaryPending`), computed in the background.
 // DELETE /api/designs/:id — soft delete; { design: { id, deletedAt } } (undo: POST …/restore).
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json } from '../../../../server/http.ts';
-import { deleteDesign, drawingOf, updateDesign } from '../../../../server/designs/design.service.ts';
-import { readDesignBody } from '../../../../server/designs/designBody.ts';
-import { requestDesignDerive } from '../../../../server/designs/designDerive.ts';
-import { conflict, designResponse, notFound, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
+import { db } from '@server/db.ts';
+import { json } from '@server/http.ts';
+import { deleteDesign, drawingOf, updateDesign } from '@server/designs/design.service.ts';
+import { readDesignBody } from '@server/designs/designBody.ts';
+import { requestDesignDerive } from '@server/designs/designDerive.ts';
+import { conflict, designResponse, notFound, requireOwnedDesign } from '@server/designs/designHttp.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);

@@ -4,10 +4,10 @@
 // stopsTable, threadEnds, settings, units, route, threadBudget } }.
 // 429 rate_limited when this account already has its share of checks and plans waiting; 503 engine_busy.
 import type { APIRoute } from 'astro';
-import { json } from '../../../../server/http.ts';
-import { readDesignBody } from '../../../../server/designs/designBody.ts';
-import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
-import { designPayloadOf, planDesignOnServer } from '../../../../server/designs/designRoute.service.ts';
+import { json } from '@server/http.ts';
+import { readDesignBody } from '@server/designs/designBody.ts';
+import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '@server/designs/designHttp.ts';
+import { designPayloadOf, planDesignOnServer } from '@server/designs/designRoute.service.ts';
 
 export const POST = (async ({ locals, params, request }) => {
   const owned = await requireOwnedDesign(locals, params);

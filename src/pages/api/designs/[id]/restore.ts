@@ -1,8 +1,8 @@
 // POST /api/designs/:id/restore — undo a delete; { design }. Restoring a design that is not deleted returns it unchanged.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { restoreDesign } from '../../../../server/designs/design.service.ts';
-import { designResponse, notFound, requireDesignId } from '../../../../server/designs/designHttp.ts';
+import { db } from '@server/db.ts';
+import { restoreDesign } from '@server/designs/design.service.ts';
+import { designResponse, notFound, requireDesignId } from '@server/designs/designHttp.ts';
 
 export const POST = (async ({ locals, params }) => {
   const who = requireDesignId(locals, params);

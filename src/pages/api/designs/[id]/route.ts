@@ -4,14 +4,14 @@
 //   The server computes strokes and figures itself. 409 { error, design: current } when designVersion is not current.
 // SavedRoute = { kind, designVersion, current, strokes: [{ pass, kind, points, length }], summary, createdAt, updatedAt }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { invalidInput, json } from '../../../../server/http.ts';
-import { assertNever } from '../../../../../shared/assertNever.ts';
-import { findDesignRoute } from '../../../../server/designs/design.repository.ts';
-import { readDesignBody } from '../../../../server/designs/designBody.ts';
-import { conflict, designProblemResponse, engineFailureResponse, requireOwnedDesign } from '../../../../server/designs/designHttp.ts';
-import { toSavedRouteJson } from '../../../../server/designs/designRecord.ts';
-import { saveOwnRoute, savePlannedRoute } from '../../../../server/designs/designRoute.service.ts';
+import { db } from '@server/db.ts';
+import { invalidInput, json } from '@server/http.ts';
+import { assertNever } from '@shared/assertNever.ts';
+import { findDesignRoute } from '@server/designs/design.repository.ts';
+import { readDesignBody } from '@server/designs/designBody.ts';
+import { conflict, designProblemResponse, engineFailureResponse, requireOwnedDesign } from '@server/designs/designHttp.ts';
+import { toSavedRouteJson } from '@server/designs/designRecord.ts';
+import { saveOwnRoute, savePlannedRoute } from '@server/designs/designRoute.service.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);

@@ -2,18 +2,18 @@
 // the invitation was sent to, sign it in and join the class → 201 { classId, account }. Any other address is
 // refused (sign up on /sign-up, then open the link again). Limited like sign-up (authLimits.ts).
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem, readJson } from '../../../../server/http.ts';
-import { signUpSchema } from '../../../../server/accounts/account.schema.ts';
-import { toAccountJson } from '../../../../server/accounts/accountJson.ts';
-import { reserveAll } from '../../../../server/auth/attemptGate.ts';
-import { signUpGates } from '../../../../server/auth/authLimits.ts';
-import { rememberThisDevice } from '../../../../server/auth/deviceCookie.ts';
-import { rateLimitedResponse } from '../../../../server/auth/rateLimitResponse.ts';
-import { createSession, generateSessionToken, setSessionCookie } from '../../../../server/auth/session.ts';
-import { invitationProblemResponse } from '../../../../server/classes/invitationErrors.ts';
-import { signUpFromInvitation } from '../../../../server/classes/invitationSignUp.ts';
-import { clientIp } from '../../../../server/clientIp.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { signUpSchema } from '@server/accounts/account.schema.ts';
+import { toAccountJson } from '@server/accounts/accountJson.ts';
+import { reserveAll } from '@server/auth/attemptGate.ts';
+import { signUpGates } from '@server/auth/authLimits.ts';
+import { rememberThisDevice } from '@server/auth/deviceCookie.ts';
+import { rateLimitedResponse } from '@server/auth/rateLimitResponse.ts';
+import { createSession, generateSessionToken, setSessionCookie } from '@server/auth/session.ts';
+import { invitationProblemResponse } from '@server/classes/invitationErrors.ts';
+import { signUpFromInvitation } from '@server/classes/invitationSignUp.ts';
+import { clientIp } from '@server/clientIp.ts';
 
 export const POST = (async (context) => {
   const body = await readJson(context.request, signUpSchema);

@@ -2,14 +2,14 @@
 // POST ?side=front|back with the image bytes as the body (any content type; the bytes decide): an enrolled
 // student uploads a photo of their finished block → 201 { photo }. Limits: 15 MB, 50 megapixels, JPEG/PNG/WebP.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findLessonAccess, isManager } from '../../../../server/classes/classAccess.ts';
-import { MAX_UPLOAD_BYTES, photoProblemMessage, processPhoto } from '../../../../server/photos/photoImage.ts';
-import { MAX_PHOTOS_PER_LESSON, countPhotos, listPhotos, storePhoto } from '../../../../server/photos/photo.service.ts';
-import { readBytesCapped } from '../../../../server/readBody.ts';
-import { isPhotoCapViolation, photoCapResponse } from '../../../../server/photos/photoCap.ts';
+import { db } from '@server/db.ts';
+import { json, problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findLessonAccess, isManager } from '@server/classes/classAccess.ts';
+import { MAX_UPLOAD_BYTES, photoProblemMessage, processPhoto } from '@server/photos/photoImage.ts';
+import { MAX_PHOTOS_PER_LESSON, countPhotos, listPhotos, storePhoto } from '@server/photos/photo.service.ts';
+import { readBytesCapped } from '@server/readBody.ts';
+import { isPhotoCapViolation, photoCapResponse } from '@server/photos/photoCap.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

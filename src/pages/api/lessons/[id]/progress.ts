@@ -2,12 +2,12 @@
 // GET → { lessonId, stepIndex, totalSteps, finished, finishedAt, lastActiveAt } (zeros before the first save);
 // PUT { stepIndex, totalSteps, finished? } → the same shape. Teachers previewing a lesson get 404: nothing to save.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem, readJson } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { findLessonAccess } from '../../../../server/classes/classAccess.ts';
-import { progressSchema } from '../../../../server/classes/class.schema.ts';
-import { readProgress, saveProgress } from '../../../../server/classes/progress.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findLessonAccess } from '@server/classes/classAccess.ts';
+import { progressSchema } from '@server/classes/class.schema.ts';
+import { readProgress, saveProgress } from '@server/classes/progress.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

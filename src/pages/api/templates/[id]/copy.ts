@@ -1,14 +1,14 @@
 // /api/templates/:id/copy — POST { version? }: copies that version (default: latest) into the signed-in
 // quilter's own designs, remembering the version it came from → 201 { designId, templateVersionId }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../server/db.ts';
-import { json, problem, readJson } from '../../../../server/http.ts';
-import { requireUser } from '../../../../server/auth/guards.ts';
-import { copySchema } from '../../../../server/templates/template.schema.ts';
-import { findVersionById } from '../../../../server/templates/template.repository.ts';
-import { readTemplateDetail } from '../../../../server/templates/templateDetail.ts';
-import { copyVersionIntoDesigns } from '../../../../server/templates/designSource.ts';
-import { requestDesignDerive } from '../../../../server/designs/designDerive.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { copySchema } from '@server/templates/template.schema.ts';
+import { findVersionById } from '@server/templates/template.repository.ts';
+import { readTemplateDetail } from '@server/templates/templateDetail.ts';
+import { copyVersionIntoDesigns } from '@server/templates/designSource.ts';
+import { requestDesignDerive } from '@server/designs/designDerive.ts';
 
 export const POST = (async ({ locals, params, request, url }) => {
   const signedIn = requireUser(locals);

@@ -1,9 +1,9 @@
 // /api/classes/:id/invitations/:invitationId — DELETE: revoke an invitation that was not used yet.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../../server/db.ts';
-import { problem } from '../../../../../server/http.ts';
-import { requireUser } from '../../../../../server/auth/guards.ts';
-import { findClassAccess, isManager, isUuid } from '../../../../../server/classes/classAccess.ts';
+import { db } from '@server/db.ts';
+import { problem } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager, isUuid } from '@server/classes/classAccess.ts';
 
 export const DELETE = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

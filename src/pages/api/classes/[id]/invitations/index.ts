@@ -2,12 +2,12 @@
 // invitation per address (signed, expiring, single-use link) → 201 { invitations }. Teacher and admins only.
 import type { APIRoute } from 'astro';
 import { PUBLIC_ORIGIN } from 'astro:env/server';
-import { db } from '../../../../../server/db.ts';
-import { json, problem, readJson } from '../../../../../server/http.ts';
-import { requireUser } from '../../../../../server/auth/guards.ts';
-import { findClassAccess, isManager } from '../../../../../server/classes/classAccess.ts';
-import { inviteSchema } from '../../../../../server/classes/class.schema.ts';
-import { inviteByEmail } from '../../../../../server/classes/invitation.service.ts';
+import { db } from '@server/db.ts';
+import { json, problem, readJson } from '@server/http.ts';
+import { requireUser } from '@server/auth/guards.ts';
+import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
+import { inviteSchema } from '@server/classes/class.schema.ts';
+import { inviteByEmail } from '@server/classes/invitation.service.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);

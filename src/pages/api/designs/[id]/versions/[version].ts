@@ -1,11 +1,11 @@
 // GET /api/designs/:id/versions/:version — one saved version: { version: { version, title, notes, design, savedAt } }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../../server/db.ts';
-import { findDesignVersion } from '../../../../../server/designs/design.repository.ts';
-import { versionParamSchema } from '../../../../../server/designs/designApi.schema.ts';
-import { engineFailureResponse, notFound, requireOwnedDesign } from '../../../../../server/designs/designHttp.ts';
-import { acceptStoredDesign, jsonText } from '../../../../../server/designs/designPayload.ts';
-import { designVersionJsonText } from '../../../../../server/designs/designRecord.ts';
+import { db } from '@server/db.ts';
+import { findDesignVersion } from '@server/designs/design.repository.ts';
+import { versionParamSchema } from '@server/designs/designApi.schema.ts';
+import { engineFailureResponse, notFound, requireOwnedDesign } from '@server/designs/designHttp.ts';
+import { acceptStoredDesign, jsonText } from '@server/designs/designPayload.ts';
+import { designVersionJsonText } from '@server/designs/designRecord.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);

@@ -1,9 +1,9 @@
 // GET /api/designs/:id/versions — saved versions, newest first: { versions: [{ version, title, savedAt, lines, seams }] }.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../../server/db.ts';
-import { json } from '../../../../../server/http.ts';
-import { listDesignVersions } from '../../../../../server/designs/design.repository.ts';
-import { requireOwnedDesign } from '../../../../../server/designs/designHttp.ts';
+import { db } from '@server/db.ts';
+import { json } from '@server/http.ts';
+import { listDesignVersions } from '@server/designs/design.repository.ts';
+import { requireOwnedDesign } from '@server/designs/designHttp.ts';
 
 export const GET = (async ({ locals, params }) => {
   const owned = await requireOwnedDesign(locals, params);

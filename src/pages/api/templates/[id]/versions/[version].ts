@@ -1,9 +1,9 @@
 // /api/templates/:id/versions/:version — GET: one published version (immutable), same visibility as the template.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../../server/db.ts';
-import { json, problem } from '../../../../../server/http.ts';
-import { readTemplateDetail } from '../../../../../server/templates/templateDetail.ts';
-import { parseVersionText } from '../../../../../server/inputRules.ts';
+import { db } from '@server/db.ts';
+import { json, problem } from '@server/http.ts';
+import { readTemplateDetail } from '@server/templates/templateDetail.ts';
+import { parseVersionText } from '@server/inputRules.ts';
 
 export const GET = (async ({ locals, params, url }) => {
   // A version that cannot exist (not a number, or past PostgreSQL's integer range) is simply not found.

@@ -1,14 +1,14 @@
 // POST /api/designs/:id/versions/:version/restore { baseVersion } — save that version again as the newest; { design }.
 // 409 { error, design: current } when the design moved on since baseVersion. Figures follow in the background.
 import type { APIRoute } from 'astro';
-import { db } from '../../../../../../server/db.ts';
-import { readJson } from '../../../../../../server/http.ts';
-import { findDesignVersion } from '../../../../../../server/designs/design.repository.ts';
-import { restoreDesignVersion } from '../../../../../../server/designs/design.service.ts';
-import { baseVersionSchema, versionParamSchema } from '../../../../../../server/designs/designApi.schema.ts';
-import { requestDesignDerive } from '../../../../../../server/designs/designDerive.ts';
-import { conflict, designResponse, engineFailureResponse, notFound, requireOwnedDesign } from '../../../../../../server/designs/designHttp.ts';
-import { acceptStoredDesign } from '../../../../../../server/designs/designPayload.ts';
+import { db } from '@server/db.ts';
+import { readJson } from '@server/http.ts';
+import { findDesignVersion } from '@server/designs/design.repository.ts';
+import { restoreDesignVersion } from '@server/designs/design.service.ts';
+import { baseVersionSchema, versionParamSchema } from '@server/designs/designApi.schema.ts';
+import { requestDesignDerive } from '@server/designs/designDerive.ts';
+import { conflict, designResponse, engineFailureResponse, notFound, requireOwnedDesign } from '@server/designs/designHttp.ts';
+import { acceptStoredDesign } from '@server/designs/designPayload.ts';
 
 export const POST = (async ({ locals, params, request }) => {
   const who = await requireOwnedDesign(locals, params);

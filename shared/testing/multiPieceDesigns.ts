@@ -7,9 +7,9 @@
  * - square in a square: corner and side triangles filled with lines parallel to a seam, the centre with lines or
  *   a zigzag, all seams travelled.
  */
-import type { Design } from '../shared/design/design.schema.ts';
-import type { Point, Polyline } from '../shared/geometry/point.ts';
-import { seededRandom } from '../shared/seededRandom.ts';
+import type { Design } from '../design/design.schema.ts';
+import type { Point, Polyline } from '../geometry/point.ts';
+import { seededRandom } from '../seededRandom.ts';
 
 const SIZE = 12;
 const snap = (v: number): number => Math.round(v * 16) / 16;

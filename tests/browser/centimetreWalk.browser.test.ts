@@ -1,7 +1,8 @@
 // Issue 14's centimetre walk: the demo quilter who measures in centimetres opens every page she can reach (her
 // designs list, each workbench, the template gallery and each template, a walkthrough, her classes and their
 // released lessons) and no length or thread figure on any of them is in inches or yards. The scale note under a
-// block preview gives the other unit in brackets on purpose (for printing), so it is left out of the read.
+// block preview gives the other unit in brackets on purpose (for printing), and text a teacher wrote (descriptions,
+// notes: marked data-authored) is shown as written, so both are left out of the read.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
@@ -27,7 +28,7 @@ afterAll(async () => {
 async function visibleText(page: Page): Promise<string> {
   return page.evaluate(() => {
     const clone = document.body.cloneNode(true) as HTMLElement;
-    clone.querySelectorAll('.scale-note, script, noscript').forEach((n) => n.remove());
+    clone.querySelectorAll('.scale-note, [data-authored], script, noscript, textarea').forEach((n) => n.remove());
     document.body.append(clone);
     clone.style.position = 'absolute';
     clone.style.left = '-99999px';

@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
 import type { Design, Units } from '@shared/design/design.schema.ts';
 import type { Guide } from '@shared/editor/guides.ts';
 import { halfwayGuide, extensionGuide } from '@shared/editor/guides.ts';
@@ -9,6 +9,8 @@ import { buildBlockPlaces, findPatchAt } from '@shared/walkthrough/locate.ts';
 import { namePatches } from '@shared/walkthrough/patchNames.ts';
 import { formatSize } from '@shared/units/units.ts';
 import { RouteCheckPanel } from '../route/RouteCheckPanel.tsx';
+import { JoinPanel } from './JoinPanel.tsx';
+import { joinLines, type JoinProposal } from '@shared/joins/findJoins.ts';
 import { RoutePanel } from '../route/RoutePanel.tsx';
 import { useRouteCheck } from '../route/useRouteCheck.ts';
 import { useRoutePlan } from '../route/useRoutePlan.ts';
@@ -100,6 +102,10 @@ function Workbench({ designId, doc, design, viewerUnits }: { designId: string; d
 
   const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, endsMode, dispatch: history.dispatch, onPickPatch });
   const check = useRouteCheck(designId, design);
+  const [shownJoin, setShownJoin] = useState<JoinProposal | null>(null);
+  const joinPreview = useMemo(() => (shownJoin ? joinLines(shownJoin) : null), [shownJoin]);
+  // A join drawn for an older drawing would point at lines that moved: drop it on every edit.
+  useEffect(() => setShownJoin(null), [design]);
   const pieces = useMemo(() => findLinePieces(design), [design]);
   const routes = useRoutePlan(designId, design, doc.version);
   const shownStrokes = routes.plan?.route ?? (routes.saved && routes.savedIsCurrent ? routes.saved.strokes : null);
@@ -260,7 +266,7 @@ function Workbench({ designId, doc, design, viewerUnits }: { designId: string; d
                 <SeamLayer seams={design.seams} view={vp.view} theme={theme} patch={tool === 'motif' ? patch : null} selected={selectedSeams} />
                 <QuiltingLineLayer lines={design.lines} view={vp.view} theme={theme} selected={selectedLines} pieceOfLine={pieces} oddPoints={check.check?.oddPointPositions ?? NO_POINTS} start={design.start} end={design.end} ownOrder={tool === 'order' ? ctl.ownOrder : NO_ORDER} dimmed={shownStrokes !== null} stageWidth={size.width} stageHeight={size.height} />
                 {shownStrokes && <RouteLayer strokes={shownStrokes} view={vp.view} theme={theme} needle={player.needle} />}
-                <OverlayLayer view={vp.view} theme={theme} preview={tool === 'motif' && motif?.ok ? motif.lines : ctl.preview} snapped={ctl.snapped?.point ?? null} guides={guides} gap={check.check?.gap ?? null} />
+                <OverlayLayer view={vp.view} theme={theme} preview={tool === 'motif' && motif?.ok ? motif.lines : joinPreview ?? ctl.preview} snapped={ctl.snapped?.point ?? null} guides={guides} gap={check.check?.gap ?? null} />
                 <RulerLayer units={design.units} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} />
               </EditorStage>
             )}
@@ -283,6 +289,7 @@ function Workbench({ designId, doc, design, viewerUnits }: { designId: string; d
             />
           )}
           <RouteCheckPanel check={check.check} state={check.state} message={check.message} units={design.units} viewerUnits={viewerUnits} />
+          <JoinPanel design={design} units={unitPair} onAdd={history.dispatch} onShow={setShownJoin} shown={shownJoin} />
           <BlockSettingsPanel design={design} dispatch={history.dispatch} generation={doc.generation} />
           <RoutePanel routes={routes} player={player} units={unitPair} canKeep={doc.status.kind === 'saved'} hasOwnRoute={Boolean(own)} onClearOwn={() => { ctl.clearOwnOrder(); history.dispatch({ kind: 'setRoute', route: null }); }} />
           <SavedVersionsPanel designId={designId} baseVersion={doc.version} canGoBack={doc.status.kind === 'saved'} onRestored={doc.replaceFromServer} onConflict={doc.openConflict} />

@@ -38,11 +38,11 @@ export async function findAccountRowById(db: Db, id: string): Promise<AccountRow
 /** Inserts an account; undefined when the e-mail is already taken (any case). */
 export async function insertAccount(
   db: Db,
-  values: { email: string; displayName: string; passwordHash: string; units: UnitsPreference },
+  values: { email: string; displayName: string; passwordHash: string; units: UnitsPreference; role?: Role },
 ): Promise<AccountRow | undefined> {
   return db
     .insertInto('account')
-    .values({ email: values.email, display_name: values.displayName, password_hash: values.passwordHash, units: values.units })
+    .values({ email: values.email, display_name: values.displayName, password_hash: values.passwordHash, units: values.units, ...(values.role && { role: values.role }) })
     .onConflict((oc) => oc.expression(sql`lower(email)`).doNothing())
     .returningAll()
     .executeTakeFirst();

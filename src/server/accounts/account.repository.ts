@@ -68,6 +68,10 @@ export async function updateAccount(
     .executeTakeFirst();
 }
 
+export async function setAccountPasswordHash(db: Db, id: string, passwordHash: string, now: Date): Promise<void> {
+  await db.updateTable('account').set({ password_hash: passwordHash, updated_at: now }).where('id', '=', id).execute();
+}
+
 /** Locks every admin row (FOR UPDATE) so two demotions cannot both see "another admin remains". */
 export async function lockAdminIds(trx: Transaction<Database>): Promise<string[]> {
   const rows = await trx.selectFrom('account').select('id').where('role', '=', 'admin').orderBy('id').forUpdate().execute();

@@ -1,6 +1,6 @@
 // Queries on class, lesson and enrollment. Rows become camelCase JSON in classJson.ts.
-import { sql, type Kysely, type Transaction } from 'kysely';
-import type { Database } from '@db/schema.ts';
+import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
+import type { ClassTable, Database } from '@db/schema.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
 
@@ -182,4 +182,32 @@ export async function updateLessonRow(
     })
     .where('id', '=', lessonId)
     .execute();
+}
+
+export async function findClassById(db: Db, id: string): Promise<Selectable<ClassTable> | undefined> {
+  return db.selectFrom('class').selectAll().where('id', '=', id).executeTakeFirst();
+}
+
+export async function isEnrolled(db: Db, classId: string, studentId: string): Promise<boolean> {
+  const row = await db.selectFrom('enrollment').select('student_id').where('class_id', '=', classId).where('student_id', '=', studentId).executeTakeFirst();
+  return row !== undefined;
+}
+
+/** The lesson's class and whether it is out (the database clock decides: release_at <= now()). */
+export async function findLessonRelease(db: Db, lessonId: string): Promise<{ id: string; class_id: string; released: boolean } | undefined> {
+  const row = await db
+    .selectFrom('lesson')
+    .select((eb) => ['id', 'class_id', eb('release_at', '<=', sql<Date>`now()`).as('released')])
+    .where('id', '=', lessonId)
+    .executeTakeFirst();
+  return row && { id: row.id, class_id: row.class_id, released: Boolean(row.released) };
+}
+
+/** Deletes the class (its lessons, enrollments, invitations, progress and photo rows go with it, by cascade). */
+export async function deleteClass(db: Db, id: string): Promise<void> {
+  await db.deleteFrom('class').where('id', '=', id).execute();
+}
+
+export async function deleteLesson(db: Db, id: string): Promise<void> {
+  await db.deleteFrom('lesson').where('id', '=', id).execute();
 }

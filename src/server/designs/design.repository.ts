@@ -90,6 +90,20 @@ export async function findOwnedDesignWithRoute(db: Db, ownerId: string, designId
     .executeTakeFirst();
 }
 
+/** The owner's live designs whose saved route belongs to their current version (they can be published), newest first. */
+export async function listPublishableDesigns(db: Db, ownerId: string, limit: number): Promise<{ id: string; title: string }[]> {
+  return db
+    .selectFrom('design')
+    .innerJoin('design_route', 'design_route.design_id', 'design.id')
+    .select(['design.id', 'design.title'])
+    .where('design.owner_id', '=', ownerId)
+    .where('design.deleted_at', 'is', null)
+    .whereRef('design_route.design_version', '=', 'design.version')
+    .orderBy('design.updated_at', 'desc')
+    .limit(limit)
+    .execute();
+}
+
 export interface DesignChanges {
   title: string;
   notes: string;

@@ -7,7 +7,7 @@ import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
 import { planDesign } from '@shared/route/planDesign.ts';
 import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
 import { insertDesign, insertDesignVersion, upsertDesignRoute } from '@server/designs/design.repository.ts';
-import { summaryOf } from '@server/engine/engineSummaries.ts';
+import { strokePathOf, summaryOf } from '@shared/route/routeAnswers.ts';
 import type { GuildDrawing } from './guildDrawings.ts';
 
 /** The exact search's solver, loaded once per seed run (as each engine worker loads its own). */
@@ -28,7 +28,7 @@ export async function seedDesign(db: Kysely<Database>, ownerId: string, d: Guild
   if (!planned.ok) throw new Error(`db/seed/guildDesigns: "${d.title}" cannot be planned: ${JSON.stringify(planned.error)}`);
   const plan = planned.value;
   const summary = summaryOf(plan);
-  const strokes = plan.route.map(({ pass, kind, points, length }) => ({ pass, kind, points, length }));
+  const strokes = plan.route.map(strokePathOf);
   return db.transaction().execute(async (trx) => {
     const row = await insertDesign(trx, {
       ownerId,

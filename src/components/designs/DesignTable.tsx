@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { apiRequest } from './apiClient.ts';
-import { designListPath, designListSchema, pendingRefreshDelayMs, type DesignList, type DesignListItem, type DesignSort } from './designsApi.ts';
+import { designListSchema, type DesignList, type DesignListItem, type DesignSort } from '@shared/contract/designs.ts';
+import { designListPath, pendingRefreshDelayMs } from './designsApi.ts';
 import { formatDistance, formatEdited, formatSize, formatYards } from './formatFigures.ts';
 
 type Load = { readonly state: 'loading' } | { readonly state: 'ready'; readonly list: DesignList } | { readonly state: 'failed'; readonly message: string };

@@ -18,6 +18,7 @@ import {
   type DesignRecordRow,
 } from './design.repository.ts';
 import type { AcceptedDesign } from './designBody.ts';
+import { storedSummary, toSavedRouteJson } from './designRecord.ts';
 
 export type SaveFailure = { readonly kind: 'not-found' } | { readonly kind: 'conflict'; readonly current: DesignRecordRow };
 
@@ -105,12 +106,13 @@ export async function duplicateDesign(db: Kysely<Database>, ownerId: string, id:
       notes: source.notes,
       dataJson: source.data_json,
       thumbnailSvg: source.thumbnail_svg,
-      summary: summaryCurrent ? source.summary : null,
+      summary: summaryCurrent ? storedSummary(source) : null,
       summaryCurrent,
     });
     await insertDesignVersion(trx, row.id);
-    const route = await findDesignRoute(trx, source.id);
-    if (route && route.design_version === source.version) {
+    const found = await findDesignRoute(trx, source.id);
+    const route = found ? toSavedRouteJson(found, source.version) : null;
+    if (route?.current) {
       await upsertDesignRoute(trx, { designId: row.id, kind: route.kind, strokes: route.strokes, summary: route.summary, designVersion: row.version });
     }
     return row;

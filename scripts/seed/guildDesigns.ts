@@ -9,7 +9,7 @@ import { planDesign } from '@shared/route/planDesign.ts';
 import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
 import { findLiveDesignIdByTitle } from '@server/designs/design.repository.ts';
 import { writeNewDesign } from '@server/designs/designWriter.ts';
-import { summaryOf } from '@server/engine/engineSummaries.ts';
+import { strokePathOf, summaryOf } from '@shared/route/routeAnswers.ts';
 import type { GuildDrawing } from './guildDrawings.ts';
 
 /** The exact search's solver, loaded once per seed run (as each engine worker loads its own). */
@@ -24,7 +24,7 @@ export async function seedDesign(db: Kysely<Database>, ownerId: string, d: Guild
   if (!planned.ok) throw new Error(`scripts/seed/guildDesigns: "${d.title}" cannot be planned: ${JSON.stringify(planned.error)}`);
   const plan = planned.value;
   const summary = summaryOf(plan);
-  const strokes = plan.route.map(({ pass, kind, points, length }) => ({ pass, kind, points, length }));
+  const strokes = plan.route.map(strokePathOf);
   const row = await writeNewDesign(db, {
     ownerId,
     title: d.title,

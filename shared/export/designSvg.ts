@@ -1,3 +1,4 @@
+import type { StrokePath } from '../contract/strokes.ts';
 import type { Design, Units } from '../design/design.schema.ts';
 import { formatSize } from '../units/units.ts';
 import { bindingBandOf, CM_PER_INCH } from '../design/design.schema.ts';
@@ -6,11 +7,7 @@ import { assertNever } from '../assertNever.ts';
 import { thumbnailLines, type ThumbnailLines } from './thumbnailLines.ts';
 
 /** One stroke of a route as the SVG draws it (the planner's and the route check's strokes fit this shape). */
-export interface SvgStroke {
-  readonly pass: number;
-  readonly kind: 'stitch' | 'retrace' | 'ditch' | 'edge';
-  readonly points: readonly Point[];
-}
+export type SvgStroke = Pick<StrokePath, 'pass' | 'kind' | 'points'>;
 
 export interface DesignSvgOptions {
   /** Shown above the block; escaped. */

@@ -1,6 +1,7 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { apiRequest } from './apiClient.ts';
-import { designListPath, designListSchema, pendingRefreshDelayMs, type DesignList, type DesignListItem, type DesignSort } from './designsApi.ts';
+import { designListSchema, type DesignList, type DesignListItem, type DesignSort } from '@shared/contract/designs.ts';
+import { designListPath, pendingRefreshDelayMs } from './designsApi.ts';
 import type { Units } from '@shared/design/design.schema.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import { formatEdited } from './formatFigures.ts';

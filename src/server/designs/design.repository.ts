@@ -3,6 +3,8 @@
 // design.service.ts; rows become domain objects in designRecord.ts.
 import { sql, type Kysely, type Transaction } from 'kysely';
 import type { Database, DesignRouteKind, DesignRouteRow, DesignRow, DesignVersionRow } from '@db/schema.ts';
+import type { DesignSummary, SavedRouteSummary } from '@shared/contract/figures.ts';
+import type { StrokePath } from '@shared/contract/strokes.ts';
 
 export type Db = Kysely<Database> | Transaction<Database>;
 
@@ -35,7 +37,7 @@ export interface NewDesignValues {
   /** Validated design as JSON text. */
   dataJson: string;
   thumbnailSvg: string;
-  summary: unknown | null;
+  summary: DesignSummary | null;
   /** True when `summary` belongs to this drawing (else the figures are computed after the save). */
   summaryCurrent: boolean;
   /** The template version this design was copied from, or null. */
@@ -158,7 +160,7 @@ export async function insertDesignVersion(db: Db, designId: string): Promise<voi
 }
 
 /** Writes figures computed after a save, only if the design is still at that version; false when it moved on. */
-export async function setDesignSummary(db: Db, id: string, version: number, summary: unknown | null): Promise<boolean> {
+export async function setDesignSummary(db: Db, id: string, version: number, summary: DesignSummary | null): Promise<boolean> {
   const r = await db
     .updateTable('design')
     .set({ summary: summary === null ? null : JSON.stringify(summary), summary_version: version })
@@ -220,8 +222,8 @@ export async function findDesignRoute(db: Db, designId: string): Promise<DesignR
 export interface RouteValues {
   designId: string;
   kind: DesignRouteKind;
-  strokes: unknown;
-  summary: unknown;
+  strokes: readonly StrokePath[];
+  summary: SavedRouteSummary;
   designVersion: number;
 }
 

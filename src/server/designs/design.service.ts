@@ -18,6 +18,7 @@ import {
 } from './design.repository.ts';
 import { writeNewDesign } from './designWriter.ts';
 import type { AcceptedDesign } from './designBody.ts';
+import { storedSummary, toSavedRouteJson } from './designRecord.ts';
 
 export type SaveFailure = { readonly kind: 'not-found' } | { readonly kind: 'conflict'; readonly current: DesignRecordRow };
 
@@ -96,17 +97,18 @@ export async function duplicateDesign(db: Kysely<Database>, ownerId: string, id:
   const source = await findOwnedDesign(db, ownerId, id);
   if (!source) return undefined;
   const summaryCurrent = source.summary_version === source.version;
-  const route = await findDesignRoute(db, source.id);
+  const found = await findDesignRoute(db, source.id);
+  const route = found ? toSavedRouteJson(found, source.version) : null;
   return writeNewDesign(db, {
     ownerId,
     title: `Copy of ${source.title}`.slice(0, MAX_TITLE),
     notes: source.notes,
     dataJson: source.data_json,
     thumbnailSvg: source.thumbnail_svg,
-    summary: summaryCurrent ? source.summary : null,
+    summary: summaryCurrent ? storedSummary(source) : null,
     summaryCurrent,
     copiedFromTemplateVersionId: null,
-    route: route && route.design_version === source.version ? { kind: route.kind, strokes: route.strokes, summary: route.summary } : null,
+    route: route?.current ? { kind: route.kind, strokes: route.strokes, summary: route.summary } : null,
   });
 }
 

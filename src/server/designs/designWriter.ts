@@ -2,16 +2,12 @@
 // comes with it, its saved route, in one transaction. Creating, duplicating, copying a template version and the
 // demo seed all come through here, so a new design always has the same three parts.
 import type { Kysely } from 'kysely';
-import type { Database, DesignRouteKind } from '@db/schema.ts';
+import type { Database } from '@db/schema.ts';
 import { inTransaction } from '../transaction.repository.ts';
-import { insertDesign, insertDesignVersion, upsertDesignRoute, type DesignRecordRow, type NewDesignValues } from './design.repository.ts';
+import { insertDesign, insertDesignVersion, upsertDesignRoute, type DesignRecordRow, type NewDesignValues, type RouteValues } from './design.repository.ts';
 
 /** A route saved with the new design: it belongs to version 1. */
-export interface NewDesignRoute {
-  readonly kind: DesignRouteKind;
-  readonly strokes: unknown;
-  readonly summary: unknown;
-}
+export type NewDesignRoute = Omit<RouteValues, 'designId' | 'designVersion'>;
 
 export interface NewDesign extends NewDesignValues {
   /** The route to keep with the design, or null when it has none yet. */

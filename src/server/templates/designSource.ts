@@ -8,13 +8,14 @@ import { err, ok, type Result } from '@shared/result.ts';
 import { findOwnedDesignWithRoute } from '../designs/design.repository.ts';
 import { writeNewDesign } from '../designs/designWriter.ts';
 import type { TemplateVersionRow } from './template.repository.ts';
-import { routeFiguresSchema, routeStrokesSchema, type RouteFigures, type RouteStroke } from './routeSnapshot.schema.ts';
+import { savedRouteSummarySchema, type SavedRouteSummary } from '@shared/contract/figures.ts';
+import { strokePathsSchema, type StrokePath } from '@shared/contract/strokes.ts';
 import { copiedDesignSummary, copiedRoute } from './copiedFigures.ts';
 
 export interface PublishableDesign {
   design: Design;
-  route: RouteStroke[];
-  figures: RouteFigures;
+  route: readonly StrokePath[];
+  figures: SavedRouteSummary;
 }
 export type DesignSourceError = { kind: 'not-found' } | { kind: 'no-route' } | { kind: 'stale-route'; designVersion: number; routeVersion: number };
 
@@ -25,7 +26,7 @@ export async function loadPublishableDesign(db: Kysely<Database>, ownerId: strin
   if (row.route_version === null || row.strokes === null) return err({ kind: 'no-route' });
   if (row.route_version !== row.version) return err({ kind: 'stale-route', designVersion: row.version, routeVersion: row.route_version });
   // jsonb written by another feature: parse it like any outside input (a broken row is a bug, so parse throws).
-  return ok({ design: designSchema.parse(row.data), route: routeStrokesSchema.parse(row.strokes), figures: routeFiguresSchema.parse(row.summary) });
+  return ok({ design: designSchema.parse(row.data), route: strokePathsSchema.parse(row.strokes), figures: savedRouteSummarySchema.parse(row.summary) });
 }
 
 /**

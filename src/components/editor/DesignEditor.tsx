@@ -83,7 +83,9 @@ function Workbench({ designId, doc, design, viewerUnits }: { designId: string; d
   const [announce, setAnnounce] = useState('');
 
   // Patches come from the seams and the block size only: drawing quilting lines leaves them alone.
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on seams and size on purpose (see above).
   const patches = useMemo(() => namePatches(findPatchFaces(design), design), [design.seams, design.width, design.height]);
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- places read the size, units and seams, which change only with the patches.
   const places = useMemo(() => buildBlockPlaces(design, patches), [patches]);
   const [patchIndex, setPatchIndex] = useState<number | null>(null);
   const [motifKind, setMotifKind] = useState<MotifKind>('straight-lines');

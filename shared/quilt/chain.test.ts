@@ -1,15 +1,15 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { chainBlocksOf, chainOf, joinLength, planChain, type ChainBlock, type JoinMetric } from './chain.ts';
+import { chainBlocksOf, chainOf, linkLength, planChain, type ChainBlock, type LinkMetric } from './chain.ts';
 import { placeCornerCosts, type Corner, type CornerCosts } from './cornerMap.ts';
 import { rowOrder, serpentineOrder } from './order.ts';
 import { quiltArb, makeQuilt } from './testQuilts.ts';
 
 /**
  * Brute force, the outside check for the DP: every choice of (entry, exit) for every block, 16^n chains, summed
- * directly as Σ block costs + Σ straight/seam joins. Exhaustive depth-first enumeration, no pruning.
+ * directly as Σ block costs + Σ straight or along-seam links. Exhaustive depth-first enumeration, no pruning.
  */
-function bruteForce(blocks: readonly ChainBlock[], metric: JoinMetric): number {
+function bruteForce(blocks: readonly ChainBlock[], metric: LinkMetric): number {
   let best = Infinity;
   const walk = (i: number, prevExit: Corner | null, sum: number): void => {
     if (i === blocks.length) {
@@ -18,8 +18,8 @@ function bruteForce(blocks: readonly ChainBlock[], metric: JoinMetric): number {
     }
     const b = blocks[i]!;
     for (let e = 0; e < 4; e++) {
-      const join = prevExit === null ? 0 : joinLength(blocks[i - 1]!.corners[prevExit]!, b.corners[e]!, metric);
-      for (let x = 0; x < 4; x++) walk(i + 1, x as Corner, sum + join + b.costs[e]![x]!);
+      const link = prevExit === null ? 0 : linkLength(blocks[i - 1]!.corners[prevExit]!, b.corners[e]!, metric);
+      for (let x = 0; x < 4; x++) walk(i + 1, x as Corner, sum + link + b.costs[e]![x]!);
     }
   };
   walk(0, null, 0);
@@ -33,7 +33,7 @@ const caseArb = fc.record({
   quilt: quiltArb(2, 3),
   tables: fc.array(costTableArb, { minLength: 6, maxLength: 6 }),
   serpentine: fc.boolean(),
-  metric: fc.constantFrom<JoinMetric>('straight', 'along-seams'),
+  metric: fc.constantFrom<LinkMetric>('straight', 'along-seams'),
 });
 
 function blocksOf(c: fc.Infer<typeof caseArb>): ChainBlock[] {
@@ -52,29 +52,29 @@ describe('planChain', () => {
     );
   });
 
-  it('its total is the chosen block costs plus the joins, recomputed from the corners', () => {
+  it('its total is the chosen block costs plus the links, recomputed from the corners', () => {
     fc.assert(
       fc.property(caseArb, (c) => {
         const blocks = blocksOf(c);
         const chain = planChain(blocks, c.metric);
         const again = chainOf(blocks, chain.steps.map((s) => s.entry), chain.steps.map((s) => s.exit), c.metric);
-        const sum = chain.steps.reduce((s, t, i) => s + blocks[i]!.costs[t.entry]![t.exit]! + (i === 0 ? 0 : joinLength(blocks[i - 1]!.corners[chain.steps[i - 1]!.exit]!, blocks[i]!.corners[t.entry]!, c.metric)), 0);
+        const sum = chain.steps.reduce((s, t, i) => s + blocks[i]!.costs[t.entry]![t.exit]! + (i === 0 ? 0 : linkLength(blocks[i - 1]!.corners[chain.steps[i - 1]!.exit]!, blocks[i]!.corners[t.entry]!, c.metric)), 0);
         expect(chain.total).toBeCloseTo(sum, 9);
         expect(chain.total).toBeCloseTo(again.total, 9);
-        expect(chain.blockTravel + chain.joinTravel).toBeCloseTo(chain.total, 9);
+        expect(chain.blockTravel + chain.linkTravel).toBeCloseTo(chain.total, 9);
       }),
     );
   });
 
   it('worked by hand: two 12 in blocks side by side with 2 in sashing, each cheap only from its left to its right edge', () => {
     // Cost 0 from top-left to top-right, 100 otherwise. The best chain enters block 1 top-left, leaves top-right,
-    // crosses the 2 in sashing to block 2's top-left and leaves at its top-right: total = 2 (one join).
+    // crosses the 2 in sashing to block 2's top-left and leaves at its top-right: total = 2 (one link).
     const table = [0, 1, 2, 3].map((e) => [0, 1, 2, 3].map((x) => (e === 0 && x === 1 ? 0 : 100)));
     const q = makeQuilt({ rows: 1, columns: 2, sashing: 2 });
     const chain = planChain(chainBlocksOf(q, rowOrder(q), () => table));
     expect(chain.steps.map((s) => [s.entry, s.exit])).toEqual([[0, 1], [0, 1]]);
     expect(chain.total).toBe(2);
-    expect(chain.joinTravel).toBe(2);
+    expect(chain.linkTravel).toBe(2);
   });
 
   it('a turned placement is read through the corner map: a half-turned block is cheap from bottom-right to bottom-left', () => {

@@ -8,7 +8,7 @@ import type { Cell, Placement } from './quilt.schema.ts';
  * `straight` is the straight-line distance; `along-seams` runs along the seam grid between blocks, horizontally
  * then vertically (|dx| + |dy|), which assumes the seams it follows run through (e.g. sashing with cornerstones).
  */
-export type JoinMetric = 'straight' | 'along-seams';
+export type LinkMetric = 'straight' | 'along-seams';
 
 /** One block of the chain: where its corners lie in the quilt and what each (entry, exit) pair costs inside it. */
 export interface ChainBlock {
@@ -26,7 +26,7 @@ export interface ChainStep {
   /** The block's cost for this entry and exit. */
   readonly blockCost: number;
   /** Travel from the previous block's exit to this entry (0 for the first block). */
-  readonly joinBefore: number;
+  readonly linkBefore: number;
 }
 
 /** The chosen corners for the whole quilt, with the breakdown. All in quilt units. */
@@ -34,13 +34,13 @@ export interface QuiltChain {
   readonly steps: readonly ChainStep[];
   /** Σ block costs. */
   readonly blockTravel: number;
-  /** Σ joins between consecutive blocks. */
-  readonly joinTravel: number;
-  /** blockTravel + joinTravel: the least possible over all corner choices. */
+  /** Σ links between consecutive blocks. */
+  readonly linkTravel: number;
+  /** blockTravel + linkTravel: the least possible over all corner choices. */
   readonly total: number;
 }
 
-export function joinLength(a: Point, b: Point, metric: JoinMetric): number {
+export function linkLength(a: Point, b: Point, metric: LinkMetric): number {
   const dx = Math.abs(a[0] - b[0]);
   const dy = Math.abs(a[1] - b[1]);
   return metric === 'straight' ? Math.hypot(dx, dy) : dx + dy;
@@ -48,16 +48,16 @@ export function joinLength(a: Point, b: Point, metric: JoinMetric): number {
 
 /**
  * Picks each block's entry and exit corner so that blocks quilted in the given order, with the thread running on
- * from one block to the next, cost the least in all: Σ cost_i(entry_i, exit_i) + Σ join(exit_{i−1}, entry_i).
+ * from one block to the next, cost the least in all: Σ cost_i(entry_i, exit_i) + Σ link(exit_{i−1}, entry_i).
  *
  * Dynamic programming over blocks × exit corner (docs/engine.md, "Whole quilt"):
  *   best_1(x) = min_e cost_1(e, x)
- *   best_i(x) = min_{x', e} best_{i−1}(x') + join(x', e) + cost_i(e, x)
+ *   best_i(x) = min_{x', e} best_{i−1}(x') + link(x', e) + cost_i(e, x)
  * and the answer is min_x best_n(x), traced back. 64 terms per block, so any quilt is instant. Ties go to the lower
  * corner number (top-left first), so the answer is deterministic.
  */
-export function planChain(blocks: readonly ChainBlock[], metric: JoinMetric = 'straight'): QuiltChain {
-  if (blocks.length === 0) return { steps: [], blockTravel: 0, joinTravel: 0, total: 0 };
+export function planChain(blocks: readonly ChainBlock[], metric: LinkMetric = 'straight'): QuiltChain {
+  if (blocks.length === 0) return { steps: [], blockTravel: 0, linkTravel: 0, total: 0 };
   for (const b of blocks) checkCornerCosts(b.costs);
   // from[i][x] = [entry, previous exit] that reached best_i(x).
   const from: [Corner, Corner][][] = [];
@@ -79,7 +79,7 @@ export function planChain(blocks: readonly ChainBlock[], metric: JoinMetric = 's
       let cell = { value: Infinity, entry: 0 as Corner, prevExit: 0 as Corner };
       for (let px = 0; px < 4; px++) {
         for (let e = 0; e < 4; e++) {
-          const v = best[px]!.value + joinLength(prev.corners[px]!, block.corners[e]!, metric) + block.costs[e]![x]!;
+          const v = best[px]!.value + linkLength(prev.corners[px]!, block.corners[e]!, metric) + block.costs[e]![x]!;
           if (v < cell.value) cell = { value: v, entry: e as Corner, prevExit: px as Corner };
         }
       }
@@ -102,17 +102,17 @@ export function planChain(blocks: readonly ChainBlock[], metric: JoinMetric = 's
 }
 
 /** The chain with the given corners and its breakdown (the DP's answer, or any other choice to compare with). */
-export function chainOf(blocks: readonly ChainBlock[], entries: readonly Corner[], exits: readonly Corner[], metric: JoinMetric): QuiltChain {
+export function chainOf(blocks: readonly ChainBlock[], entries: readonly Corner[], exits: readonly Corner[], metric: LinkMetric): QuiltChain {
   const steps: ChainStep[] = blocks.map((b, i) => ({
     cell: b.cell,
     entry: entries[i]!,
     exit: exits[i]!,
     blockCost: b.costs[entries[i]!]![exits[i]!]!,
-    joinBefore: i === 0 ? 0 : joinLength(blocks[i - 1]!.corners[exits[i - 1]!]!, b.corners[entries[i]!]!, metric),
+    linkBefore: i === 0 ? 0 : linkLength(blocks[i - 1]!.corners[exits[i - 1]!]!, b.corners[entries[i]!]!, metric),
   }));
   const blockTravel = steps.reduce((s, t) => s + t.blockCost, 0);
-  const joinTravel = steps.reduce((s, t) => s + t.joinBefore, 0);
-  return { steps, blockTravel, joinTravel, total: blockTravel + joinTravel };
+  const linkTravel = steps.reduce((s, t) => s + t.linkBefore, 0);
+  return { steps, blockTravel, linkTravel, total: blockTravel + linkTravel };
 }
 
 /**

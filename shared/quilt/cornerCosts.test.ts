@@ -6,6 +6,7 @@ import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts
 import { placeCornerCosts, placedSize, placePoint } from './cornerMap.ts';
 import { buildCornerCosts, CornerCostCache, cornerCostKey, costTableOf, pairPlanOf, unitScale, type DesignCornerCosts } from './cornerCosts.ts';
 import type { Orientation } from './quilt.schema.ts';
+import { err, ok } from '../result.ts';
 
 let solver: MipSolver;
 beforeAll(async () => {
@@ -97,18 +98,31 @@ describe('CornerCostCache', () => {
   it('plans a design once for all orientations and scales centimetre designs into an inch quilt', () => {
     const cache = new CornerCostCache();
     let planned = 0;
-    const compute = (): DesignCornerCosts => {
+    const compute = () => {
       planned++;
-      return { ...table(oneLine(true)), units: 'cm' };
+      return ok({ ...table(oneLine(true)), units: 'cm' as const });
     };
-    const a = cache.placedCosts('d1', '3', { rotation: 0, mirror: false }, 'in', compute);
-    const b = cache.placedCosts('d1', '3', { rotation: 90, mirror: true }, 'in', compute);
-    expect(cache.placedCosts('d1', '3', { rotation: 90, mirror: true }, 'in', compute)).toBe(b);
+    const placed = (id: string, rev: string, o: Orientation) => {
+      const r = cache.placedCosts(id, rev, o, 'in', compute);
+      if (!r.ok) throw new Error('unexpected');
+      return r.value;
+    };
+    const a = placed('d1', '3', { rotation: 0, mirror: false });
+    const b = placed('d1', '3', { rotation: 90, mirror: true });
+    expect(placed('d1', '3', { rotation: 90, mirror: true })).toBe(b);
     expect(planned).toBe(1);
     expect(a[0]![1]).toBeCloseTo(12 / 2.54, 12);
     expect(unitScale('in', 'cm')).toBe(2.54);
-    cache.placedCosts('d1', '4', { rotation: 0, mirror: false }, 'in', compute);
+    placed('d1', '4', { rotation: 0, mirror: false });
     expect(planned).toBe(2);
+    expect(cache.plannedDesigns).toBe(2);
+  });
+
+  it('does not remember a design the planner refused', () => {
+    const cache = new CornerCostCache();
+    const refused = cache.design('d2', '1', () => err({ kind: 'empty-design' as const }));
+    expect(refused.ok).toBe(false);
+    expect(cache.has('d2', '1')).toBe(false);
     expect(cornerCostKey('d1', '3', { rotation: 90, mirror: true })).toBe('d1@3/r90m');
   });
 });

@@ -111,33 +111,38 @@ export function pairPlanOf(costs: DesignCornerCosts, entry: Corner, exit: Corner
 /**
  * Remembers corner-pair costs so a re-plan of the quilt costs only the dynamic programme. The design's own table is
  * planned once per design and revision (turning and mirroring keep lengths, so all eight orientations share it);
- * each placed table is kept under design, revision and orientation (`cornerCostKey`).
+ * each placed table is kept under design, revision and orientation (`cornerCostKey`). A design the planner refuses
+ * is not remembered.
  */
 export class CornerCostCache {
   private readonly designs = new Map<string, DesignCornerCosts>();
   private readonly placed = new Map<string, CornerCosts>();
 
+  /** Whether this design revision's table is known already. */
+  has(designId: string, revision: string): boolean {
+    return this.designs.has(`${designId}@${revision}`);
+  }
+
   /** The design's table, computed by `compute` the first time this design revision is asked for. */
-  design(designId: string, revision: string, compute: () => DesignCornerCosts): DesignCornerCosts {
+  design<E>(designId: string, revision: string, compute: () => Result<DesignCornerCosts, E>): Result<DesignCornerCosts, E> {
     const key = `${designId}@${revision}`;
-    let found = this.designs.get(key);
-    if (!found) {
-      found = compute();
-      this.designs.set(key, found);
-    }
-    return found;
+    const found = this.designs.get(key);
+    if (found) return ok(found);
+    const computed = compute();
+    if (computed.ok) this.designs.set(key, computed.value);
+    return computed;
   }
 
   /** The placed table in quilt units (`quiltUnits`), from the design's table. */
-  placedCosts(designId: string, revision: string, o: Orientation, quiltUnits: Units, compute: () => DesignCornerCosts): CornerCosts {
+  placedCosts<E>(designId: string, revision: string, o: Orientation, quiltUnits: Units, compute: () => Result<DesignCornerCosts, E>): Result<CornerCosts, E> {
     const key = `${cornerCostKey(designId, revision, o)}:${quiltUnits}`;
-    let found = this.placed.get(key);
-    if (!found) {
-      const own = this.design(designId, revision, compute);
-      found = placeCornerCosts(costTableOf(own), o, unitScale(own.units, quiltUnits));
-      this.placed.set(key, found);
-    }
-    return found;
+    const found = this.placed.get(key);
+    if (found) return ok(found);
+    const own = this.design(designId, revision, compute);
+    if (!own.ok) return own;
+    const table = placeCornerCosts(costTableOf(own.value), o, unitScale(own.value.units, quiltUnits));
+    this.placed.set(key, table);
+    return ok(table);
   }
 
   /** How many design tables have been planned (each is 16 plans). */

@@ -5,11 +5,11 @@ import type { QuiltChain } from './chain.ts';
 import { planQuiltBudget, type BlockFigures } from './quiltBudget.ts';
 
 const cell = (i: number) => ({ row: 0, column: i });
-const chainOf = (joins: number[]): QuiltChain => ({
-  steps: joins.map((j, i) => ({ cell: cell(i), entry: 0, exit: 1, blockCost: 0, joinBefore: j })),
+const chainOf = (links: number[]): QuiltChain => ({
+  steps: links.map((j, i) => ({ cell: cell(i), entry: 0, exit: 1, blockCost: 0, linkBefore: j })),
   blockTravel: 0,
-  joinTravel: joins.reduce((s, j) => s + j, 0),
-  total: joins.reduce((s, j) => s + j, 0),
+  linkTravel: links.reduce((s, j) => s + j, 0),
+  total: links.reduce((s, j) => s + j, 0),
 });
 
 const figuresArb = fc.array(
@@ -36,26 +36,26 @@ describe('planQuiltBudget', () => {
     );
   });
 
-  it('chained: the joins are added as sewn travel and each join saves one tie-off at each end of the thread', () => {
+  it('chained: the links are added as sewn travel and each link saves one tie-off at each end of the thread', () => {
     fc.assert(
       fc.property(figuresArb, fc.array(fc.integer({ min: 0, max: 40 }), { minLength: 12, maxLength: 12 }), (list, lengths) => {
         const blocks = toFigures(list);
-        const joins = lengths.slice(0, list.length).map((j, i) => (i === 0 ? 0 : j));
+        const links = lengths.slice(0, list.length).map((j, i) => (i === 0 ? 0 : j));
         const alone = planQuiltBudget('in', blocks, null, { tieOffTail: 4 });
-        const q = planQuiltBudget('in', blocks, chainOf(joins), { tieOffTail: 4 });
-        const joinTotal = joins.reduce((s, j) => s + j, 0);
+        const q = planQuiltBudget('in', blocks, chainOf(links), { tieOffTail: 4 });
+        const linkTotal = links.reduce((s, j) => s + j, 0);
         expect(q.passes).toBe(alone.passes - (list.length - 1));
         expect(q.stops).toBe(q.passes - 1);
-        expect(q.travelLength).toBeCloseTo(alone.travelLength + joinTotal, 9);
-        const joinYards = computeThreadBudget(joinTotal, 0, 'in', { tieOffTail: 4 }).topThreadYards;
+        expect(q.travelLength).toBeCloseTo(alone.travelLength + linkTotal, 9);
+        const linkYards = computeThreadBudget(linkTotal, 0, 'in', { tieOffTail: 4 }).topThreadYards;
         const savedYards = ((list.length - 1) * 2 * 4) / 36;
         const rounding = ((list.length + 1) * 0.5 * THREAD_DEFAULTS.sandwichThickness.value) / 36;
-        expect(Math.abs(q.total.topThreadYards - (alone.total.topThreadYards + joinYards - savedYards))).toBeLessThanOrEqual(rounding + 1e-9);
+        expect(Math.abs(q.total.topThreadYards - (alone.total.topThreadYards + linkYards - savedYards))).toBeLessThanOrEqual(rounding + 1e-9);
       }),
     );
   });
 
-  it('worked by hand: two 12 in blocks, 100 in stitched + 10 in travel each, one 2 in join, 10 SPI, no tails', () => {
+  it('worked by hand: two 12 in blocks, 100 in stitched + 10 in travel each, one 2 in link, 10 SPI, no tails', () => {
     // Sewn: 2 × 110 + 2 = 222 in → 2,220 stitches; thread per side 222 + 2,220 × 1/16 = 360.75 in = 10.02 yd.
     const blocks: BlockFigures[] = [0, 1].map((i) => ({ cell: cell(i), units: 'in', stitchLength: 100, travelLength: 10, passes: 1 }));
     const q = planQuiltBudget('in', blocks, chainOf([0, 2]), { spi: 10, tieOffTail: 0 });
@@ -63,7 +63,7 @@ describe('planQuiltBudget', () => {
     expect(q.total.topThreadYards).toBeCloseTo(360.75 / 36, 12);
     expect(q.passes).toBe(1);
     expect(q.total.assumptions.find((a) => a.setting === 'model')!.source).toMatch(/geometric derivation/);
-    expect(q.joinModel).toMatch(/^ours/);
+    expect(q.linkModel).toMatch(/^ours/);
   });
 
   it('refuses a chain that does not match the blocks', () => {

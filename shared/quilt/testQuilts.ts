@@ -41,7 +41,7 @@ export function makeQuilt(shape: QuiltShape): Quilt {
 /** Lengths on a 1/8 in grid, as a quilter measures. */
 const eighths = (min: number, max: number): fc.Arbitrary<number> => fc.integer({ min: min * 8, max: max * 8 }).map((k) => k / 8);
 
-/** Random quilts in inches: 1–`maxRows` × 1–`maxColumns`, 3–16 in blocks, 0–3 in sashing, up to 3 borders. */
+/** Random quilts in inches: 1–`maxRows` × 1–`maxColumns`, 3–16 in blocks, 0–3 in sashing, up to 3 borders, at most 120 in a side. */
 export function quiltArb(maxRows: number, maxColumns: number): fc.Arbitrary<Quilt> {
   return fc
     .record({
@@ -53,6 +53,11 @@ export function quiltArb(maxRows: number, maxColumns: number): fc.Arbitrary<Quil
       borders: fc.array(eighths(0.5, 6), { maxLength: 3 }),
       bindingAllowance: fc.constantFrom(0, 0.25, 0.375, 0.5),
       turns: fc.array(fc.record({ rotation: fc.constantFrom<Rotation>(0, 90, 180, 270), mirror: fc.boolean() }), { minLength: 400, maxLength: 400 }),
+    })
+    // Keep within the 120 in longest side the schema allows.
+    .filter((q) => {
+      const b = 2 * q.borders.reduce((s, x) => s + x, 0);
+      return q.columns * q.width + (q.columns - 1) * q.sashing + b <= 120 && q.rows * q.height + (q.rows - 1) * q.sashing + b <= 120;
     })
     .map((q) => {
       const quilt = makeQuilt({ rows: q.rows, columns: q.columns, block: { width: q.width, height: q.height }, sashing: q.sashing, borders: q.borders, bindingAllowance: q.bindingAllowance });

@@ -84,7 +84,7 @@ try {
   mkdirSync(mailDir);
   const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), DEV_TOOLS: 'true', MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1' };
   runTs('db/migrate.ts', env);
-  runTs('db/seed/index.ts', env);
+  runTs('scripts/seed/index.ts', env);
   const mail = await startMailSink({ dir: mailDir });
   cleanups.push(() => mail.close());
   const s3Dir = path.join(scratch, 's3');

@@ -1,7 +1,8 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
-import { parseDesignRecord, type DesignRecord } from '../designs/designsApi.ts';
+import type { DesignRecord } from '@shared/contract/designs.ts';
+import { parseDesignRecord } from '../designs/designsApi.ts';
 import { clearDraft, loadDraft, saveDraft } from './draftStore.ts';
 import { canWorkOnDraftWhileUnavailable, saveFailureAction } from './saveRetry.ts';
 import { retryDelayMs, type SaveStatus } from './saveStatus.ts';

@@ -1,15 +1,16 @@
 // The demo guild's content: Tobias's and Saoirse's designs, Marigold's template and class. Accounts are looked
 // up by the e-mails the demo file gives them.
-import { sql, type Kysely } from 'kysely';
-import type { Database } from '../schema.ts';
+import type { Kysely } from 'kysely';
+import type { Database } from '@db/schema.ts';
+import { findAccountRowByEmail } from '@server/accounts/account.repository.ts';
 import { seedGuildClass } from './guildClass.ts';
 import { seedDesign } from './guildDesigns.ts';
 import { saoirseDrawings, tobiasDrawings } from './guildDrawings.ts';
 
 async function accountId(db: Kysely<Database>, email: string | undefined): Promise<string> {
-  if (!email) throw new Error('db/seed/guildContent: demo-accounts.json lacks a demo account the content needs');
-  const row = await db.selectFrom('account').select('id').where(sql<string>`lower(email)`, '=', email.toLowerCase()).executeTakeFirst();
-  if (!row) throw new Error(`db/seed/guildContent: demo account ${email} is missing`);
+  if (!email) throw new Error('scripts/seed/guildContent: demo-accounts.json lacks a demo account the content needs');
+  const row = await findAccountRowByEmail(db, email);
+  if (!row) throw new Error(`scripts/seed/guildContent: demo account ${email} is missing`);
   return row.id;
 }
 

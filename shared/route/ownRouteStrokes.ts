@@ -3,22 +3,22 @@
 // the route check; kinds from the traced pieces: a quilting edge is `stitch` the first time and `retrace` after,
 // seams are `ditch`, the outline is `edge`. A run on no design line is drawn as `stitch` (the route check's
 // warnings and figures say whether it counts as edge travel in the binding band or as off-line stitching).
-import type { Design } from '@shared/design/design.schema.ts';
-import type { Point } from '@shared/geometry/point.ts';
-import type { DesignProblem } from '@shared/graph/designProblem.ts';
-import { traceRoute } from '@shared/graph/traceRoute.ts';
-import { ok, type Result } from '@shared/result.ts';
-import type { RouteCheck } from '@shared/route/checkRoute.ts';
-import type { StrokeKind } from '@shared/route/routeStrokes.ts';
-import type { RouteStroke } from './engine.types.ts';
+import type { StrokeKind, StrokePath } from '../contract/strokes.ts';
+import type { Design } from '../design/design.schema.ts';
+import type { Point } from '../geometry/point.ts';
+import type { DesignProblem } from '../graph/designProblem.ts';
+import { traceRoute } from '../graph/traceRoute.ts';
+import { ok, type Result } from '../result.ts';
+import type { RouteCheck } from './checkRoute.ts';
+import { strokeKindOf } from './routeStrokes.ts';
 
-export function buildOwnRouteStrokes(design: Design, check: RouteCheck): Result<RouteStroke[], DesignProblem> {
+export function buildOwnRouteStrokes(design: Design, check: RouteCheck): Result<StrokePath[], DesignProblem> {
   const traced = traceRoute(design);
   if (!traced.ok) return traced;
   const { graph, strokes } = traced.value;
   const passOf = new Map(check.strokes.map((s) => [s.index, s.pass]));
   const covered = new Uint8Array(graph.edges.length);
-  const out: RouteStroke[] = [];
+  const out: StrokePath[] = [];
   let current: { pass: number; kind: StrokeKind; points: Point[]; length: number } | null = null;
   const add = (pass: number, kind: StrokeKind, points: readonly Point[], length: number): void => {
     if (current && current.pass === pass && current.kind === kind && samePoint(current.points[current.points.length - 1]!, points[0]!)) {
@@ -38,9 +38,7 @@ export function buildOwnRouteStrokes(design: Design, check: RouteCheck): Result<
         continue;
       }
       const e = graph.edges[piece.edge]!;
-      const kind: StrokeKind = e.kind === 'quilting' ? (covered[e.id] ? 'retrace' : 'stitch') : e.kind === 'seam' ? 'ditch' : 'edge';
-      covered[e.id] = 1;
-      add(pass, kind, piece.forward ? e.points : [...e.points].reverse(), e.length);
+      add(pass, strokeKindOf(e.kind, covered, e.id), piece.forward ? e.points : [...e.points].reverse(), e.length);
     }
   }
   if (current) out.push(current);

@@ -26,9 +26,9 @@ export function buildDrawing(r: Recipe): Design {
   const lines: Polyline[] = r.ditch ? layout.seams.map((s) => [...s]) : [];
   for (const m of r.motifs) {
     const patch = layout.patches[m.patch];
-    if (!patch) throw new Error(`db/seed/guildDrawings: layout ${r.layout} has no patch ${m.patch}`);
+    if (!patch) throw new Error(`scripts/seed/guildDrawings: layout ${r.layout} has no patch ${m.patch}`);
     const generated = generateMotif(patch.polygon, m.params);
-    if (!generated.ok) throw new Error(`db/seed/guildDrawings: motif ${JSON.stringify(m.params)} failed: ${generated.error.kind}`);
+    if (!generated.ok) throw new Error(`scripts/seed/guildDrawings: motif ${JSON.stringify(m.params)} failed: ${generated.error.kind}`);
     lines.push(...generated.value.lines);
   }
   return designSchema.parse({ version: 1, units: r.units, width: r.size, height: r.size, seams: layout.seams, lines });
@@ -42,7 +42,7 @@ function centrePatch(layout: PiecedLayoutId, size: number): number {
     const ys = p.polygon.map((q) => q[1]);
     return Math.min(...xs) < size / 2 && Math.max(...xs) > size / 2 && Math.min(...ys) < size / 2 && Math.max(...ys) > size / 2;
   });
-  if (i < 0) throw new Error(`db/seed/guildDrawings: no centre patch in ${layout}`);
+  if (i < 0) throw new Error(`scripts/seed/guildDrawings: no centre patch in ${layout}`);
   return i;
 }
 

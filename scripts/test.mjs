@@ -42,22 +42,33 @@ for (const signal of ['SIGINT', 'SIGTERM']) {
     process.exit(130);
   });
 }
-/** Runs `npm run <script>` in the foreground; true when it passed. */
+/** Runs `npm run <script>` with its output kept; resolves to whether it passed, how long it took and what it printed. */
 function runNpmScript(script) {
-  log(`npm run ${script}`);
   return new Promise((resolve) => {
-    const child = spawn('npm', ['run', '--silent', script], { cwd: ROOT, stdio: 'inherit' });
-    child.on('exit', (code, signal) => resolve(code === 0 && !signal));
-    child.on('error', () => resolve(false));
+    const child = spawn('npm', ['run', '--silent', script], { cwd: ROOT, stdio: ['ignore', 'pipe', 'pipe'], env: { ...process.env, FORCE_COLOR: '1' } });
+    const output = [];
+    const started = Date.now();
+    child.stdout.on('data', (chunk) => output.push(chunk));
+    child.stderr.on('data', (chunk) => output.push(chunk));
+    // 'close', not 'exit': the output pipes are drained by then.
+    child.on('close', (code, signal) => resolve({ script, passed: code === 0 && !signal, seconds: (Date.now() - started) / 1000, output: Buffer.concat(output).toString() }));
+    child.on('error', (error) => resolve({ script, passed: false, seconds: 0, output: String(error) }));
   });
 }
 
-// The type check and the linter first: they need no services, and their verdicts head the summary. A failure
-// fails the run but does not stop the tests, so one run shows everything that is wrong.
+// The type check and the linter first, side by side (each is single-threaded): they need no services, and their
+// verdicts head the summary. A failure fails the run but does not stop the tests, so one run shows everything
+// that is wrong.
 const focused = process.argv.length > 2;
 const gates = [];
 if (!focused) {
-  for (const script of ['check', 'lint']) gates.push({ script, passed: await runNpmScript(script) });
+  log('npm run check and npm run lint');
+  for (const gate of await Promise.all(['check', 'lint'].map(runNpmScript))) {
+    // A passing run's output (astro check's hints) is left out; a failing one is shown whole.
+    if (!gate.passed) process.stdout.write(gate.output);
+    log(`npm run ${gate.script}: ${gate.passed ? 'passed' : 'FAILED'} in ${gate.seconds.toFixed(0)} s`);
+    gates.push(gate);
+  }
 }
 const gateLine = focused
   ? 'check and lint skipped (a focused run)'

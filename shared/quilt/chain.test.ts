@@ -5,6 +5,9 @@ import { placeCornerCosts, type Corner, type CornerCosts } from './cornerMap.ts'
 import { rowOrder, serpentineOrder } from './order.ts';
 import { quiltArb, makeQuilt } from './testQuilts.ts';
 
+/** The value type an arbitrary draws (fast-check 4 exports no helper for it). */
+type Drawn<A> = A extends fc.Arbitrary<infer T> ? T : never;
+
 /**
  * Brute force, the outside check for the DP: every choice of (entry, exit) for every block, 16^n chains, summed
  * directly as Σ block costs + Σ straight or along-seam links. Exhaustive depth-first enumeration, no pruning.
@@ -36,7 +39,7 @@ const caseArb = fc.record({
   metric: fc.constantFrom<LinkMetric>('straight', 'along-seams'),
 });
 
-function blocksOf(c: fc.Infer<typeof caseArb>): ChainBlock[] {
+function blocksOf(c: Drawn<typeof caseArb>): ChainBlock[] {
   const cells = c.serpentine ? serpentineOrder(c.quilt) : rowOrder(c.quilt);
   return chainBlocksOf(c.quilt, cells, (p, cell) => placeCornerCosts(c.tables[cell.row * 3 + cell.column]!, p));
 }

@@ -4,6 +4,9 @@ import { computeThreadBudget, THREAD_DEFAULTS } from '../route/threadBudget.ts';
 import type { QuiltChain } from './chain.ts';
 import { planQuiltBudget, type BlockFigures } from './quiltBudget.ts';
 
+/** The value type an arbitrary draws (fast-check 4 exports no helper for it). */
+type Drawn<A> = A extends fc.Arbitrary<infer T> ? T : never;
+
 const cell = (i: number) => ({ row: 0, column: i });
 const chainOf = (links: number[]): QuiltChain => ({
   steps: links.map((j, i) => ({ cell: cell(i), entry: 0, exit: 1, blockCost: 0, linkBefore: j })),
@@ -16,7 +19,7 @@ const figuresArb = fc.array(
   fc.record({ stitch: fc.integer({ min: 10, max: 400 }), travel: fc.integer({ min: 0, max: 60 }), passes: fc.integer({ min: 1, max: 4 }), cm: fc.boolean() }),
   { minLength: 1, maxLength: 12 },
 );
-const toFigures = (list: fc.Infer<typeof figuresArb>): BlockFigures[] =>
+const toFigures = (list: Drawn<typeof figuresArb>): BlockFigures[] =>
   list.map((f, i) => ({ cell: cell(i), units: f.cm ? 'cm' : 'in', stitchLength: f.cm ? f.stitch * 2.54 : f.stitch, travelLength: f.cm ? f.travel * 2.54 : f.travel, passes: f.passes }));
 
 describe('planQuiltBudget', () => {

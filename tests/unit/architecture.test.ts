@@ -95,6 +95,13 @@ describe('the rules on planted violations', () => {
     ]);
   });
 
+  it('the core never imports its test support (shared/testing/, test*.ts), which tests may use with fast-check', () => {
+    expect(checkFixture('shared-imports-test-support')).toEqual([
+      { rule: 'shared/', file: 'shared/quilt/order.ts', specifier: './testQuilts.ts' },
+      { rule: 'shared/', file: 'shared/quilt/order.ts', specifier: '../testing/multiPieceDesigns.ts' },
+    ]);
+  });
+
   it('src/components/ never imports src/server/, types included', () => {
     expect(checkFixture('components-import-server')).toEqual([
       { rule: 'src/components/', file: 'src/components/TemplateView.astro', specifier: '@server/templates/templateDetail.ts' },

@@ -2,7 +2,7 @@
 // the version list, and the share link for those who may edit.
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
-import type { TemplateDetail } from '@shared/templates/templateAnswers.ts';
+import type { TemplateDetail } from '@shared/contract/templates.ts';
 import type { SessionUser } from '../auth/session.ts';
 import { isUuid } from '../classes/classAccess.ts';
 import { findTemplate, findTemplateByLink, findTemplateCard, findVersion, listVersionNumbers, type TemplateRow } from './template.repository.ts';

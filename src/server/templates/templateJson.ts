@@ -1,5 +1,5 @@
 // How templates appear in API responses. The link token is shown only to those who may edit the template.
-import type { TemplateCardJson, TemplateVersionJson } from '@shared/templates/templateAnswers.ts';
+import type { TemplateCardJson, TemplateVersionJson } from '@shared/contract/templates.ts';
 import type { TemplateCardRow, TemplateRow, TemplateVersionRow } from './template.repository.ts';
 
 export function toTemplateCardJson(r: TemplateCardRow): TemplateCardJson {

@@ -10,6 +10,8 @@ export interface Allowance {
   from?: readonly string[];
   /** Files they may import (globs). */
   files?: readonly string[];
+  /** Files among `files` they may not import after all (globs). */
+  filesExcept?: readonly string[];
   /** Packages they may import (globs: `graphology*`, `node:*`). */
   packages?: readonly string[];
   /** Why an exception exists. */
@@ -27,6 +29,8 @@ export interface FolderRule {
 }
 
 const TESTS_BESIDE = ['shared/**/*.test.ts'];
+/** The core's test support: fixtures and builders only tests (and benches) use. */
+const TEST_SUPPORT = ['shared/testing/**', 'shared/**/test*.ts'];
 
 export const folderRules: readonly FolderRule[] = [
   {
@@ -34,15 +38,19 @@ export const folderRules: readonly FolderRule[] = [
     covers: ['shared/**'],
     checkPackages: true,
     allow: [
-      { files: ['shared/**'], packages: ['zod', 'graphology', 'graphology-*', 'flatbush', 'robust-predicates', 'edmonds-blossom-fixed'] },
+      {
+        files: ['shared/**'],
+        filesExcept: TEST_SUPPORT,
+        packages: ['zod', 'graphology', 'graphology-*', 'flatbush', 'robust-predicates', 'edmonds-blossom-fixed'],
+      },
       { from: ['shared/motifs/inset.ts'], packages: ['clipper2-ts'], why: 'polygon offsets for non-convex echo rings' },
       { from: ['shared/route/exact/highsSolver.ts'], packages: ['highs'], why: 'the exact planner’s integer-program solver, behind one seam' },
       { from: ['shared/cli/**'], packages: ['node:*'], why: 'the command line reads and writes files' },
       {
-        from: TESTS_BESIDE,
-        files: ['tests/helpers/**'],
+        from: [...TESTS_BESIDE, ...TEST_SUPPORT],
+        files: ['shared/**', 'tests/helpers/**'],
         packages: ['vitest', 'fast-check', 'node:child_process'],
-        why: 'tests beside modules run Vitest and fast-check, ask python3 oracles through child_process, and share long-run helpers',
+        why: 'tests beside modules and their support run Vitest and fast-check, ask python3 oracles through child_process, and share long-run helpers',
       },
     ],
   },
@@ -138,7 +146,7 @@ export function isAllowed(rule: FolderRule, file: string, target: ImportTarget):
   return rule.allow.some(
     (a) =>
       (a.from === undefined || anyMatch(a.from, file)) &&
-      (target.kind === 'file' ? anyMatch(a.files, target.path) : anyMatch(a.packages, target.name)),
+      (target.kind === 'file' ? anyMatch(a.files, target.path) && !anyMatch(a.filesExcept, target.path) : anyMatch(a.packages, target.name)),
   );
 }
 

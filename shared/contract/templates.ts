@@ -1,4 +1,4 @@
-// How a template reads in the API's answers and on its pages: the gallery card, one published version, and the
+// Templates as the API sends them and their pages show them: the gallery card, one published version, and the
 // template page's whole view. The server builds them from its rows (src/server/templates/templateJson.ts, where
 // the compiler checks the rows' value lists fit these); the pages' view components read them without reaching
 // into the server.

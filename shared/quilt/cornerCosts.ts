@@ -36,22 +36,25 @@ export interface CornerCostOptions {
   readonly settings?: PlanSettings;
   readonly weights?: TravelWeights;
   readonly clock?: () => number;
-  /** Called after each of the 16 plans with the number done, for a progress bar. */
+  /** Called after each of the `PLANS_PER_DESIGN` plans with the number done, for a progress bar. */
   readonly onPlanned?: (done: number) => void;
 }
 
 /**
- * Plans the design 16 times, once per (entry corner, exit corner) pair, with the block planner's own fixed start
- * and end (planRoute's `start`/`end`): the thread enters at one corner, quilts every line and leaves at the other,
- * with the same edge travel, binding band, stops and time budget (per plan) as a plan of the design alone.
+ * The 16 (entry corner, exit corner) costs of a design, from the block planner's own fixed start and end
+ * (planRoute's `start`/`end`): the thread enters at one corner, quilts every line and leaves at the other, with the
+ * same edge travel, binding band, stops and time budget (per plan) as a plan of the design alone.
  *
- * The planar graph keeps a vertex only where lines end, meet or change kind, so a block corner is usually inside an
- * outline edge; planRoute would then start at the nearest vertex instead. The design's `start`/`end` points are
- * kept as vertices where they lie on a line (buildPlanarGraph), so each unordered pair {a, b} gets its own graph
- * with `start: a, end: b`, planned a → b and b → a: 10 graphs, 16 plans. With edge travel on, every corner is then
- * a vertex and the plan starts and ends exactly there. With edge travel off, a corner may lie on no line at all:
- * the route begins at the nearest vertex travel can reach, and the straight step from the corner to it is added to
- * the cost and reported as `cornerSteps` (a visible line the quilter would have to sew or avoid).
+ * - A route sewn backwards is a route from its end to its start with the same travel (the first of two runs over a
+ *   quilting line is the stitch, the other the retrace, either way round), the same passes and the same set of
+ *   thread ends; so cost(b, a) = cost(a, b) and only the 10 pairs a ≤ b are planned (4 closed, 6 open).
+ * - The planar graph keeps a vertex only where lines end, meet or change kind, so a block corner is usually inside an
+ *   outline edge and planRoute would start at the nearest vertex instead. The design's `start`/`end` points are
+ *   kept as vertices where they lie on a line (buildPlanarGraph), so each pair's graph is built with `start: a,
+ *   end: b`. With edge travel on, every corner is then a vertex and the plan starts and ends exactly there.
+ * - With edge travel off, a corner may lie on no line at all: the route begins at the nearest vertex travel can
+ *   reach, and the straight step from the corner to it is added to the cost and reported as `cornerSteps` (a
+ *   visible line the quilter would have to sew or avoid).
  */
 export function buildCornerCosts(design: Design, options: CornerCostOptions = {}): Result<DesignCornerCosts, DesignProblem> {
   const settings = options.settings ?? DEFAULT_PLAN_SETTINGS;
@@ -63,35 +66,38 @@ export function buildCornerCosts(design: Design, options: CornerCostOptions = {}
       const built = buildPlanarGraph({ ...design, start: corners[a]!, end: corners[b]! });
       if (!built.ok) return built;
       const graph = built.value;
-      for (const [entry, exit] of a === b ? [[a, a]] : [[a, b], [b, a]]) {
-        const plan = planRoute(graph, {
-          edgeTravel: design.edgeTravel,
-          frame: { width: design.width, height: design.height, band: bindingBandOf(design) },
-          extraStops: settings.extraStops,
-          hiddenEndAllowance: settings.hiddenEndAllowance,
-          start: corners[entry!]!,
-          end: corners[exit!]!,
-          ...(options.weights ? { weights: options.weights } : {}),
-          ...(options.clock ? { clock: options.clock } : {}),
-          ...(options.solver ? { exact: { solver: options.solver, timeBudgetMs: settings.timeBudgetMs } } : {}),
-        });
-        const step = (p: Point, v: number | null): number => (v === null ? 0 : Math.hypot(p[0] - graph.vertices[v]![0], p[1] - graph.vertices[v]![1]));
-        const cornerSteps = step(corners[entry!]!, plan.startVertex) + step(corners[exit!]!, plan.endVertex);
-        pairs[entry!]![exit!] = {
-          cost: plan.travelCost + cornerSteps,
-          travelLength: plan.travelLength + cornerSteps,
-          stitchLength: plan.stitchLength,
-          passes: plan.passes,
-          optimal: plan.optimal,
-          travelLowerBound: plan.travelLowerBound + cornerSteps,
-          cornerSteps,
-        };
-        options.onPlanned?.(++done);
-      }
+      const plan = planRoute(graph, {
+        edgeTravel: design.edgeTravel,
+        frame: { width: design.width, height: design.height, band: bindingBandOf(design) },
+        extraStops: settings.extraStops,
+        hiddenEndAllowance: settings.hiddenEndAllowance,
+        start: corners[a]!,
+        end: corners[b]!,
+        ...(options.weights ? { weights: options.weights } : {}),
+        ...(options.clock ? { clock: options.clock } : {}),
+        ...(options.solver ? { exact: { solver: options.solver, timeBudgetMs: settings.timeBudgetMs } } : {}),
+      });
+      const step = (p: Point, v: number | null): number => (v === null ? 0 : Math.hypot(p[0] - graph.vertices[v]![0], p[1] - graph.vertices[v]![1]));
+      const cornerSteps = step(corners[a]!, plan.startVertex) + step(corners[b]!, plan.endVertex);
+      const pair: CornerPairPlan = {
+        cost: plan.travelCost + cornerSteps,
+        travelLength: plan.travelLength + cornerSteps,
+        stitchLength: plan.stitchLength,
+        passes: plan.passes,
+        optimal: plan.optimal,
+        travelLowerBound: plan.travelLowerBound + cornerSteps,
+        cornerSteps,
+      };
+      pairs[a]![b] = pair;
+      pairs[b]![a] = pair;
+      options.onPlanned?.(++done);
     }
   }
   return ok({ units: design.units, pairs });
 }
+
+/** Plans per design: the 10 corner pairs a ≤ b (the other 6 are the same routes sewn backwards). */
+export const PLANS_PER_DESIGN = 10;
 
 /** The design's 4 × 4 cost table (design corners, design units). */
 export function costTableOf(costs: DesignCornerCosts): CornerCosts {
@@ -145,7 +151,7 @@ export class CornerCostCache {
     return ok(table);
   }
 
-  /** How many design tables have been planned (each is 16 plans). */
+  /** How many design tables have been planned (each is `PLANS_PER_DESIGN` plans). */
   get plannedDesigns(): number {
     return this.designs.size;
   }

@@ -44,7 +44,7 @@ describe('planQuiltRoute', () => {
     if (!r.ok) throw new Error(r.error.message);
     const { order, chain, budget } = r.value;
     expect(order).toEqual([{ row: 0, column: 0 }, { row: 0, column: 1 }, { row: 1, column: 1 }, { row: 1, column: 0 }]);
-    expect(progress.at(-1)).toEqual([48, 48]); // three designs × 16 pairs
+    expect(progress.at(-1)).toEqual([30, 30]); // three designs × 10 planned pairs
     // Links recomputed from the chosen corners and the quilt map.
     let links = 0;
     for (let i = 1; i < chain.steps.length; i++) {

@@ -3,7 +3,7 @@ import type { DesignProblem } from '../graph/designProblem.ts';
 import { err, ok, type Result } from '../result.ts';
 import { chainBlocksOf, planChain, type LinkMetric, type QuiltChain } from './chain.ts';
 import { placedSize } from './cornerMap.ts';
-import { buildCornerCosts, pairPlanOf, unitScale, type CornerCostCache, type CornerCostOptions } from './cornerCosts.ts';
+import { buildCornerCosts, pairPlanOf, PLANS_PER_DESIGN, unitScale, type CornerCostCache, type CornerCostOptions } from './cornerCosts.ts';
 import { orderCells, type HandOrderProblem } from './order.ts';
 import type { Cell, Orientation, Placement, Quilt } from './quilt.schema.ts';
 import { figuresOfPair, planQuiltBudget, type QuiltBudget } from './quiltBudget.ts';
@@ -28,7 +28,7 @@ export interface QuiltRoute {
 
 export interface QuiltRouteOptions extends Omit<CornerCostOptions, 'onPlanned'> {
   readonly metric?: LinkMetric;
-  /** Corner-pair plans done and to do (16 per design revision not in the cache yet), for a progress bar. */
+  /** Corner-pair plans done and to do (`PLANS_PER_DESIGN` per design revision not in the cache yet), for a progress bar. */
   readonly onProgress?: (done: number, total: number) => void;
 }
 
@@ -54,7 +54,7 @@ export function planQuiltRoute(quilt: Quilt, designs: ReadonlyMap<string, QuiltD
     }
   }
   const uncached = new Set(placements.map((p) => p.placement.designId).filter((id) => !cache.has(id, designs.get(id)!.revision)));
-  const total = 16 * uncached.size;
+  const total = PLANS_PER_DESIGN * uncached.size;
   let done = 0;
   const { metric, onProgress, ...planOptions } = options;
   const costOf = (placement: Placement) => {

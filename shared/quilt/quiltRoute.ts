@@ -27,6 +27,7 @@ export interface QuiltRoute {
 }
 
 export interface QuiltRouteOptions extends Omit<CornerCostOptions, 'onPlanned'> {
+  /** Overrides the quilt's own `linkMetric`. */
   readonly metric?: LinkMetric;
   /** Corner-pair plans done and to do (`PLANS_PER_DESIGN` per design revision not in the cache yet), for a progress bar. */
   readonly onProgress?: (done: number, total: number) => void;
@@ -76,7 +77,7 @@ export function planQuiltRoute(quilt: Quilt, designs: ReadonlyMap<string, QuiltD
       if (!r.ok) throw new Error('quilt/quiltRoute: a cached table went missing');
       return r.value;
     }),
-    metric ?? 'straight',
+    metric ?? quilt.linkMetric,
   );
   const figures = chain.steps.map((step) => {
     const placement = quilt.placements[step.cell.row]![step.cell.column]!;

@@ -4,7 +4,7 @@ import { planTrim, trimSettingsSchema } from './trim.ts';
 import { buildTrimTable } from './trimTable.ts';
 
 describe('buildTrimTable', () => {
-  it('prints the worked 3 × 3 check (docs/engine.md §10.4) in eighths of an inch', () => {
+  it('prints the worked 3 × 3 check (docs/engine.md §11.4) in eighths of an inch', () => {
     const q = makeQuilt({ rows: 3, columns: 3, borders: [3], bindingAllowance: 0.25 });
     const plan = planTrim(q, 0.25, trimSettingsSchema.parse({}));
     if (!plan.ok) throw new Error(plan.error.message);

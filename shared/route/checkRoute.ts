@@ -6,7 +6,7 @@ import { findPieces } from '../graph/pieces.ts';
 import { snapToleranceOf } from '../graph/tolerance.ts';
 import { traceRoute } from '../graph/traceRoute.ts';
 import { ok, type Result } from '../result.ts';
-import { addLength, type RouteLengths } from './routeStrokes.ts';
+import { addLength, strokeKindOf, type RouteLengths } from './routeStrokes.ts';
 import { findStrokeDirection, type StrokeDirection } from './strokeDirection.ts';
 import { computeThreadBudget, type ThreadBudget } from './threadBudget.ts';
 
@@ -68,8 +68,7 @@ export function checkRoute(design: Design): Result<RouteCheck, DesignProblem> {
     for (const piece of stroke.pieces) {
       if (!piece.offLine) {
         const e = graph.edges[piece.edge]!;
-        addLength(totals, e.kind === 'quilting' ? (covered[e.id] ? 'retrace' : 'stitch') : e.kind === 'seam' ? 'ditch' : 'edge', e.length);
-        covered[e.id] = 1;
+        addLength(totals, strokeKindOf(e.kind, covered, e.id), e.length);
         continue;
       }
       const where = `stroke ${stroke.index + 1}`;

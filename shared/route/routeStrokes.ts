@@ -1,19 +1,11 @@
+import type { StrokeKind, StrokePath } from '../contract/strokes.ts';
 import type { Point } from '../geometry/point.ts';
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
 import { assertNever } from '../assertNever.ts';
 import type { EulerWalk } from './eulerWalk.ts';
 
-/** What the needle does along a stroke: stitch a quilting line, or travel (retrace, ditch, edge). */
-export type StrokeKind = 'stitch' | 'retrace' | 'ditch' | 'edge';
-
-/** A run of one kind within one pass; consecutive strokes of a pass share their end/start point. */
-export interface Stroke {
-  readonly pass: number;
-  readonly kind: StrokeKind;
-  readonly points: readonly Point[];
-  /** Length in design units. */
-  readonly length: number;
-  /** Planar-graph edge ids the stroke runs over, in order. */
+/** A run of one kind within one pass (the API's StrokePath) and the planar-graph edge ids it runs over, in order. */
+export interface Stroke extends StrokePath {
   readonly edges: readonly number[];
 }
 
@@ -68,7 +60,11 @@ export function buildStrokes(
   return strokes;
 }
 
-function strokeKindOf(kind: PlanarGraph['edges'][number]['kind'], stitched: Uint8Array, edge: number): StrokeKind {
+/**
+ * The kind of a stroke over planar edge `edge`: a quilting edge is `stitch` the first time (and is marked in
+ * `stitched`) and `retrace` after; seams are `ditch`, the outline `edge`. Planned and own routes both use it.
+ */
+export function strokeKindOf(kind: PlanarGraph['edges'][number]['kind'], stitched: Uint8Array, edge: number): StrokeKind {
   switch (kind) {
     case 'quilting':
       if (stitched[edge]) return 'retrace';

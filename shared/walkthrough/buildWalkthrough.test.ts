@@ -6,7 +6,7 @@ import { polylineLength } from '../geometry/polyline.ts';
 import { flattenArc } from '../design/flatten.ts';
 import { buildPiecedLayout, PIECED_LAYOUTS } from '../layouts/piecedLayouts.ts';
 import { planDesign } from '../route/planDesign.ts';
-import type { StrokeKind } from '../route/routeStrokes.ts';
+import type { StrokeKind } from '../contract/strokes.ts';
 import { buildWalkthrough } from './buildWalkthrough.ts';
 import type { RouteStrokeInput, Walkthrough } from './walkthrough.types.ts';
 

@@ -1,6 +1,6 @@
 import type { Point, Polyline } from '../geometry/point.ts';
 import { polylineLength } from '../geometry/polyline.ts';
-import type { StrokeKind } from '../route/routeStrokes.ts';
+import type { StrokeKind } from '../contract/strokes.ts';
 import { findStrokeDirection, type StrokeDirection } from '../route/strokeDirection.ts';
 import { assertNever } from '../assertNever.ts';
 import type { LineShape } from './lineShape.ts';

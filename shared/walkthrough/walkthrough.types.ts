@@ -1,15 +1,11 @@
 import type { Units } from '../design/design.schema.ts';
 import type { Point } from '../geometry/point.ts';
 import type { StrokeDirection } from '../route/strokeDirection.ts';
-import type { StrokeKind } from '../route/routeStrokes.ts';
+import type { StrokePath } from '../contract/strokes.ts';
 import type { NamedPatch } from './patchNames.ts';
 
-/** One stroke of a route as stored or sent (the planner's `Stroke` without its cached length also fits). */
-export interface RouteStrokeInput {
-  readonly pass: number;
-  readonly kind: StrokeKind;
-  readonly points: readonly Point[];
-}
+/** What the walkthrough reads of a route's stroke (shared/contract/strokes.ts). */
+export type RouteStrokeInput = Pick<StrokePath, 'pass' | 'kind' | 'points'>;
 
 /**
  * What a step asks of the quilter:

@@ -2,34 +2,12 @@
 // `code` comes from a closed union so clients (and tests) can branch on it; `fields` maps an input
 // path ("email", "items.0.name") to a message a person can act on.
 import type { z } from 'zod';
+import type { ErrorCode, ProblemBody } from '@shared/contract/errors.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 import { readBytesCapped } from './readBody.ts';
 import { findUnstorableText, UNSTORABLE_MESSAGE } from './storableText.ts';
 
-export type ErrorCode =
-  | 'invalid_input'
-  | 'invalid_json'
-  | 'unsupported_media_type'
-  | 'payload_too_large'
-  | 'unauthenticated'
-  | 'not_found'
-  | 'forbidden_origin'
-  | 'method_not_allowed'
-  | 'conflict'
-  | 'invalid_credentials'
-  | 'invalid_token'
-  | 'rate_limited'
-  | 'last_admin'
-  | 'engine_timeout'
-  | 'engine_busy'
-  | 'database_unavailable'
-  | 'internal';
-
 export type FieldErrors = Readonly<Record<string, string>>;
-
-export interface ProblemBody {
-  readonly error: { readonly code: ErrorCode; readonly message: string; readonly fields?: FieldErrors };
-}
 
 export function json(data: unknown, status = 200, headers?: HeadersInit): Response {
   const h = new Headers(headers);

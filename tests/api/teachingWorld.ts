@@ -1,6 +1,10 @@
 // A small teaching world for the API tests: two teachers with a class each, a student in each class, an admin,
 // a teacher's design with a saved route (written straight into the workbench tables, as a save would leave it),
 // a class-only template from it, a released and a future lesson, and helpers to send raw bytes.
+import type { SavedRouteSummary } from '@shared/contract/figures.ts';
+import type { StrokePath } from '@shared/contract/strokes.ts';
+import { threadSummaryOf } from '@shared/route/routeAnswers.ts';
+import { computeThreadBudget } from '@shared/route/threadBudget.ts';
 import { createAccount, type TestAccount } from '../helpers/accounts.ts';
 import type { TestClient } from '../helpers/client.ts';
 import { testDb } from '../helpers/db.ts';
@@ -23,8 +27,12 @@ export async function insertDesignWithRoute(owner: TestAccount, lineY: number): 
 }
 
 export async function saveRoute(designId: string, designVersion: number, lineY: number): Promise<void> {
-  const strokes = [{ pass: 0, kind: 'stitch', points: [[0, lineY], [12, lineY]], length: 12 }];
-  const summary = { passes: 1, stops: 0, stitchLength: 12, retraceLength: 0, ditchLength: 0, edgeLength: 0, travelLength: 0 };
+  // The route contract's shapes (shared/contract), as savePlannedRoute writes them: passes count from 1.
+  const strokes: StrokePath[] = [{ pass: 1, kind: 'stitch', points: [[0, lineY], [12, lineY]], length: 12 }];
+  const summary: SavedRouteSummary = {
+    passes: 1, stops: 0, pieces: 1, oddPoints: 2, stitchLength: 12, retraceLength: 0, ditchLength: 0, edgeLength: 0, travelLength: 0,
+    travelLowerBound: 0, optimal: true, units: 'in', thread: threadSummaryOf(computeThreadBudget(12, 1, 'in')),
+  };
   await testDb()
     .insertInto('design_route')
     .values({ design_id: designId, kind: 'planned', strokes: JSON.stringify(strokes), summary: JSON.stringify(summary), design_version: designVersion })

@@ -1,3 +1,4 @@
+import { problemSchema } from '@shared/contract/errors.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 
 /** What went wrong with a request, as the UI needs to tell it apart. */
@@ -41,13 +42,14 @@ export async function apiRequest(method: 'GET' | 'POST' | 'PUT' | 'DELETE', path
   }
   if (res.ok) return ok(data);
   if (res.status >= 502 && res.status <= 504 && data === null) return err({ kind: 'offline', message: `The server is not answering (${res.status}).` });
-  const e = (data as { error?: { code?: unknown; message?: unknown } } | null)?.error;
+  const problem = problemSchema.safeParse(data);
+  const e = problem.success ? problem.data.error : null;
   const retryAfter = Number(res.headers.get('retry-after') ?? Number.NaN);
   return err({
     kind: 'http',
     status: res.status,
-    code: typeof e?.code === 'string' ? e.code : 'unknown',
-    message: typeof e?.message === 'string' ? e.message : `Request failed (${res.status}).`,
+    code: e?.code ?? 'unknown',
+    message: e?.message ?? `Request failed (${res.status}).`,
     body: data,
     ...(Number.isFinite(retryAfter) && retryAfter >= 0 ? { retryAfterMs: retryAfter * 1000 } : {}),
   });

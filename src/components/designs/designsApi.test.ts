@@ -1,8 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { designListSchema, pendingRefreshDelayMs } from './designsApi.ts';
+import { designListSchema } from '@shared/contract/designs.ts';
+import { pendingRefreshDelayMs } from './designsApi.ts';
 
-const item = (over: Record<string, unknown>) => ({ id: 'a', title: 'Nine-patch', units: 'in', width: 12, height: 12, thumbnailSvg: '<svg/>', updatedAt: '2026-12-04T10:00:00Z', summary: null, ...over });
-const list = (...designs: Record<string, unknown>[]) => designListSchema.parse({ designs, total: designs.length, page: 1, pageSize: 25 });
+const item = (over: Record<string, unknown>) => ({
+  id: 'a', title: 'Nine-patch', version: 1, units: 'in', width: 12, height: 12, thumbnailSvg: '<svg/>',
+  createdAt: '2026-12-04T09:00:00Z', updatedAt: '2026-12-04T10:00:00Z', summary: null, summaryPending: false, ...over,
+});
+const list = (...designs: Record<string, unknown>[]) => designListSchema.parse({ designs, total: designs.length, page: 1, pageSize: 25, sort: 'updated', dir: 'desc', q: '' });
 
 describe('pendingRefreshDelayMs', () => {
   it('asks again while figures or a thumbnail are on the way, less often as time goes on, and stops after a while', () => {
@@ -14,7 +18,7 @@ describe('pendingRefreshDelayMs', () => {
     expect(pendingRefreshDelayMs(list(item({ thumbnailSvg: null })), 0)).toBe(1_500);
   });
 
-  it('does not poll when every row is complete (older servers send no summaryPending)', () => {
-    expect(pendingRefreshDelayMs(list(item({}), item({ id: 'b', summaryPending: false })), 0)).toBeNull();
+  it('does not poll when every row is complete', () => {
+    expect(pendingRefreshDelayMs(list(item({}), item({ id: 'b' })), 0)).toBeNull();
   });
 });

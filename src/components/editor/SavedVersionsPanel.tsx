@@ -1,7 +1,8 @@
 import { useCallback, useEffect, useState } from 'react';
 import { z } from 'zod';
 import { apiRequest } from '../designs/apiClient.ts';
-import { parseDesignRecord, type DesignRecord } from '../designs/designsApi.ts';
+import type { DesignRecord } from '@shared/contract/designs.ts';
+import { parseDesignRecord } from '../designs/designsApi.ts';
 
 const versionListSchema = z.object({
   current: z.number(),

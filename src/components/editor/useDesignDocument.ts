@@ -1,7 +1,8 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
-import { parseDesignRecord, type DesignRecord } from '../designs/designsApi.ts';
+import type { DesignRecord } from '@shared/contract/designs.ts';
+import { parseDesignRecord } from '../designs/designsApi.ts';
 import { clearDraft, loadDraft, saveDraft } from './draftStore.ts';
 import { canWorkOnDraftWhileUnavailable, saveFailureAction } from './saveRetry.ts';
 import { retryDelayMs, type SaveStatus } from './saveStatus.ts';
@@ -56,6 +57,11 @@ export function useDesignDocument(designId: string): DesignDocument {
     s.current.timer = setTimeout(fn, ms);
   }, []);
 
+  const writeDraft = useCallback(() => {
+    const st = s.current;
+    if (st.design) saveDraft(window.localStorage, designId, { baseVersion: st.version, title: st.title, design: st.design, writtenAt: Date.now() });
+  }, [designId]);
+
   const save = useCallback(async (): Promise<void> => {
     const st = s.current;
     if (st.inFlight || st.conflict || !st.design || st.revision === st.savedRevision) return;
@@ -99,12 +105,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     st.attempt += 1;
     setStatus({ kind: 'retrying', attempt: st.attempt, retryAt: Date.now() + action.delayMs, reason: action.reason });
     schedule(action.delayMs, () => void save());
-  }, [designId, schedule]);
-
-  function writeDraft() {
-    const st = s.current;
-    if (st.design) saveDraft(window.localStorage, designId, { baseVersion: st.version, title: st.title, design: st.design, writtenAt: Date.now() });
-  }
+  }, [designId, schedule, writeDraft]);
 
   const markEdited = useCallback(() => {
     const st = s.current;
@@ -113,7 +114,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     if (st.conflict) return;
     setStatus({ kind: 'unsaved' });
     schedule(SAVE_DEBOUNCE_MS, () => void save());
-  }, [save, schedule]);
+  }, [save, schedule, writeDraft]);
 
   useEffect(() => {
     let cancelled = false;
@@ -170,6 +171,7 @@ export function useDesignDocument(designId: string): DesignDocument {
   }, [designId, save, schedule]);
 
   useEffect(() => {
+    const st = s.current;
     const retry = () => {
       if (s.current.attempt > 0) void save();
     };
@@ -181,7 +183,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     return () => {
       window.removeEventListener('online', retry);
       window.removeEventListener('beforeunload', warn);
-      clearTimeout(s.current.timer);
+      clearTimeout(st.timer);
     };
   }, [save]);
 
@@ -221,7 +223,7 @@ export function useDesignDocument(designId: string): DesignDocument {
       setStatus({ kind: 'unsaved' });
       void save();
     }
-  }, [designId, save, serverCopy]);
+  }, [designId, save, serverCopy, writeDraft]);
 
   const saveNow = useCallback(() => {
     s.current.attempt = 0;

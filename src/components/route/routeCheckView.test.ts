@@ -1,20 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import type { Design } from '@shared/design/design.schema.ts';
-import { checkGap } from '@shared/gap/gapCheck.ts';
-import { checkDesign } from '@shared/route/checkDesign.ts';
-import { checkRoute } from '@shared/route/checkRoute.ts';
+import { buildCheckResult } from '@shared/route/routeAnswers.ts';
 import { parseCheckAnswer } from './routeCheckView.ts';
 
-// The check answer as the server assembles it from the shared engine (src/server/engine/engineTasks.ts),
-// round-tripped through JSON as the browser receives it.
+// The check answer as the server builds it (the engine worker calls the same buildCheckResult), round-tripped
+// through JSON as the browser receives it.
 function answerFor(design: Design): unknown {
-  const checked = checkDesign(design);
+  const checked = buildCheckResult(design);
   if (!checked.ok) throw new Error('fixture design must check');
-  const { plan, ...check } = checked.value;
-  const own = design.route ? checkRoute(design) : null;
-  const gap = checkGap(design);
-  const figures = { passes: plan.passes, stops: plan.stops, pieces: plan.pieces, oddPoints: plan.oddPoints, stitchLength: plan.stitchLength, travelLength: plan.travelLength, retraceLength: plan.retraceLength, ditchLength: plan.ditchLength, edgeLength: plan.edgeLength, travelLowerBound: plan.travelLowerBound, optimal: plan.optimal };
-  return JSON.parse(JSON.stringify({ designVersion: 1, draft: true, check, plan: figures, threadBudget: plan.threadBudget, ownRoute: own?.ok ? own.value : null, gap: gap.ok ? gap.value : null }));
+  return JSON.parse(JSON.stringify({ designVersion: 1, draft: true, ...checked.value }));
 }
 
 const twoSquares: Design = {

@@ -1,5 +1,5 @@
 import type { Point } from '@shared/geometry/point.ts';
-import type { StrokeKind } from '@shared/route/routeStrokes.ts';
+import type { StrokeKind } from '@shared/contract/strokes.ts';
 
 /** A drawn stroke of a route as the API sends it (lengths are recomputed here from the points). */
 export interface RouteStroke {

@@ -1,10 +1,11 @@
 import { useCallback, useEffect, useState } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
-import { planAnswerSchema, savedRouteAnswerSchema, type PlanAnswer, type SavedRoute } from './routeApi.ts';
+import { savedRouteAnswerSchema, type SavedRoute } from '@shared/contract/designs.ts';
+import { planAnswerSchema, type PlanResult } from '@shared/contract/plan.ts';
 
 export interface RoutePlanState {
-  readonly plan: PlanAnswer | null;
+  readonly plan: PlanResult | null;
   readonly saved: SavedRoute | null;
   /** The kept route matches the lines on screen (kept for this version, nothing edited since). */
   readonly savedIsCurrent: boolean;
@@ -18,7 +19,7 @@ export interface RoutePlanState {
 
 /** The planner's route for the design on screen, and the route kept with the saved design. */
 export function useRoutePlan(designId: string, design: Design | null, savedVersion: number): RoutePlanState {
-  const [plan, setPlan] = useState<PlanAnswer | null>(null);
+  const [plan, setPlan] = useState<PlanResult | null>(null);
   const [saved, setSaved] = useState<SavedRoute | null>(null);
   const [busy, setBusy] = useState<RoutePlanState['busy']>(null);
   const [message, setMessage] = useState<string | null>(null);

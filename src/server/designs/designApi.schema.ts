@@ -6,7 +6,7 @@ import { planSettingsSchema } from '@shared/route/planSettings.ts';
 import type { BodyLimit } from '../http.ts';
 import { pgInt } from '../inputRules.ts';
 import { isStorableText, UNSTORABLE_MESSAGE } from '../storableText.ts';
-import { DESIGN_SORTS } from './designList.repository.ts';
+import { designSortSchema } from '@shared/contract/designs.ts';
 
 /** Largest request body a design endpoint reads. A design at DESIGN_LIMITS.maxPoints (200,000 points) is
  * about 3–4 MB of JSON, so 5 MiB leaves room for the rest of the body; larger gets 413 saying both limits. */
@@ -47,7 +47,7 @@ export const saveRouteSchema = z.discriminatedUnion('kind', [
 /** Query of GET /api/designs; paged like the other lists (page from 1, pageSize up to 100). */
 export const listQuerySchema = z.strictObject({
   q: z.string().trim().max(200, 'Use at most 200 characters.').refine(isStorableText, UNSTORABLE_MESSAGE).default(''),
-  sort: z.enum(DESIGN_SORTS).default('updated'),
+  sort: designSortSchema.default('updated'),
   /** Default: newest first for dates; A→Z for titles; fewest first for figures. */
   dir: z.enum(['asc', 'desc']).optional(),
   page: z.coerce.number().int('Page must be a whole number.').min(1, 'Page starts at 1.').max(10_000).default(1),

@@ -5,8 +5,7 @@
 import { sql, type RawBuilder } from 'kysely';
 import type { Db } from './design.repository.ts';
 
-export const DESIGN_SORTS = ['title', 'updated', 'created', 'passes', 'stops', 'travel', 'thread'] as const;
-export type DesignSort = (typeof DESIGN_SORTS)[number];
+import type { DesignSort } from '@shared/contract/designs.ts';
 
 export interface DesignListQuery {
   /** Case-insensitive substring of the title; '' matches all. */

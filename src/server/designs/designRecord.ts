@@ -2,51 +2,12 @@
 // are checked by the codec workers (designPayload.ts) and spliced in as text.
 // Figures are different: they are derived data (the engine can always compute them again), so a summary or a
 // saved route that fails its schema is logged and read as absent; one bad row never turns a list into a 500.
-import { z } from 'zod';
+import type { z } from 'zod';
 import type { DesignRouteRow, DesignRow } from '@db/schema.ts';
+import { designSummarySchema, savedRouteSummarySchema, type DesignSummary } from '@shared/contract/figures.ts';
+import type { DesignRecord, SavedRoute } from '@shared/contract/designs.ts';
+import { strokePathsSchema } from '@shared/contract/strokes.ts';
 import type { DesignRecordRow, DesignVersionRecordRow } from './design.repository.ts';
-import type { Design } from '@shared/design/design.schema.ts';
-import type { DesignSummary, RouteFigures } from '../engine/engine.types.ts';
-
-const figure = z.number().finite();
-const routeFiguresShape = {
-  passes: figure,
-  stops: figure,
-  pieces: figure,
-  oddPoints: figure,
-  stitchLength: figure,
-  travelLength: figure,
-  retraceLength: figure,
-  ditchLength: figure,
-  edgeLength: figure,
-};
-const threadShape = z.object({ totalYards: figure, topYards: figure, bobbinYards: figure, bobbins: figure, stitches: figure, minutes: figure });
-
-export const designSummarySchema = z.object({
-  ...routeFiguresShape,
-  travelLowerBound: figure,
-  optimal: z.boolean(),
-  units: z.enum(['in', 'cm']),
-  thread: threadShape,
-}) satisfies z.ZodType<DesignSummary>;
-
-/** Figures stored with a saved route: route figures, plus the planner's proof status for planned routes. */
-export const savedRouteSummarySchema = z.object({
-  ...routeFiguresShape,
-  units: z.enum(['in', 'cm']),
-  optimal: z.boolean().nullable(),
-  thread: threadShape,
-});
-export type SavedRouteSummary = z.infer<typeof savedRouteSummarySchema> & RouteFigures;
-
-export const savedRouteStrokesSchema = z.array(
-  z.object({
-    pass: z.number().int().positive(),
-    kind: z.enum(['stitch', 'retrace', 'ditch', 'edge']),
-    points: z.array(z.tuple([figure, figure])).min(2),
-    length: figure,
-  }),
-);
 
 /** The value when it fits the schema; otherwise null, and the bad row is logged (derived data only). */
 function parseDerived<S extends z.ZodType>(schema: S, value: unknown, what: string): z.output<S> | null {
@@ -62,19 +23,6 @@ export function storedSummary(row: { id: string; summary: unknown }): DesignSumm
   return parseDerived(designSummarySchema, row.summary, `summary of design ${row.id}`);
 }
 
-export interface DesignJson {
-  id: string;
-  title: string;
-  notes: string;
-  version: number;
-  design: Design;
-  summary: DesignSummary | null;
-  /** True while the figures of this version are still being computed (saves do not wait for the planner). */
-  summaryPending: boolean;
-  createdAt: string;
-  updatedAt: string;
-}
-
 /** Figures of the row's current version; null while pending or when the planner refused the design. */
 export function currentSummaryOf(row: Pick<DesignRow, 'id' | 'summary' | 'summary_version' | 'version'>): DesignSummary | null {
   if (row.summary === null || row.summary_version !== row.version) return null;
@@ -86,7 +34,7 @@ export function currentSummaryOf(row: Pick<DesignRow, 'id' | 'summary' | 'summar
  * has accepted (designPayload.ts), so a heavy design is never parsed or re-serialised on the request thread.
  */
 export function designJsonText(row: DesignRecordRow, designText: string): string {
-  const meta: Omit<DesignJson, 'design'> = {
+  const meta: Omit<DesignRecord, 'design'> = {
     id: row.id,
     title: row.title,
     notes: row.notes,
@@ -106,14 +54,13 @@ export function designVersionJsonText(row: DesignVersionRecordRow, designText: s
 }
 
 /** The saved route as the API sends it; null (no saved route) when its strokes or figures do not parse. */
-export function toSavedRouteJson(row: DesignRouteRow, currentVersion: number) {
-  const strokes = parseDerived(savedRouteStrokesSchema, row.strokes, `route strokes of design ${row.design_id}`);
+export function toSavedRouteJson(row: DesignRouteRow, currentVersion: number): SavedRoute | null {
+  const strokes = parseDerived(strokePathsSchema, row.strokes, `route strokes of design ${row.design_id}`);
   const summary = parseDerived(savedRouteSummarySchema, row.summary, `route summary of design ${row.design_id}`);
   if (strokes === null || summary === null) return null;
   return {
     kind: row.kind,
     designVersion: row.design_version,
-    /** False once the design was saved again after this route was computed. */
     current: row.design_version === currentVersion,
     strokes,
     summary,

@@ -6,12 +6,13 @@ import type { Database } from '@db/schema.ts';
 import type { DesignProblem } from '@shared/graph/designProblem.ts';
 import type { PlanSettings } from '@shared/route/planSettings.ts';
 import { err, ok, type Result } from '@shared/result.ts';
-import type { CheckAnswer, DesignPayload, PlanAnswer } from '../engine/engine.types.ts';
+import type { CheckResult } from '@shared/contract/check.ts';
+import type { PlanResult } from '@shared/contract/plan.ts';
+import { strokePathOf, summaryOf } from '@shared/route/routeAnswers.ts';
+import type { DesignPayload } from '../engine/engine.types.ts';
 import { runEngine } from '../engine/enginePool.ts';
-import { summaryOf, threadSummaryOf } from '../engine/engineSummaries.ts';
 import type { PoolFailure } from '../engine/workerPool.ts';
 import { upsertDesignRoute, type DesignRecordRow } from './design.repository.ts';
-import type { SavedRouteSummary } from './designRecord.ts';
 
 export type EngineFailure = { readonly kind: 'engine'; readonly failure: PoolFailure } | { readonly kind: 'problem'; readonly problem: DesignProblem };
 /** Saving an own route can also fail on the route's shape (a zod error at paths `route.i.j`). */
@@ -23,7 +24,7 @@ export function designPayloadOf(row: DesignRecordRow, draftText: string | null):
 }
 
 /** `signal`: the request's; a check whose client went away leaves the queue without running. */
-export async function checkDesignOnServer(design: DesignPayload, account: string, signal?: AbortSignal): Promise<Result<CheckAnswer, EngineFailure>> {
+export async function checkDesignOnServer(design: DesignPayload, account: string, signal?: AbortSignal): Promise<Result<CheckResult, EngineFailure>> {
   const r = await runEngine({ op: 'check', ...design }, { key: account, ...(signal ? { signal } : {}) });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
@@ -34,7 +35,7 @@ export async function planDesignOnServer(
   account: string,
   settings?: PlanSettings,
   signal?: AbortSignal,
-): Promise<Result<PlanAnswer, EngineFailure>> {
+): Promise<Result<PlanResult, EngineFailure>> {
   const r = await runEngine({ op: 'plan', ...design, ...(settings ? { settings } : {}) }, { key: account, ...(signal ? { signal } : {}) });
   if (!r.ok) return err({ kind: 'engine', failure: r.error });
   return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.problem });
@@ -45,9 +46,7 @@ export async function savePlannedRoute(db: Kysely<Database>, row: DesignRecordRo
   const planned = await planDesignOnServer(designPayloadOf(row, null), row.owner_id);
   if (!planned.ok) return planned;
   const p = planned.value;
-  const summary: SavedRouteSummary = summaryOf(p);
-  const strokes = p.route.map(({ pass, kind, points, length }) => ({ pass, kind, points, length }));
-  return ok(await upsertDesignRoute(db, { designId: row.id, kind: 'planned', strokes, summary, designVersion: row.version }));
+  return ok(await upsertDesignRoute(db, { designId: row.id, kind: 'planned', strokes: p.route.map(strokePathOf), summary: summaryOf(p), designVersion: row.version }));
 }
 
 /**
@@ -62,20 +61,6 @@ export async function saveOwnRoute(db: Kysely<Database>, row: DesignRecordRow, r
     if ('invalid' in r.value) return err({ kind: 'invalid', error: new z.ZodError(r.value.invalid.map((i) => ({ ...i, path: [...i.path] })) as z.core.$ZodIssue[]) });
     return err({ kind: 'problem', problem: r.value.problem });
   }
-  const { check, strokes } = r.value.value;
-  const summary: SavedRouteSummary = {
-    passes: check.passes,
-    stops: check.stops,
-    pieces: check.pieces,
-    oddPoints: check.oddPoints,
-    stitchLength: check.stitchLength,
-    travelLength: check.travelLength,
-    retraceLength: check.retraceLength,
-    ditchLength: check.ditchLength,
-    edgeLength: check.edgeLength,
-    units: check.units,
-    optimal: null,
-    thread: threadSummaryOf(check.threadBudget),
-  };
+  const { strokes, summary } = r.value.value;
   return ok(await upsertDesignRoute(db, { designId: row.id, kind: 'own', strokes, summary, designVersion: row.version }));
 }

@@ -1,17 +1,13 @@
-// The engine work a worker does for one task: calls into shared/ and trims the answer to what the API
-// sends (no planar graph, no per-step timings). Runs inside the worker thread; also callable directly.
-import { checkGap } from '@shared/gap/gapCheck.ts';
-import { checkDesign } from '@shared/route/checkDesign.ts';
-import { checkRoute } from '@shared/route/checkRoute.ts';
+// The engine work a worker does for one task: calls into shared/ and cuts the answer to the route contract
+// (shared/route/routeAnswers.ts: no planar graph, no per-step timings). Runs inside the worker thread; also callable directly.
 import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
 import { planDesign, type DesignPlanOptions } from '@shared/route/planDesign.ts';
+import { buildCheckResult, buildOwnRouteResult, summaryOf, toPlanResult } from '@shared/route/routeAnswers.ts';
 import { assertNever } from '@shared/assertNever.ts';
 import { designSchema, type Design } from '@shared/design/design.schema.ts';
 import { buildDesignSvg } from '@shared/export/designSvg.ts';
 import type { DesignPayload, EngineAnswers, EngineTask } from './engine.types.ts';
 import { acceptBody, acceptStored, parseDesignText, plainIssues } from './designCodec.ts';
-import { figuresOf, summaryOf } from './engineSummaries.ts';
-import { buildOwnRouteStrokes } from './ownRouteStrokes.ts';
 
 function designOf(payload: DesignPayload): Design {
   return 'designText' in payload ? parseDesignText(payload.designText) : payload.design;
@@ -32,18 +28,8 @@ export function runEngineTask(task: EngineTask, context: EngineContext): EngineA
       return planned.ok ? { ok: true, value: summaryOf(planned.value) } : { ok: false, problem: planned.error };
     }
     case 'check': {
-      const design = designOf(task);
-      const checked = checkDesign(design, exact);
-      if (!checked.ok) return { ok: false, problem: checked.error };
-      const { plan, ...check } = checked.value;
-      let ownRoute = null;
-      if (design.route && design.route.length > 0) {
-        const own = checkRoute(design);
-        if (!own.ok) return { ok: false, problem: own.error };
-        ownRoute = own.value;
-      }
-      const gap = checkGap(design);
-      return { ok: true, value: { check, plan: figuresOf(plan), threadBudget: plan.threadBudget, ownRoute, gap: gap.ok ? gap.value : null } };
+      const checked = buildCheckResult(designOf(task), exact);
+      return checked.ok ? { ok: true, value: checked.value } : { ok: false, problem: checked.error };
     }
     case 'ownRoute': {
       let design = designOf(task);
@@ -53,30 +39,12 @@ export function runEngineTask(task: EngineTask, context: EngineContext): EngineA
         if (!withRoute.success) return { ok: false, invalid: plainIssues(withRoute.error) };
         design = withRoute.data;
       }
-      const own = checkRoute(design);
-      if (!own.ok) return { ok: false, problem: own.error };
-      const strokes = buildOwnRouteStrokes(design, own.value);
-      return strokes.ok ? { ok: true, value: { check: own.value, strokes: strokes.value } } : { ok: false, problem: strokes.error };
+      const own = buildOwnRouteResult(design);
+      return own.ok ? { ok: true, value: own.value } : { ok: false, problem: own.error };
     }
     case 'plan': {
       const planned = planDesign(designOf(task), { ...exact, stopsTable: true, ...(task.settings ? { settings: task.settings } : {}) });
-      if (!planned.ok) return { ok: false, problem: planned.error };
-      const plan = planned.value;
-      return {
-        ok: true,
-        value: {
-          ...figuresOf(plan),
-          units: plan.units,
-          route: plan.route,
-          threadBudget: plan.threadBudget,
-          lowerBound: plan.travelLowerBound,
-          gapPercent: plan.gapPercent,
-          stopsTable: plan.stopsTable ?? [],
-          threadEnds: plan.threadEnds,
-          settings: plan.settings,
-          exactSearch: plan.exactSearch ? { keptVertices: plan.exactSearch.keptVertices, ms: plan.exactSearch.ms } : null,
-        },
-      };
+      return planned.ok ? { ok: true, value: toPlanResult(planned.value) } : { ok: false, problem: planned.error };
     }
     case 'acceptBody':
       return acceptBody(task.text, task.shape);

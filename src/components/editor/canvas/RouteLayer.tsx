@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { Circle, Group, Layer, Label, Shape, Tag, Text } from 'react-konva';
-import type { StrokeKind } from '@shared/route/routeStrokes.ts';
+import { STROKE_KINDS, type StrokeKind } from '@shared/contract/strokes.ts';
 import { arrowMarks, passStarts, type NeedlePosition, type RouteStroke } from '../../route/routePlayback.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
@@ -30,7 +30,6 @@ function strokeStyle(kind: StrokeKind, theme: CanvasTheme): { color: string; das
   }
 }
 
-const KINDS: readonly StrokeKind[] = ['stitch', 'retrace', 'ditch', 'edge'];
 
 /** Above this many passes the labels would cover the block; the check card still counts them. */
 const MAX_PASS_LABELS = 60;
@@ -48,7 +47,7 @@ export function RouteLayer({ strokes, view, theme, needle, focusPass = null }: R
   return (
     <Layer listening={false}>
       <Group x={view.x} y={view.y} scaleX={view.scale} scaleY={view.scale}>
-        {KINDS.map((kind) => {
+        {STROKE_KINDS.map((kind) => {
           const style = strokeStyle(kind, theme);
           const mine = strokes.filter((s) => s.kind === kind && (focusPass === null || s.pass === focusPass));
           const others = focusPass === null ? [] : strokes.filter((s) => s.kind === kind && s.pass !== focusPass);
@@ -81,7 +80,7 @@ export function RouteLayer({ strokes, view, theme, needle, focusPass = null }: R
             lineJoin="round"
           />
         )}
-        {KINDS.map((kind) => {
+        {STROKE_KINDS.map((kind) => {
           const mine = arrows.filter((a) => a.kind === kind);
           if (mine.length === 0) return null;
           // One shape per kind for all arrows: routes over dense designs have thousands of them.

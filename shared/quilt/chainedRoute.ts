@@ -5,7 +5,7 @@ import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import { ok, type Result } from '../result.ts';
 import { DEFAULT_PLAN_SETTINGS } from '../route/planSettings.ts';
 import { planRoute, type RoutePlan } from '../route/planRoute.ts';
-import type { StrokeKind } from '../route/routeStrokes.ts';
+import type { StrokeKind } from '../contract/strokes.ts';
 import { linkLength, type LinkMetric, type QuiltChain } from './chain.ts';
 import { designCorner, placePoint, type Corner } from './cornerMap.ts';
 import type { CornerCostOptions } from './cornerCosts.ts';

@@ -4,7 +4,7 @@ import type { MipSolver } from '../route/exact/mipSolver.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
 import { placeCornerCosts, placedSize, placePoint } from './cornerMap.ts';
-import { buildCornerCosts, CornerCostCache, cornerCostKey, costTableOf, pairPlanOf, unitScale, type DesignCornerCosts } from './cornerCosts.ts';
+import { buildCornerCosts, CornerCostCache, designCornerCostsSchema, cornerCostKey, costTableOf, pairPlanOf, unitScale, type DesignCornerCosts } from './cornerCosts.ts';
 import type { Orientation } from './quilt.schema.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import { planRoute } from '../route/planRoute.ts';
@@ -130,5 +130,17 @@ describe('CornerCostCache', () => {
     expect(refused.ok).toBe(false);
     expect(cache.has('d2', '1')).toBe(false);
     expect(cornerCostKey('d1', '3', { rotation: 90, mirror: true })).toBe('d1@3/r90m');
+  });
+});
+
+describe('designCornerCostsSchema', () => {
+  it('accepts a built table after a JSON round trip and refuses a broken one', () => {
+    const built = table(oneLine(true));
+    const back = designCornerCostsSchema.safeParse(JSON.parse(JSON.stringify(built)));
+    expect(back.success && back.data).toEqual(built);
+    const lopsided = JSON.parse(JSON.stringify(built));
+    lopsided.pairs[0][1].cost = 99;
+    expect(designCornerCostsSchema.safeParse(lopsided).success).toBe(false);
+    expect(designCornerCostsSchema.safeParse({ ...built, pairs: built.pairs.slice(0, 3) }).success).toBe(false);
   });
 });

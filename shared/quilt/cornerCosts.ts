@@ -1,4 +1,5 @@
-import { bindingBandOf, inchesPerUnit, type Design, type Units } from '../design/design.schema.ts';
+import { z } from 'zod';
+import { bindingBandOf, inchesPerUnit, unitsSchema, type Design, type Units } from '../design/design.schema.ts';
 import type { Point } from '../geometry/point.ts';
 import type { DesignProblem } from '../graph/designProblem.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
@@ -30,6 +31,21 @@ export interface DesignCornerCosts {
   readonly units: Units;
   readonly pairs: readonly (readonly CornerPairPlan[])[];
 }
+
+const length = z.number().finite().min(0);
+const pairPlanSchema = z
+  .object({ cost: length, travelLength: length, stitchLength: length, passes: z.number().int().min(0), optimal: z.boolean(), travelLowerBound: length, cornerSteps: length })
+  .strict();
+const fourOf = <T extends z.ZodType>(item: T) => z.array(item).length(4);
+
+/**
+ * A design's corner-pair table as it comes back from a worker or from storage (unknown until this accepts it):
+ * 4 × 4 pair plans of finite lengths, and every pair equal to its reverse (the table is built that way).
+ */
+export const designCornerCostsSchema = z
+  .object({ units: unitsSchema, pairs: fourOf(fourOf(pairPlanSchema)) })
+  .strict()
+  .refine((t) => t.pairs.every((row, a) => row.every((p, b) => p.cost === t.pairs[b]?.[a]?.cost)), { message: 'corner-pair costs must be the same both ways', path: ['pairs'] });
 
 export interface CornerCostOptions {
   readonly solver?: MipSolver | null;

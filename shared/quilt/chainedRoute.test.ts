@@ -5,7 +5,7 @@ import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
 import type { LinkMetric } from './chain.ts';
 import { placeChainedRoute, planPlacedPair, type ChainedBlockRoute } from './chainedRoute.ts';
-import { CornerCostCache } from './cornerCosts.ts';
+import { CornerCostCache } from './cornerCostCache.ts';
 import { blockRect, finishedSize } from './finishedSize.ts';
 import { quiltSchema, type Quilt } from './quilt.schema.ts';
 import { planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';

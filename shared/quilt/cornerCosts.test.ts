@@ -4,7 +4,8 @@ import type { MipSolver } from '../route/exact/mipSolver.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
 import { placeCornerCosts, placedSize, placePoint } from './cornerMap.ts';
-import { buildCornerCosts, CornerCostCache, designCornerCostsSchema, cornerCostKey, costTableOf, pairPlanOf, unitScale, type DesignCornerCosts } from './cornerCosts.ts';
+import { CornerCostCache, cornerCostKey } from './cornerCostCache.ts';
+import { buildCornerCosts, costTableOf, designCornerCostsSchema, pairPlanOf, unitScale, type DesignCornerCosts } from './cornerCosts.ts';
 import type { Orientation } from './quilt.schema.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import { planRoute } from '../route/planRoute.ts';
@@ -122,6 +123,22 @@ describe('CornerCostCache', () => {
     placed('d1', '4', { rotation: 0, mirror: false });
     expect(planned).toBe(2);
     expect(cache.plannedDesigns).toBe(2);
+  });
+
+  it('takes a proven pair into a known table both ways round and rebuilds the placed tables', () => {
+    const cache = new CornerCostCache();
+    const heuristic = buildCornerCosts(oneLine(true));
+    if (!heuristic.ok) throw new Error('unexpected');
+    cache.design('d3', '1', () => heuristic);
+    const before = cache.placedCosts('d3', '1', { rotation: 90, mirror: false }, 'in', () => heuristic);
+    const better = { ...heuristic.value.pairs[0]![1]!, cost: 5, searched: true };
+    cache.refinePair('d3', '1', 1, 0, better);
+    const t = cache.design('d3', '1', () => heuristic);
+    expect(t.ok && [t.value.pairs[0]![1], t.value.pairs[1]![0]]).toEqual([better, better]);
+    const after = cache.placedCosts('d3', '1', { rotation: 90, mirror: false }, 'in', () => heuristic);
+    expect(after).not.toBe(before);
+    expect(after.ok && after.value[1]![2]).toBe(5); // design corners 0, 1 are placed corners 1, 2 after a quarter turn
+    expect(() => cache.refinePair('nope', '1', 0, 1, better)).toThrow(/quilt\/cornerCostCache/);
   });
 
   it('does not remember a design the planner refused', () => {

@@ -8,7 +8,7 @@ import type { MipSolver } from '../route/exact/mipSolver.ts';
 import { DEFAULT_PLAN_SETTINGS, type PlanSettings } from '../route/planSettings.ts';
 import { planRoute } from '../route/planRoute.ts';
 import type { TravelWeights } from '../route/travelGraph.ts';
-import { designCorner, placeCornerCosts, type Corner, type CornerCosts } from './cornerMap.ts';
+import { designCorner, type Corner, type CornerCosts } from './cornerMap.ts';
 import type { Orientation } from './quilt.schema.ts';
 
 /** The block planner's answer for one (entry corner, exit corner) pair, in design units. */
@@ -22,6 +22,8 @@ export interface CornerPairPlan {
   /** True when the planner proved the travel least for this pair. */
   readonly optimal: boolean;
   readonly travelLowerBound: number;
+  /** True when the exact search was given this pair (a solver was passed); false for the heuristic alone. */
+  readonly searched: boolean;
   /** Straight distance from the entry and exit corners to the route's first and last point (0 when the corners are on it). */
   readonly cornerSteps: number;
 }
@@ -34,7 +36,7 @@ export interface DesignCornerCosts {
 
 const length = z.number().finite().min(0);
 const pairPlanSchema = z
-  .object({ cost: length, travelLength: length, stitchLength: length, passes: z.number().int().min(0), optimal: z.boolean(), travelLowerBound: length, cornerSteps: length })
+  .object({ cost: length, travelLength: length, stitchLength: length, passes: z.number().int().min(0), optimal: z.boolean(), travelLowerBound: length, searched: z.boolean(), cornerSteps: length })
   .strict();
 const fourOf = <T extends z.ZodType>(item: T) => z.array(item).length(4);
 
@@ -73,43 +75,50 @@ export interface CornerCostOptions {
  *   visible line the quilter would have to sew or avoid).
  */
 export function buildCornerCosts(design: Design, options: CornerCostOptions = {}): Result<DesignCornerCosts, DesignProblem> {
-  const settings = options.settings ?? DEFAULT_PLAN_SETTINGS;
-  const corners: readonly Point[] = [[0, 0], [design.width, 0], [design.width, design.height], [0, design.height]];
-  const pairs: CornerPairPlan[][] = corners.map(() => []);
+  const pairs: CornerPairPlan[][] = [[], [], [], []];
   let done = 0;
   for (let a = 0; a < 4; a++) {
     for (let b = a; b < 4; b++) {
-      const built = buildPlanarGraph({ ...design, start: corners[a]!, end: corners[b]! });
-      if (!built.ok) return built;
-      const graph = built.value;
-      const plan = planRoute(graph, {
-        edgeTravel: design.edgeTravel,
-        frame: { width: design.width, height: design.height, band: bindingBandOf(design) },
-        extraStops: settings.extraStops,
-        hiddenEndAllowance: settings.hiddenEndAllowance,
-        start: corners[a]!,
-        end: corners[b]!,
-        ...(options.weights ? { weights: options.weights } : {}),
-        ...(options.clock ? { clock: options.clock } : {}),
-        ...(options.solver ? { exact: { solver: options.solver, timeBudgetMs: settings.timeBudgetMs } } : {}),
-      });
-      const step = (p: Point, v: number | null): number => (v === null ? 0 : Math.hypot(p[0] - graph.vertices[v]![0], p[1] - graph.vertices[v]![1]));
-      const cornerSteps = step(corners[a]!, plan.startVertex) + step(corners[b]!, plan.endVertex);
-      const pair: CornerPairPlan = {
-        cost: plan.travelCost + cornerSteps,
-        travelLength: plan.travelLength + cornerSteps,
-        stitchLength: plan.stitchLength,
-        passes: plan.passes,
-        optimal: plan.optimal,
-        travelLowerBound: plan.travelLowerBound + cornerSteps,
-        cornerSteps,
-      };
-      pairs[a]![b] = pair;
-      pairs[b]![a] = pair;
+      const pair = planCornerPair(design, a as Corner, b as Corner, options);
+      if (!pair.ok) return pair;
+      pairs[a]![b] = pair.value;
+      pairs[b]![a] = pair.value;
       options.onPlanned?.(++done);
     }
   }
   return ok({ units: design.units, pairs });
+}
+
+/** One corner pair of a design (design corners), planned as `buildCornerCosts` does; with a solver, exactly. */
+export function planCornerPair(design: Design, a: Corner, b: Corner, options: Omit<CornerCostOptions, 'onPlanned'> = {}): Result<CornerPairPlan, DesignProblem> {
+  const settings = options.settings ?? DEFAULT_PLAN_SETTINGS;
+  const corners: readonly Point[] = [[0, 0], [design.width, 0], [design.width, design.height], [0, design.height]];
+  const built = buildPlanarGraph({ ...design, start: corners[a]!, end: corners[b]! });
+  if (!built.ok) return built;
+  const graph = built.value;
+  const plan = planRoute(graph, {
+    edgeTravel: design.edgeTravel,
+    frame: { width: design.width, height: design.height, band: bindingBandOf(design) },
+    extraStops: settings.extraStops,
+    hiddenEndAllowance: settings.hiddenEndAllowance,
+    start: corners[a]!,
+    end: corners[b]!,
+    ...(options.weights ? { weights: options.weights } : {}),
+    ...(options.clock ? { clock: options.clock } : {}),
+    ...(options.solver ? { exact: { solver: options.solver, timeBudgetMs: settings.timeBudgetMs } } : {}),
+  });
+  const step = (p: Point, v: number | null): number => (v === null ? 0 : Math.hypot(p[0] - graph.vertices[v]![0], p[1] - graph.vertices[v]![1]));
+  const cornerSteps = step(corners[a]!, plan.startVertex) + step(corners[b]!, plan.endVertex);
+  return ok({
+    cost: plan.travelCost + cornerSteps,
+    travelLength: plan.travelLength + cornerSteps,
+    stitchLength: plan.stitchLength,
+    passes: plan.passes,
+    optimal: plan.optimal,
+    travelLowerBound: plan.travelLowerBound + cornerSteps,
+    searched: Boolean(options.solver),
+    cornerSteps,
+  });
 }
 
 /** Plans per design: the 10 corner pairs a ≤ b (the other 6 are the same routes sewn backwards). */
@@ -118,6 +127,11 @@ export const PLANS_PER_DESIGN = 10;
 /** The design's 4 × 4 cost table (design corners, design units). */
 export function costTableOf(costs: DesignCornerCosts): CornerCosts {
   return costs.pairs.map((row) => row.map((p) => p.cost));
+}
+
+/** The least each pair can cost: its cost where proven, else the planner's lower bound. */
+export function lowerTableOf(costs: DesignCornerCosts): CornerCosts {
+  return costs.pairs.map((row) => row.map((p) => (p.optimal ? p.cost : p.travelLowerBound)));
 }
 
 /** Factor from a design's units to the quilt's. */
@@ -130,50 +144,3 @@ export function pairPlanOf(costs: DesignCornerCosts, entry: Corner, exit: Corner
   return costs.pairs[designCorner(entry, o)]![designCorner(exit, o)]!;
 }
 
-/**
- * Remembers corner-pair costs so a re-plan of the quilt costs only the dynamic programme. The design's own table is
- * planned once per design and revision (turning and mirroring keep lengths, so all eight orientations share it);
- * each placed table is kept under design, revision and orientation (`cornerCostKey`). A design the planner refuses
- * is not remembered.
- */
-export class CornerCostCache {
-  private readonly designs = new Map<string, DesignCornerCosts>();
-  private readonly placed = new Map<string, CornerCosts>();
-
-  /** Whether this design revision's table is known already. */
-  has(designId: string, revision: string): boolean {
-    return this.designs.has(`${designId}@${revision}`);
-  }
-
-  /** The design's table, computed by `compute` the first time this design revision is asked for. */
-  design<E>(designId: string, revision: string, compute: () => Result<DesignCornerCosts, E>): Result<DesignCornerCosts, E> {
-    const key = `${designId}@${revision}`;
-    const found = this.designs.get(key);
-    if (found) return ok(found);
-    const computed = compute();
-    if (computed.ok) this.designs.set(key, computed.value);
-    return computed;
-  }
-
-  /** The placed table in quilt units (`quiltUnits`), from the design's table. */
-  placedCosts<E>(designId: string, revision: string, o: Orientation, quiltUnits: Units, compute: () => Result<DesignCornerCosts, E>): Result<CornerCosts, E> {
-    const key = `${cornerCostKey(designId, revision, o)}:${quiltUnits}`;
-    const found = this.placed.get(key);
-    if (found) return ok(found);
-    const own = this.design(designId, revision, compute);
-    if (!own.ok) return own;
-    const table = placeCornerCosts(costTableOf(own.value), o, unitScale(own.value.units, quiltUnits));
-    this.placed.set(key, table);
-    return ok(table);
-  }
-
-  /** How many design tables have been planned (each is `PLANS_PER_DESIGN` plans). */
-  get plannedDesigns(): number {
-    return this.designs.size;
-  }
-}
-
-/** Cache key of a placed design: id, revision and orientation ("r90m" = mirrored, then a quarter turn). */
-export function cornerCostKey(designId: string, revision: string, o: Orientation): string {
-  return `${designId}@${revision}/r${o.rotation}${o.mirror ? 'm' : ''}`;
-}

@@ -9,7 +9,7 @@ import { buildCornerCosts, costTableOf } from './cornerCosts.ts';
 import { CornerCostCache } from './cornerCostCache.ts';
 import { blockCorners } from './finishedSize.ts';
 import { quiltSchema, type Quilt } from './quilt.schema.ts';
-import { fits, planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';
+import { checkQuiltDesigns, finishQuiltRoute, fits, pairsToProve, planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';
 
 let solver: MipSolver;
 beforeAll(async () => {
@@ -97,6 +97,25 @@ describe('planQuiltRoute', () => {
       return t.ok ? t.value.pairs.flat() : [];
     });
     expect(plans - 30).toBe(new Set(searched.filter((p) => p.searched)).size);
+  });
+
+  it('step by step (as a worker pool would run it): no pair is left to prove once every table is proven', () => {
+    const cache = new CornerCostCache();
+    const checked = checkQuiltDesigns(quilt, designs);
+    if (!checked.ok) throw new Error(checked.error.message);
+    for (const [id, d] of designs) cache.design(id, d.revision, () => buildCornerCosts(d.design, { solver }));
+    const tableOf = (id: string) => {
+      const t = cache.design(id, '1', () => {
+        throw new Error('should be cached');
+      });
+      if (!t.ok) throw new Error('unexpected');
+      return t.value;
+    };
+    const round = pairsToProve(quilt, checked.value, tableOf, 'straight');
+    expect(round.pairs).toEqual([]);
+    const route = finishQuiltRoute(quilt, checked.value, designs, cache, 'straight', round.bound);
+    expect(route.chain.total).toBeCloseTo(round.bound.total, 9);
+    expect(route.lowerBound).toBe(round.bound.total);
   });
 
   it('refuses a design that does not fill its cell, a missing design, and a broken hand order', () => {

@@ -41,6 +41,7 @@ describe('quiltSizes', () => {
     const crib = QUILT_SIZE_PRESETS.find((p) => p.key === 'crib')!;
     expect(presetSize(crib, 'in')).toEqual({ width: 36, height: 52 });
     expect(presetSize(crib, 'cm')).toEqual({ width: 91, height: 132 });
+    for (const p of QUILT_SIZE_PRESETS) expect(p.source).toBe('common practice, from memory');
   });
 
   it('picks the grid nearest the target: a twin (70 × 90) of 12 in blocks, 2 in sashing, 4 in border → 4 × 5', () => {

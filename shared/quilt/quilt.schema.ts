@@ -78,7 +78,7 @@ export const quiltSchema = z
     /** How links between blocks run when the top is quilted in one piece (chain.ts). */
     linkMetric: z.enum(['straight', 'along-seams']).default('straight'),
     /** Quilt-as-you-go settings: joining seam, shrinkage, margin (trim.ts names the defaults' sources). */
-    trim: trimSettingsSchema.default({ shrinkage: 3 }),
+    trim: trimSettingsSchema.default({}),
     /** Thread-budget settings for the whole quilt (threadBudget.ts names the defaults' sources). */
     thread: threadSettingsSchema.optional(),
   })

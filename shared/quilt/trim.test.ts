@@ -113,6 +113,15 @@ describe('planTrim: shrinkage and margin', () => {
     expect(planTrim(q, 0.25, trimSettingsSchema.parse({ shrinkage: 5, margin: r.error.leastMargin })).ok).toBe(true);
   });
 
+  it('names where each setting comes from: the quilt, or the source of its default (from memory, or no source)', () => {
+    const p = plan(q, trimSettingsSchema.parse({ margin: 2 }));
+    expect(p.assumptions).toEqual([
+      { setting: 'seamAllowance', value: 0.25, source: 'common practice, no source' },
+      { setting: 'shrinkage', value: 3, source: expect.stringMatching(/^from memory/) },
+      { setting: 'margin', value: 2, source: 'quilt' },
+    ]);
+  });
+
   it('uses metric defaults for a quilt in centimetres', () => {
     const cm = makeQuilt({ rows: 2, columns: 1, units: 'cm', block: { width: 30, height: 30 } });
     const p = plan(cm);

@@ -4,7 +4,6 @@ import type { Orientation } from './quilt.schema.ts';
 /** Block corners, clockwise from the top left as seen on the quilt top (y down): 0 top-left … 3 bottom-left. */
 export const CORNERS = ['top-left', 'top-right', 'bottom-right', 'bottom-left'] as const;
 export type Corner = 0 | 1 | 2 | 3;
-export type CornerName = (typeof CORNERS)[number];
 
 /** A cost for each (entry corner, exit corner) pair: `costs[entry][exit]`, 4 × 4. */
 export type CornerCosts = readonly (readonly number[])[];

@@ -17,6 +17,8 @@ describe('quiltSchema', () => {
     expect(q.borders).toEqual([]);
     expect(q.placements[0]![0]).toEqual({ designId: 'a', rotation: 0, mirror: false });
     expect(q.order).toEqual({ kind: 'rows' });
+    expect(q.linkMetric).toBe('straight');
+    expect(q.trim).toEqual({});
   });
 
   it('refuses a map whose rows or cells do not match the grid', () => {

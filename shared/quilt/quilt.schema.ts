@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { DESIGN_LIMITS, threadSettingsSchema, unitsSchema } from '../design/design.schema.ts';
 import { checkHandOrder } from './order.ts';
+import { trimSettingsSchema } from './trim.ts';
 
 /**
  * The stored quilt format (version 1): a quilt map of rows × columns of cells, each empty or holding a placed design,
@@ -74,6 +75,10 @@ export const quiltSchema = z
     /** What lies beyond the finished edge until the binding is sewn on (its seam allowance), in quilt units. */
     bindingAllowance: length.min(0).optional(),
     order: quiltOrderSchema.default({ kind: 'rows' }),
+    /** How links between blocks run when the top is quilted in one piece (chain.ts). */
+    linkMetric: z.enum(['straight', 'along-seams']).default('straight'),
+    /** Quilt-as-you-go settings: joining seam, shrinkage, margin (trim.ts names the defaults' sources). */
+    trim: trimSettingsSchema.default({}),
     /** Thread-budget settings for the whole quilt (threadBudget.ts names the defaults' sources). */
     thread: threadSettingsSchema.optional(),
   })

@@ -3,11 +3,13 @@ import { designSchema, type Design } from '../design/design.schema.ts';
 import type { MipSolver } from '../route/exact/mipSolver.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
-import { linkLength } from './chain.ts';
-import { CornerCostCache } from './cornerCosts.ts';
+import { chainBlocksOf, linkLength, planChain } from './chain.ts';
+import { placeCornerCosts } from './cornerMap.ts';
+import { buildCornerCosts, costTableOf } from './cornerCosts.ts';
+import { CornerCostCache } from './cornerCostCache.ts';
 import { blockCorners } from './finishedSize.ts';
 import { quiltSchema, type Quilt } from './quilt.schema.ts';
-import { fits, planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';
+import { checkQuiltDesigns, finishQuiltRoute, fits, pairsToProve, planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';
 
 let solver: MipSolver;
 beforeAll(async () => {
@@ -44,7 +46,11 @@ describe('planQuiltRoute', () => {
     if (!r.ok) throw new Error(r.error.message);
     const { order, chain, budget } = r.value;
     expect(order).toEqual([{ row: 0, column: 0 }, { row: 0, column: 1 }, { row: 1, column: 1 }, { row: 1, column: 0 }]);
-    expect(progress.at(-1)).toEqual([48, 48]); // three designs × 16 pairs
+    // Three designs × 10 pairs from the heuristic first, then the pairs the exact search proves, one at a time.
+    expect(progress[29]).toEqual([30, 30]);
+    progress.forEach(([d], k) => expect(d).toBe(k + 1));
+    expect(progress.at(-1)![0]).toBe(progress.at(-1)![1]);
+    expect(r.value.lowerBound).toBeCloseTo(chain.total, 9);
     // Links recomputed from the chosen corners and the quilt map.
     let links = 0;
     for (let i = 1; i < chain.steps.length; i++) {
@@ -67,6 +73,49 @@ describe('planQuiltRoute', () => {
     const second = planQuiltRoute(quilt, designs, cache, { solver, onProgress: (d) => again.push(d) });
     expect(again).toEqual([]);
     expect(second.ok && second.value.chain.total).toBeCloseTo(chain.total, 12);
+  });
+
+  it('proves only the pairs the chain needs, and finds the same least total as fully proven tables', () => {
+    const cache = new CornerCostCache();
+    let plans = 0;
+    const r = planQuiltRoute(quilt, designs, cache, { solver, onProgress: () => plans++ });
+    if (!r.ok) throw new Error(r.error.message);
+    // Reference: every design's 10 pairs planned exactly, the chain over those tables.
+    const full = new Map([...designs].map(([id, d]) => {
+      const t = buildCornerCosts(d.design, { solver });
+      if (!t.ok) throw new Error(t.error.message);
+      expect(t.value.pairs.every((row) => row.every((p) => p.optimal))).toBe(true);
+      return [id, t.value] as const;
+    }));
+    const reference = planChain(chainBlocksOf(quilt, r.value.order, (p) => placeCornerCosts(costTableOf(full.get(p.designId)!), p)));
+    expect(r.value.chain.total).toBeCloseTo(reference.total, 9);
+    expect(r.value.lowerBound).toBeCloseTo(reference.total, 9);
+    const searched = [...designs.keys()].flatMap((id) => {
+      const t = cache.design(id, '1', () => {
+        throw new Error('should be cached');
+      });
+      return t.ok ? t.value.pairs.flat() : [];
+    });
+    expect(plans - 30).toBe(new Set(searched.filter((p) => p.searched)).size);
+  });
+
+  it('step by step (as a worker pool would run it): no pair is left to prove once every table is proven', () => {
+    const cache = new CornerCostCache();
+    const checked = checkQuiltDesigns(quilt, designs);
+    if (!checked.ok) throw new Error(checked.error.message);
+    for (const [id, d] of designs) cache.design(id, d.revision, () => buildCornerCosts(d.design, { solver }));
+    const tableOf = (id: string) => {
+      const t = cache.design(id, '1', () => {
+        throw new Error('should be cached');
+      });
+      if (!t.ok) throw new Error('unexpected');
+      return t.value;
+    };
+    const round = pairsToProve(quilt, checked.value, tableOf, 'straight');
+    expect(round.pairs).toEqual([]);
+    const route = finishQuiltRoute(quilt, checked.value, designs, cache, 'straight', round.bound);
+    expect(route.chain.total).toBeCloseTo(round.bound.total, 9);
+    expect(route.lowerBound).toBe(round.bound.total);
   });
 
   it('refuses a design that does not fill its cell, a missing design, and a broken hand order', () => {

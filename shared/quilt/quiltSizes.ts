@@ -8,6 +8,8 @@ export interface QuiltSizePreset {
   /** Finished size in inches. */
   readonly widthIn: number;
   readonly heightIn: number;
+  /** Shown beside the size: these are starting points, not measurements. */
+  readonly source: 'common practice, from memory';
 }
 
 /**
@@ -15,15 +17,14 @@ export interface QuiltSizePreset {
  * charts vary by several inches with the drop over the mattress side; none was checked). Offered as starting points.
  */
 export const QUILT_SIZE_PRESETS: readonly QuiltSizePreset[] = [
-  { key: 'crib', label: 'Crib', widthIn: 36, heightIn: 52 },
-  { key: 'lap', label: 'Lap or throw', widthIn: 50, heightIn: 65 },
-  { key: 'twin', label: 'Twin bed', widthIn: 70, heightIn: 90 },
-  { key: 'full', label: 'Full (double) bed', widthIn: 85, heightIn: 108 },
-  { key: 'queen', label: 'Queen bed', widthIn: 90, heightIn: 108 },
-  { key: 'king', label: 'King bed', widthIn: 108, heightIn: 108 },
+  { key: 'crib', label: 'Crib', widthIn: 36, heightIn: 52, source: 'common practice, from memory' },
+  { key: 'lap', label: 'Lap or throw', widthIn: 50, heightIn: 65, source: 'common practice, from memory' },
+  { key: 'twin', label: 'Twin bed', widthIn: 70, heightIn: 90, source: 'common practice, from memory' },
+  { key: 'full', label: 'Full (double) bed', widthIn: 85, heightIn: 108, source: 'common practice, from memory' },
+  { key: 'queen', label: 'Queen bed', widthIn: 90, heightIn: 108, source: 'common practice, from memory' },
+  { key: 'king', label: 'King bed', widthIn: 108, heightIn: 108, source: 'common practice, from memory' },
 ];
 
-export const QUILT_SIZE_SOURCE = 'common practice, from memory';
 
 /** A preset's size in the given units (centimetres rounded to whole cm). */
 export function presetSize(preset: QuiltSizePreset, units: Units): Size {

@@ -1,6 +1,6 @@
-/** Quilt fixtures for the quilt core's tests: random small quilts (fast-check) and a plain builder. */
-import fc from 'fast-check';
+/** Quilt fixtures for the quilt core's tests: a plain builder and seeded random quilts (no fast-check here: shared/ may not import it). */
 import type { Units } from '../design/design.schema.ts';
+import { seededRandom } from '../seededRandom.ts';
 import { quiltSchema, type Placement, type Quilt, type Rotation } from './quilt.schema.ts';
 
 export interface QuiltShape {
@@ -38,30 +38,28 @@ export function makeQuilt(shape: QuiltShape): Quilt {
   });
 }
 
-/** Lengths on a 1/8 in grid, as a quilter measures. */
-const eighths = (min: number, max: number): fc.Arbitrary<number> => fc.integer({ min: min * 8, max: max * 8 }).map((k) => k / 8);
-
-/** Random quilts in inches: 1–`maxRows` × 1–`maxColumns`, 3–16 in blocks, 0–3 in sashing, up to 3 borders, at most 120 in a side. */
-export function quiltArb(maxRows: number, maxColumns: number): fc.Arbitrary<Quilt> {
-  return fc
-    .record({
-      rows: fc.integer({ min: 1, max: maxRows }),
-      columns: fc.integer({ min: 1, max: maxColumns }),
-      width: eighths(3, 16),
-      height: eighths(3, 16),
-      sashing: fc.oneof(fc.constant(0), eighths(0, 3)),
-      borders: fc.array(eighths(0.5, 6), { maxLength: 3 }),
-      bindingAllowance: fc.constantFrom(0, 0.25, 0.375, 0.5),
-      turns: fc.array(fc.record({ rotation: fc.constantFrom<Rotation>(0, 90, 180, 270), mirror: fc.boolean() }), { minLength: 400, maxLength: 400 }),
-    })
-    // Keep within the 120 in longest side the schema allows.
-    .filter((q) => {
-      const b = 2 * q.borders.reduce((s, x) => s + x, 0);
-      return q.columns * q.width + (q.columns - 1) * q.sashing + b <= 120 && q.rows * q.height + (q.rows - 1) * q.sashing + b <= 120;
-    })
-    .map((q) => {
-      const quilt = makeQuilt({ rows: q.rows, columns: q.columns, block: { width: q.width, height: q.height }, sashing: q.sashing, borders: q.borders, bindingAllowance: q.bindingAllowance });
-      const placements = quilt.placements.map((row, r) => row.map((p, c) => (p ? { ...p, ...q.turns[r * q.columns + c]! } : null)));
-      return { ...quilt, placements };
-    });
+/**
+ * A random quilt in inches from a seed (mulberry32, so a failing seed can be pinned): 1–`maxRows` × 1–`maxColumns`,
+ * 3–16 in blocks, no sashing or 1/8–3 in, up to 3 borders of 1/2–6 in, all on a 1/8 in grid as a quilter measures,
+ * a binding allowance of 0, 1/4, 3/8 or 1/2 in, every cell filled with a random turn and mirror, and at most 120 in a
+ * side (the schema's cap; drawn again until it fits). Property tests draw the seed with fast-check.
+ */
+export function randomQuilt(seed: number, maxRows: number, maxColumns: number): Quilt {
+  const rnd = seededRandom(seed);
+  const int = (min: number, max: number): number => min + Math.floor(rnd() * (max - min + 1));
+  const eighths = (min: number, max: number): number => int(min * 8, max * 8) / 8;
+  for (;;) {
+    const rows = int(1, maxRows);
+    const columns = int(1, maxColumns);
+    const width = eighths(3, 16);
+    const height = eighths(3, 16);
+    const sashing = rnd() < 0.3 ? 0 : eighths(0.125, 3);
+    const borders = Array.from({ length: int(0, 3) }, () => eighths(0.5, 6));
+    const b = 2 * borders.reduce((s, x) => s + x, 0);
+    if (columns * width + (columns - 1) * sashing + b > 120 || rows * height + (rows - 1) * sashing + b > 120) continue;
+    const quilt = makeQuilt({ rows, columns, block: { width, height }, sashing, borders, bindingAllowance: [0, 0.25, 0.375, 0.5][int(0, 3)]! });
+    const turns: Rotation[] = [0, 90, 180, 270];
+    const placements = quilt.placements.map((row) => row.map((p) => (p ? { ...p, rotation: turns[int(0, 3)]!, mirror: rnd() < 0.5 } : null)));
+    return { ...quilt, placements };
+  }
 }

@@ -2,7 +2,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { blockRect, finishedSize } from './finishedSize.ts';
 import { bindingAllowanceOf, type Quilt } from './quilt.schema.ts';
-import { makeQuilt, quiltArb } from './testQuilts.ts';
+import { makeQuilt, randomQuilt } from './testQuilts.ts';
+
+/** Random quilts up to `rows` × `columns`, from a fast-check seed. */
+const seededQuilt = (rows: number, columns: number) => fc.integer().map((seed) => randomQuilt(seed, rows, columns));
 import { planTrim, trimSettingsSchema, type TrimPlan } from './trim.ts';
 
 const TOLERANCE = 1 / 64; // in: the issue's check
@@ -50,7 +53,7 @@ describe('planTrim: property', () => {
    */
   it('the joined quilt equals the planned finished size, and every block lands on its place in the map', () => {
     fc.assert(
-      fc.property(quiltArb(5, 5), fc.constantFrom(0.25, 0.375, 0.5), (q, seam) => {
+      fc.property(seededQuilt(5, 5), fc.constantFrom(0.25, 0.375, 0.5), (q, seam) => {
         const p = plan(q, trimSettingsSchema.parse({ seamAllowance: seam }));
         const size = finishedSize(q);
         const binding = bindingAllowanceOf(q);
@@ -108,6 +111,15 @@ describe('planTrim: shrinkage and margin', () => {
     // Largest cut from the centre is 8.25 in: 0.05 × 8.25 / 0.95 = 0.434 in.
     expect(r.error.leastMargin).toBeCloseTo((0.05 * 8.25) / 0.95, 12);
     expect(planTrim(q, 0.25, trimSettingsSchema.parse({ shrinkage: 5, margin: r.error.leastMargin })).ok).toBe(true);
+  });
+
+  it('names where each setting comes from: the quilt, or the source of its default (from memory, or no source)', () => {
+    const p = plan(q, trimSettingsSchema.parse({ margin: 2 }));
+    expect(p.assumptions).toEqual([
+      { setting: 'seamAllowance', value: 0.25, source: 'common practice, no source' },
+      { setting: 'shrinkage', value: 3, source: expect.stringMatching(/^from memory/) },
+      { setting: 'margin', value: 2, source: 'quilt' },
+    ]);
   });
 
   it('uses metric defaults for a quilt in centimetres', () => {

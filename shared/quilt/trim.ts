@@ -14,17 +14,25 @@ import type { Cell, Quilt } from './quilt.schema.ts';
 export const trimSettingsSchema = z
   .object({
     seamAllowance: z.number().finite().positive().max(2).optional(),
-    shrinkage: z.number().finite().min(0).max(20).default(3),
+    shrinkage: z.number().finite().min(0).max(20).optional(),
     margin: z.number().finite().min(0).max(10).optional(),
   })
   .strict();
 export type TrimSettings = z.output<typeof trimSettingsSchema>;
 
+/** Where each default comes from, shown beside the figure as the thread budget does. */
 export const TRIM_SOURCES = {
   seamAllowance: 'common practice, no source',
   shrinkage: 'from memory: quilting draws a sandwich in by roughly 2–5 %',
   margin: 'from memory: about 1 in of batting and backing beyond the cut line',
 } as const;
+
+/** A setting in use and its source: 'quilt' when the quilt sets it, else the default's source. */
+export interface TrimAssumption {
+  readonly setting: keyof typeof TRIM_SOURCES;
+  readonly value: number;
+  readonly source: string;
+}
 
 export type Side = 'top' | 'right' | 'bottom' | 'left';
 export const SIDES: readonly Side[] = ['top', 'right', 'bottom', 'left'];
@@ -60,6 +68,8 @@ export interface TrimPlan {
   readonly bindingAllowance: number;
   readonly shrinkage: number;
   readonly margin: number;
+  /** The settings in use and where each comes from. */
+  readonly assumptions: readonly TrimAssumption[];
   readonly blocks: readonly BlockTrim[];
   /** The joined top before binding: Σ cut sizes along a row or column − 2 seam allowances per join. */
   readonly joined: Size;
@@ -90,7 +100,13 @@ export function planTrim(quilt: QuiltFrame & Pick<Quilt, 'units' | 'placements'>
   const perInch = quilt.units === 'in' ? 1 : CM_PER_INCH;
   const seam = settings.seamAllowance ?? 0.25 * perInch;
   const margin = settings.margin ?? (quilt.units === 'in' ? 1 : 2.5);
-  const shrink = settings.shrinkage / 100;
+  const shrinkage = settings.shrinkage ?? 3;
+  const shrink = shrinkage / 100;
+  const assumptions: TrimAssumption[] = [
+    { setting: 'seamAllowance', value: seam, source: settings.seamAllowance === undefined ? TRIM_SOURCES.seamAllowance : 'quilt' },
+    { setting: 'shrinkage', value: shrinkage, source: settings.shrinkage === undefined ? TRIM_SOURCES.shrinkage : 'quilt' },
+    { setting: 'margin', value: margin, source: settings.margin === undefined ? TRIM_SOURCES.margin : 'quilt' },
+  ];
   const border = bordersWidth(quilt);
   const outerSides = (row: number, column: number): Record<Side, boolean> => ({ top: row === 0, right: column === quilt.columns - 1, bottom: row === quilt.rows - 1, left: column === 0 });
   const keepOf = (outer: boolean): number => (outer ? border + bindingAllowance : quilt.sashing / 2 + seam);
@@ -123,7 +139,7 @@ export function planTrim(quilt: QuiltFrame & Pick<Quilt, 'units' | 'placements'>
     }
   }
   if (margin < leastMargin) {
-    return err({ kind: 'margin-too-small', leastMargin, message: `At ${settings.shrinkage} % shrinkage leave at least ${leastMargin.toFixed(2)} ${quilt.units} beyond each cut line before quilting.` });
+    return err({ kind: 'margin-too-small', leastMargin, message: `At ${shrinkage} % shrinkage leave at least ${leastMargin.toFixed(2)} ${quilt.units} beyond each cut line before quilting.` });
   }
   // Joined top: the cut widths along the top row and the cut heights down the left column (every row and column
   // is cut alike), less one seam allowance from each block at each join.
@@ -135,7 +151,8 @@ export function planTrim(quilt: QuiltFrame & Pick<Quilt, 'units' | 'placements'>
     units: quilt.units,
     seamAllowance: seam,
     bindingAllowance,
-    shrinkage: settings.shrinkage,
+    shrinkage,
+    assumptions,
     margin,
     blocks,
     joined: { width, height },

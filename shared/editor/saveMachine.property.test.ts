@@ -10,7 +10,7 @@ type Doc = string;
 type Action =
   | { readonly kind: 'edit' }
   | { readonly kind: 'tick' }
-  | { readonly kind: 'answer'; readonly outcome: 'ok' | 'refused' | 'unavailable' | 'lost-answer'; readonly retryAfterMs?: number }
+  | { readonly kind: 'answer'; readonly outcome: 'ok' | 'refused' | 'unavailable' | 'lost-answer'; readonly retryAfterMs?: number | undefined }
   | { readonly kind: 'other-tab-saves' }
   | { readonly kind: 'online' }
   | { readonly kind: 'save-now' }

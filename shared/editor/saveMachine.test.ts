@@ -134,3 +134,9 @@ describe('editor/saveMachine: conflict and refusal', () => {
     expect(s.commands).toEqual([{ kind: 'cancelSchedule' }, { kind: 'clearDraft' }]);
   });
 });
+
+describe('editor/saveMachine: backoff', () => {
+  it('waits 1, 2, 4, 8, 16 s, then stays at 30 s', () => {
+    expect([1, 2, 3, 4, 5, 6, 12].map(retryDelayMs)).toEqual([1000, 2000, 4000, 8000, 16000, 30000, 30000]);
+  });
+});

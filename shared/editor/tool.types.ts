@@ -14,7 +14,7 @@ export type ToolEvent =
   | { readonly kind: 'pointerMove'; readonly point: Point }
   | { readonly kind: 'pointerUp'; readonly point: Point }
   | { readonly kind: 'doubleClick'; readonly point: Point }
-  | { readonly kind: 'key'; readonly key: 'Enter' | 'Escape' | 'Backspace' | 'Delete' };
+  | { readonly kind: 'key'; readonly key: 'Enter' | 'Escape' | 'Backspace' };
 
 /**
  * What a tool step yields: its next state, lines to draw as a preview (never saved), and at most one

@@ -26,8 +26,6 @@ export interface ToolController {
   onKey(key: 'Enter' | 'Escape' | 'Backspace'): boolean;
   setSelection(s: Selection | null): void;
   clearOwnOrder(): void;
-  /** The point the pointer is over (snapped), for the motif and guide tools. */
-  readonly hover: Point | null;
 }
 
 export interface ToolOptions {
@@ -178,7 +176,6 @@ export function useToolController(o: ToolOptions): ToolController {
     selection,
     ownOrder,
     cursor,
-    hover: snapped?.point ?? null,
     onPointer,
     onDoubleClick,
     onKey,

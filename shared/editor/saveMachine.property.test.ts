@@ -16,7 +16,7 @@ type Action =
   | { readonly kind: 'save-now' }
   | { readonly kind: 'resolve'; readonly choice: 'reload' | 'keep-mine' }
   | { readonly kind: 'go-back' }
-  | { readonly kind: 'go-back-conflict' };
+  | { readonly kind: 'go-back-conflict'; readonly withCopy: boolean };
 
 interface World {
   s: SaveState<Doc>;
@@ -43,7 +43,7 @@ const actionArb: fc.Arbitrary<Action> = fc.oneof(
   { weight: 1, arbitrary: fc.constant({ kind: 'save-now' as const }) },
   { weight: 2, arbitrary: fc.record({ kind: fc.constant('resolve' as const), choice: fc.constantFrom('reload' as const, 'keep-mine' as const) }) },
   { weight: 1, arbitrary: fc.constant({ kind: 'go-back' as const }) },
-  { weight: 1, arbitrary: fc.constant({ kind: 'go-back-conflict' as const }) },
+  { weight: 1, arbitrary: fc.record({ kind: fc.constant('go-back-conflict' as const), withCopy: fc.boolean() }) },
 );
 
 const startArb = fc.constantFrom('clean', 'draft-current', 'draft-stale', 'offline-draft');
@@ -132,7 +132,8 @@ function act(w: World, a: Action): void {
       // The versions panel offers going back only when everything is saved (canGoBack).
       if (w.s.phase !== 'saved' || w.pending) return;
       if (a.kind === 'go-back-conflict' || w.version !== w.s.baseVersion) {
-        return deliver(w, { kind: 'openConflict', server: { version: w.version, doc: w.history.get(w.version)! } });
+        const withCopy = a.kind === 'go-back' || a.withCopy;
+        return deliver(w, { kind: 'openConflict', server: withCopy ? { version: w.version, doc: w.history.get(w.version)! } : null });
       }
       const version = serverStore(w, 'restored');
       w.known = version;

@@ -140,3 +140,14 @@ describe('editor/saveMachine: backoff', () => {
     expect([1, 2, 3, 4, 5, 6, 12].map(retryDelayMs)).toEqual([1000, 2000, 4000, 8000, 16000, 30000, 30000]);
   });
 });
+
+describe('editor/saveMachine: pinned from the property test', () => {
+  it('a conflict without the server\'s copy, with nothing unsaved, closes as saved instead of waiting forever', () => {
+    // Counterexample: ["clean", [go-back-conflict without a copy, resolve reload]] left the phase "edited" with no timer.
+    const s = run([open(), { kind: 'openConflict', server: null }, { kind: 'resolveConflict', choice: 'reload' }]);
+    expect(s.state.phase).toBe('saved');
+    expect(s.commands).toEqual([]);
+    const edited = run([open(), edit('mine'), { kind: 'openConflict', server: null }, { kind: 'resolveConflict', choice: 'keep-mine' }]);
+    expect(edited.commands).toEqual([{ kind: 'send', doc: 'mine', baseVersion: 3 }]);
+  });
+});

@@ -207,7 +207,12 @@ function failed<D>(state: SaveState<D>, failure: SaveFailure<D>, now: number): S
 function resolve<D>(state: SaveState<D>, choice: 'reload' | 'keep-mine'): SaveStep<D> {
   if (state.phase !== 'conflict') return { state, commands: [] };
   const copy = state.server;
-  if (!copy) return trySend({ ...state, phase: 'edited', server: null });
+  if (!copy) {
+    // The 409 carried no copy: there is nothing to reload, so either choice sends mine again (if anything is unsaved).
+    const phase = hasUnsavedEdits(state) ? 'edited' : state.inFlight === null ? 'saved' : 'saving';
+    const next = trySend({ ...state, phase, server: null });
+    return phase === 'edited' && next.commands.length === 0 ? { state: next.state, commands: [{ kind: 'schedule', ms: SAVE_DEBOUNCE_MS }] } : next;
+  }
   if (choice === 'reload') {
     const next: SaveState<D> = { ...state, phase: state.inFlight === null ? 'saved' : 'saving', doc: copy.doc, baseVersion: copy.version, savedRevision: state.revision, attempt: 0, server: null, generation: state.generation + 1 };
     return { state: next, commands: [{ kind: 'clearDraft' }] };

@@ -150,4 +150,11 @@ describe('editor/saveMachine: pinned from the property test', () => {
     const edited = run([open(), edit('mine'), { kind: 'openConflict', server: null }, { kind: 'resolveConflict', choice: 'keep-mine' }]);
     expect(edited.commands).toEqual([{ kind: 'send', doc: 'mine', baseVersion: 3 }]);
   });
+
+  it('a save that lands while a conflict is open keeps the conflict and the draft', () => {
+    const sending = run([open(), edit('mine'), tick, { kind: 'openConflict', server: { version: 5, doc: 'theirs' } }]);
+    const landed = stepSave(sending.state, { kind: 'saveSucceeded', version: 4 });
+    expect(landed.state).toMatchObject({ phase: 'conflict', inFlight: null, baseVersion: 4 });
+    expect(landed.commands).toEqual([]);
+  });
 });

@@ -96,7 +96,7 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
   }, [places]);
 
   const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, endsMode, dispatch: history.dispatch, onPickPatch });
-  const check = useRouteCheck(designId, design);
+  const check = useRouteCheck(designId, design, doc.savedCheck, doc.status.kind);
   const pieces = useMemo(() => findLinePieces(design), [design]);
   const routes = useRoutePlan(designId, design, doc.version);
   const shownStrokes = routes.plan?.route ?? (routes.saved && routes.savedIsCurrent ? routes.saved.strokes : null);

@@ -1,7 +1,8 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
 import { apiRequest } from '../designs/apiClient.ts';
-import type { DesignRecord } from '@shared/contract/designs.ts';
+import { savedWithCheckAnswerSchema, type DesignRecord } from '@shared/contract/designs.ts';
+import type { SavedCheck } from '@shared/editor/checkSource.ts';
 import { parseDesignRecord } from '../designs/designsApi.ts';
 import { clearDraft, loadDraft, saveDraft } from './draftStore.ts';
 import { canWorkOnDraftWhileUnavailable, saveFailureAction } from './saveRetry.ts';
@@ -23,6 +24,8 @@ export interface DesignDocument {
   readonly status: SaveStatus;
   /** The server's copy while a conflict is open. */
   readonly serverCopy: DesignRecord | null;
+  /** The route check the last save answered with, for the document it sent (saves ask for it: PUT ?check=1). */
+  readonly savedCheck: SavedCheck | null;
   /** Bumped whenever the document is replaced wholesale (load, reload): undo history must restart. */
   readonly generation: number;
   /** Sets the document after an edit (the history applies commands and hands the result here). */
@@ -48,6 +51,7 @@ export function useDesignDocument(designId: string): DesignDocument {
   const [title, setTitleState] = useState('');
   const [status, setStatus] = useState<SaveStatus>({ kind: 'saved' });
   const [serverCopy, setServerCopy] = useState<DesignRecord | null>(null);
+  const [savedCheck, setSavedCheck] = useState<SavedCheck | null>(null);
   const [generation, setGeneration] = useState(0);
   const s = useRef({ version: 0, notes: '', revision: 0, savedRevision: 0, inFlight: false, attempt: 0, timer: 0 as number | ReturnType<typeof setTimeout>, design: null as Design | null, title: '', conflict: false, refused: false });
   const [version, setVersion] = useState(0);
@@ -62,11 +66,15 @@ export function useDesignDocument(designId: string): DesignDocument {
     if (st.inFlight || st.conflict || !st.design || st.revision === st.savedRevision) return;
     st.inFlight = true;
     const sending = st.revision;
+    const sentDesign = st.design;
     setStatus({ kind: 'saving' });
-    const res = await apiRequest('PUT', `/api/designs/${designId}`, { baseVersion: st.version, title: st.title, notes: st.notes, design: st.design });
+    // ?check=1: the answer carries the route check of the saved drawing, so the card needs no request of its own.
+    const res = await apiRequest('PUT', `/api/designs/${designId}?check=1`, { baseVersion: st.version, title: st.title, notes: st.notes, design: sentDesign });
     st.inFlight = false;
     if (res.ok) {
-      const record = parseDesignRecord(res.value);
+      const answer = savedWithCheckAnswerSchema.safeParse(res.value);
+      const record = answer.success ? answer.data.design : parseDesignRecord(res.value);
+      if (answer.success) setSavedCheck({ design: sentDesign, check: answer.data.check, checkError: answer.data.checkError });
       st.version = record?.version ?? st.version + 1;
       setVersion(st.version);
       st.savedRevision = sending;
@@ -248,5 +256,5 @@ export function useDesignDocument(designId: string): DesignDocument {
     setStatus({ kind: 'conflict', serverVersion: server?.version ?? s.current.version });
   }, []);
 
-  return { load, design, title, version, status, serverCopy, generation, setDesign, setTitle, resolveConflict, saveNow, replaceFromServer, openConflict };
+  return { load, design, title, version, status, serverCopy, savedCheck, generation, setDesign, setTitle, resolveConflict, saveNow, replaceFromServer, openConflict };
 }

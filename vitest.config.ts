@@ -1,4 +1,4 @@
-import { defineConfig } from 'vitest/config';
+import { configDefaults, defineConfig } from 'vitest/config';
 import { importAliases } from './importAliases.mjs';
 
 // Two projects: `unit` needs nothing running; `app` needs the database, mail sink and built server
@@ -12,6 +12,8 @@ export default defineConfig({
         test: {
           name: 'unit',
           include: ['shared/**/*.test.ts', 'src/**/*.test.ts', 'db/**/*.test.ts', 'tests/unit/**/*.test.ts', 'tests/reference/**/*.test.ts'],
+          // Fake source trees the architecture test reads; their *.test.ts files are planted imports, not tests.
+          exclude: [...configDefaults.exclude, 'tests/unit/fixtures/**'],
           environment: 'node',
           testTimeout: 60_000,
         },

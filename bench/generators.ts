@@ -17,7 +17,7 @@ function block(lines: Polyline[], seams: Polyline[], edgeTravel: boolean, size =
 /**
  * Crosshatch: N = size/spacing vertical and horizontal lines at spacing/2 + n·spacing, edge to edge.
  * `border: 'stitched'` adds the block outline as a quilting line and turns edge travel off (the E9
- * family of shared/notes/engine-references.md §2: 4N odd points, optimal retrace 24 on a 12 in block);
+ * family of docs/engine.md §7.2: 4N odd points, optimal retrace 24 on a 12 in block);
  * `border: 'travel'` leaves the outline to edge travel.
  */
 export function crosshatchDesign(spacing: number, border: 'stitched' | 'travel', size = 12): Design {

@@ -31,7 +31,7 @@ const env = {
   MAIL_CAPTURE_DIR: path.join(ROOT, '.data', 'mail'),
 };
 runTs('db/migrate.ts', env);
-runTs('db/seed/index.ts', env);
+runTs('scripts/seed/index.ts', env);
 mkdirSync(env.MAIL_CAPTURE_DIR, { recursive: true });
 const mail = await startMailSink({ dir: env.MAIL_CAPTURE_DIR, port: await findFreePort(2525) });
 const s3 = await startS3Fake({ dir: path.join(ROOT, '.data', 's3') });
@@ -75,8 +75,8 @@ process.on('SIGINT', shutdown);
 process.on('SIGTERM', shutdown);
 
 function readDemoAccounts() {
-  return JSON.parse(readFileSync(path.join(ROOT, 'db', 'seed', 'demo-accounts.json'), 'utf8')).accounts;
+  return JSON.parse(readFileSync(path.join(ROOT, 'scripts', 'seed', 'demo-accounts.json'), 'utf8')).accounts;
 }
 function readDemoPassword() {
-  return JSON.parse(readFileSync(path.join(ROOT, 'db', 'seed', 'demo-accounts.json'), 'utf8')).password;
+  return JSON.parse(readFileSync(path.join(ROOT, 'scripts', 'seed', 'demo-accounts.json'), 'utf8')).password;
 }

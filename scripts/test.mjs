@@ -1,6 +1,7 @@
-// `npm test`: the same bootstrap as `npm start`, on a throwaway cluster (temporary folder, free port,
-// fsync off), then every test (unit, API against the real database, browser). Torn down even on failure.
-// Extra arguments go to vitest, e.g. `npm test -- tests/api/auth.test.ts`.
+// `npm test`: the type check (`npm run check`) and the linter (`npm run lint`), then the same bootstrap as
+// `npm start` on a throwaway cluster (temporary folder, free port, fsync off), then every test (unit, API against
+// the real database, browser). Torn down even on failure. Extra arguments go to vitest, e.g.
+// `npm test -- tests/api/auth.test.ts`; with them, the check and the linter are left out (a focused run).
 import { mkdtempSync, mkdirSync, readFileSync, rmSync, existsSync, chmodSync } from 'node:fs';
 import { spawn } from 'node:child_process';
 import path from 'node:path';
@@ -41,6 +42,27 @@ for (const signal of ['SIGINT', 'SIGTERM']) {
     process.exit(130);
   });
 }
+/** Runs `npm run <script>` in the foreground; true when it passed. */
+function runNpmScript(script) {
+  log(`npm run ${script}`);
+  return new Promise((resolve) => {
+    const child = spawn('npm', ['run', '--silent', script], { cwd: ROOT, stdio: 'inherit' });
+    child.on('exit', (code, signal) => resolve(code === 0 && !signal));
+    child.on('error', () => resolve(false));
+  });
+}
+
+// The type check and the linter first: they need no services, and their verdicts head the summary. A failure
+// fails the run but does not stop the tests, so one run shows everything that is wrong.
+const focused = process.argv.length > 2;
+const gates = [];
+if (!focused) {
+  for (const script of ['check', 'lint']) gates.push({ script, passed: await runNpmScript(script) });
+}
+const gateLine = focused
+  ? 'check and lint skipped (a focused run)'
+  : gates.map((g) => `${g.script} ${g.passed ? 'passed' : 'FAILED'}`).join(', ');
+
 try {
   const pgPort = await findFreePort();
   initCluster(pgBin, pgDir, pgPort, { fast: true });
@@ -51,7 +73,7 @@ try {
   mkdirSync(mailDir);
   const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), DEV_TOOLS: 'true', MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1' };
   runTs('db/migrate.ts', env);
-  runTs('db/seed/index.ts', env);
+  runTs('scripts/seed/index.ts', env);
   const mail = await startMailSink({ dir: mailDir });
   cleanups.push(() => mail.close());
   const s3Dir = path.join(scratch, 's3');
@@ -106,7 +128,8 @@ try {
       exitCode = 1;
     }
   }
-  console.log(`\n${totals.passed} passed, ${totals.failed} failed, ${totals.skipped} skipped; ${totals.failedFiles} test files failed`);
+  if (gates.some((g) => !g.passed)) exitCode = 1;
+  console.log(`\n${gateLine}; ${totals.passed} passed, ${totals.failed} failed, ${totals.skipped} skipped; ${totals.failedFiles} test files failed`);
 } catch (error) {
   console.error(error);
   exitCode = 1;

@@ -25,7 +25,7 @@ function spawnText(cmd: string, args: readonly string[]): Promise<{ status: numb
 }
 const run = (...args: string[]) => spawnText(path.join(ROOT, 'node_modules/.bin/tsx'), ['shared/cli/threadway.ts', ...args]);
 
-// E10 of shared/notes/engine-references.md (exhaustive oracle): lines y = 4 and y = 8 across a 12 in block with edge
+// E10 of docs/engine.md §7.3 (exhaustive oracle): lines y = 4 and y = 8 across a 12 in block with edge
 // travel; the open route (0,4) → (0,8) has travel 4 (total 28).
 const e10 = { version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [[[0, 4], [12, 4]], [[0, 8], [12, 8]]], start: [0, 4], end: [0, 8] };
 

@@ -17,7 +17,7 @@ function chordError(curve: (s: number) => Point, poly: readonly Point[], samples
 }
 
 describe('design/flatten: circular arcs', () => {
-  // Anchors listed in shared/notes/engine-references.md §5; the math is analytic:
+  // Anchors listed in docs/engine.md §9; the math is analytic:
   // an inscribed regular n-gon of radius r has perimeter 2nr·sin(π/n) and tends to the circumference 2πr.
   it.each([0.1, 0.01, 1e-3, 1e-4])('a full circle r = 6 at chord error %s is the inscribed n-gon', (maxError) => {
     const r = 6;
@@ -62,7 +62,7 @@ describe('design/flatten: circular arcs', () => {
 
 describe('design/flatten: cubic Béziers', () => {
   // Parabola y = x² on [0, 1] as the quadratic (0,0),(0.5,0),(1,1): length √5/2 + asinh(2)/4
-  // (analytic arc length of a parabola; anchor listed in shared/notes/engine-references.md §5).
+  // (analytic arc length of a parabola; anchor listed in docs/engine.md §9).
   const PARABOLA = Math.sqrt(5) / 2 + Math.asinh(2) / 4;
 
   it('checks the anchor value itself', () => {
@@ -81,7 +81,7 @@ describe('design/flatten: cubic Béziers', () => {
     expect(PARABOLA - len).toBeLessThan(4 * maxError);
   });
 
-  it('flattens a collinear cubic to its chord (length = chord, engine-references §5)', () => {
+  it('flattens a collinear cubic to its chord (length = chord, docs/engine.md §9)', () => {
     const poly = flattenCubic([0, 0], [1, 1], [2, 2], [3, 3], 1e-6);
     expect(poly).toEqual([[0, 0], [3, 3]]);
     expect(polylineLength(poly)).toBeCloseTo(3 * Math.SQRT2, 15);

@@ -47,7 +47,10 @@ describe('buildDesignSvg', () => {
   it('states the size in both units: a 30.48 cm block is 12 in (1 in = 2.54 cm exactly, by the 1959 international yard and pound agreement)', () => {
     const svg = buildDesignSvg(block({ units: 'cm', width: 30.48, height: 30.48, seams: [], lines: [[[0, 1], [30.48, 1]]] }));
     expect(svg).toMatch(/width="[\d.]+cm"/);
-    expect(svg).toContain('Block 12 × 12 in (30.48 × 30.48 cm)');
+    // The design's own units first, the other in brackets; a viewer who works in inches reads inches first.
+    expect(svg).toContain('Block 30.5 × 30.5 cm (12 × 12 in)');
+    const forInchViewer = buildDesignSvg(block({ units: 'cm', width: 30.48, height: 30.48, seams: [], lines: [[[0, 1], [30.48, 1]]] }), { viewerUnits: 'in' });
+    expect(forInchViewer).toContain('Block 12 × 12 in (30.5 × 30.5 cm)');
     const els = parseWithPython(svg);
     const texts = els.filter(([t]) => t === 'text').map(([, a]) => a['text']);
     expect(texts).toContain('1 in');

@@ -1,5 +1,6 @@
 import type { StrokePath } from '../contract/strokes.ts';
-import type { Design } from '../design/design.schema.ts';
+import type { Design, Units } from '../design/design.schema.ts';
+import { formatSize } from '../units/units.ts';
 import { bindingBandOf, CM_PER_INCH } from '../design/design.schema.ts';
 import type { Point, Polyline } from '../geometry/point.ts';
 import { assertNever } from '../assertNever.ts';
@@ -15,6 +16,8 @@ export interface DesignSvgOptions {
   readonly route?: readonly SvgStroke[];
   /** A line under the block (e.g. "the saved route is out of date"); escaped. */
   readonly remark?: string;
+  /** The viewer's units: the scale note gives the size in them first (default: the design's). */
+  readonly viewerUnits?: Units;
 }
 
 // Our own palette: stitching in deep indigo, travel in warm tones, seams in grey.
@@ -78,7 +81,7 @@ export function designSvgParts(design: Design, options: DesignSvgOptions = {}): 
   if (options.title) {
     parts.push(`<text x="0" y="${num(-font * 0.8)}" font-family="sans-serif" font-size="${num(font * 1.2)}" fill="${INK.text}">${escapeXml(options.title)}</text>`);
   }
-  parts.push(scaleNote(design, h + font * 1.6, font, stroke, options.remark));
+  parts.push(scaleNote(design, h + font * 1.6, font, stroke, options.remark, options.viewerUnits ?? design.units));
   return {
     width: `${num(totalW)}${units}`,
     height: `${num(totalH)}${units}`,
@@ -201,11 +204,10 @@ function passLabels(route: readonly SvgStroke[], font: number): string {
   return out.join('\n');
 }
 
-function scaleNote(design: Design, y: number, font: number, stroke: number, remark: string | undefined): string {
+function scaleNote(design: Design, y: number, font: number, stroke: number, remark: string | undefined, viewer: Units): string {
   const { width: w, height: h, units } = design;
-  const inW = units === 'in' ? w : w / CM_PER_INCH;
-  const inH = units === 'in' ? h : h / CM_PER_INCH;
-  const size = `Block ${round(inW, 3)} × ${round(inH, 3)} in (${round(inW * CM_PER_INCH, 2)} × ${round(inH * CM_PER_INCH, 2)} cm)`;
+  const other: Units = viewer === 'in' ? 'cm' : 'in';
+  const size = `Block ${formatSize(w, h, units, viewer)} (${formatSize(w, h, units, other)})`;
   const inch = units === 'in' ? 1 : CM_PER_INCH;
   const cm = units === 'cm' ? 1 : 1 / CM_PER_INCH;
   const bar = (x: number, len: number, label: string): string =>
@@ -235,7 +237,6 @@ const dist = (a: Point, b: Point): number => Math.hypot(b[0] - a[0], b[1] - a[1]
 const pt = (p: Point): string => `${num(p[0])} ${num(p[1])}`;
 /** Coordinates to 1e-4 design units (far below a stitch length), trailing zeros dropped. */
 const num = (v: number): string => String(Math.round(v * 1e4) / 1e4);
-const round = (v: number, digits: number): string => String(Math.round(v * 10 ** digits) / 10 ** digits);
 
 function escapeXml(text: string): string {
   return text.replace(/[<>&"']/g, (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!);

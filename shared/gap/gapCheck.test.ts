@@ -20,7 +20,7 @@ function expectRadius(g: Gap, expected: number): void {
   expect(g.radius + g.precision).toBeGreaterThanOrEqual(expected - 1e-12);
 }
 
-// Analytic anchors: shared/notes/engine-references.md §6 (values derived there and re-derived below).
+// Analytic anchors: docs/engine.md §10 (values derived there and re-derived below).
 describe('gap/gapCheck: largest empty circle', () => {
   it('border only: the inscribed circle of a 12 in square, r = 6 at the centre', () => {
     const g = gapOf(design([]));

@@ -91,7 +91,7 @@ describe('graph/planarGraph: noding', () => {
     expect(g.edges).toHaveLength(1);
   });
 
-  // E9 of shared/notes/engine-references.md §2 (derived there and run with exact rationals and networkx):
+  // E9 of docs/engine.md §7.2 (derived there; checked with exact rationals and networkx when it was chosen):
   // border + N vertical and N horizontal lines at s/2 + n·s: required length 48 + 24N, 4N odd points.
   it.each([4, 12, 48])('builds the E9 crosshatch with N = %i lines each way', (N) => {
     const s = 12 / N;

@@ -5,7 +5,7 @@
  * that file so the two can be read side by side.
  *
  * Why a port of our own: the npm ports rebuild plain arrays every stage and take 2.5 s on a tie-heavy K480
- * (shared/notes/engine-references.md §3); typed arrays reset in place. The file is longer than our usual
+ * (docs/engine.md §3.2); typed arrays reset in place. The file is longer than our usual
  * modules because the algorithm's steps share one mutable state; splitting it would only hide that.
  *
  * Weights must be integers (|w| < 2^50): duals then stay exact in float64 and the result is exactly optimal.

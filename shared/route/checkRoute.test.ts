@@ -4,7 +4,7 @@ import type { Point } from '../geometry/point.ts';
 import { checkRoute } from './checkRoute.ts';
 import { planDesign } from './planDesign.ts';
 
-// Two quilting lines across a 12 in block at y = 4 and y = 8, outline for edge travel (E10 of engine-references.md).
+// Two quilting lines across a 12 in block at y = 4 and y = 8, outline for edge travel (E10, docs/engine.md §7.3).
 const base = (route: Point[][], extra: Partial<DesignInput> = {}) =>
   designSchema.parse({ version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [[[0, 4], [12, 4]], [[0, 8], [12, 8]]], route, ...extra });
 

@@ -54,7 +54,7 @@ const FIRST_NEIGHBOURS = 12;
 /**
  * Exact minimum T-join over travel lines (Edmonds & Johnson, Math. Programming 5 (1973) 88–124): a minimum-cost
  * perfect matching of the terminals under shortest-path distances. `ends` adds dummy terminals (free thread ends)
- * joined to every real terminal at its end cost and to each other at 0 (engine-references.md §1.3): whichever
+ * joined to every real terminal at its end cost and to each other at 0 (docs/engine.md §3.1): whichever
  * terminals they take become free ends of the route's passes. A terminal with end cost −1 may not be a free end (a
  * fixed start off the quilting lines: ending there again means travelling out and back, never better).
  *

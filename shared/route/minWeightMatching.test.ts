@@ -5,7 +5,7 @@ import { seededRandom as makeRandom } from '../seededRandom.ts';
 
 /**
  * Independent exact oracle: bitmask DP over subsets, f(mask) = min_j c(i,j) + f(mask∖{i,j}) with i the lowest
- * unmatched vertex (shared/notes/engine-references.md §2, "independent exact oracle"). O(2^k·k); k ≤ 20.
+ * unmatched vertex (docs/engine.md §3.2, the independent oracle). O(2^k·k); k ≤ 20.
  */
 function dpMinPerfectMatching(k: number, c: (i: number, j: number) => number): number {
   const full = (1 << k) - 1;

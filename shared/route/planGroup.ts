@@ -39,7 +39,7 @@ export interface GroupPlan {
 /**
  * Plans one travel group: one pass plus at most `ends.extraStops` stops, least travel plus end costs.
  * Terminals are the group's odd points with the fixed ends toggled in (T = odd Δ {s} Δ {t}); missing ends become
- * free ends, and each extra stop adds two more (engine-references.md §1.3). When the quilting lines form one piece
+ * free ends, and each extra stop adds two more (docs/engine.md §3.1). When the quilting lines form one piece
  * this is route inspection and exact (Edmonds & Johnson 1973; Orloff 1974 for optional travel lines). With several
  * pieces the min T-join is a lower bound (any route's travel contains a T-join); if its paths already connect the
  * pieces (passes may also meet through free ends) it is optimal. Otherwise two joins are tried and the cheaper kept:

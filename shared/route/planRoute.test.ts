@@ -28,7 +28,7 @@ function expectValidRoute(graph: PlanarGraph, plan: RoutePlan): void {
 
 // Source: Pearson Education A-level decision maths text, "Chapter 3 Chinese postman problem" (13 streets, odd A and H,
 // AB+BF+FH = 160); edge assignment from jgrapht ChinesePostmanTest.testUndirectedGraph1 (expects 1000).
-// Values as listed in shared/notes/engine-references.md §2, E1.
+// Values as listed in docs/engine.md §7.1, E1.
 const E1 = parse('A-B 50, A-C 50, A-D 50, B-D 50, B-E 70, B-F 50, C-D 70, C-G 70, C-H 120, D-F 60, E-F 70, F-H 60, G-H 70');
 
 describe('planRoute on worked route-inspection examples', () => {
@@ -46,7 +46,7 @@ describe('planRoute on worked route-inspection examples', () => {
   });
 
   // jgrapht ChinesePostmanTest testUndirectedGraph2..5 and testGraphWithMultipleEdges (closed tours; values from
-  // engine-references.md §2, re-computed there with networkx 2.8.8).
+  // docs/engine.md §7.1, re-computed with networkx 2.8).
   const closedCases: [string, Edge[], number][] = [
     ['E2 (jgrapht graph 2)', parse('A-B 8, A-C 5, A-D 6, B-C 5, B-E 6, C-D 5, C-E 5, D-E 8'), 60],
     ['E3 (jgrapht graph 3)', parse('1-2 5, 1-4 4, 1-5 1, 2-3 3, 2-5 1, 2-7 1, 3-4 2, 3-5 3, 3-6 1, 3-7 2, 4-5 1, 6-7 3'), 31],
@@ -104,7 +104,7 @@ describe('planRoute on worked route-inspection examples', () => {
 });
 
 describe('planRoute on quilting grids', () => {
-  // E9 (derived in engine-references.md §2 and checked there with exact rationals and networkx): retrace is 24 for
+  // E9 (derived in docs/engine.md §7.2 and checked with exact rationals and networkx): retrace is 24 for
   // every N, closed and open (0,0)→(12,12) or (0,0)→(12,0).
   for (const n of [4, 5, 6, 12, 48]) {
     it(`E9 crosshatch N=${n}: 4N odd points, retrace 24 closed and open`, () => {
@@ -120,7 +120,7 @@ describe('planRoute on quilting grids', () => {
     });
   }
 
-  // E10 (engine-references.md §2, exhaustive oracle): border as edge travel (sides cut at y = 4, 8), two required
+  // E10 (docs/engine.md §7.3, exhaustive oracle): border as edge travel (sides cut at y = 4, 8), two required
   // lines y = 4 and y = 8. Two pieces that travel must join.
   const e10 = () =>
     graphFromSegments([

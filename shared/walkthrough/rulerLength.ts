@@ -1,4 +1,5 @@
 import type { Units } from '../design/design.schema.ts';
+import { inchFraction } from '../units/units.ts';
 
 /**
  * A length as a quilter reads it off a ruler, in the design's units:
@@ -15,17 +16,8 @@ export function formatRulerLength(value: number, units: Units): string {
 }
 
 function formatInches(value: number): string {
-  const eighths = Math.round(value * 8);
-  if (eighths === 0) return value === 0 ? '0 in' : 'under 1/16 in';
-  const whole = Math.floor(eighths / 8);
-  let num = eighths % 8;
-  let den = 8;
-  while (num > 0 && num % 2 === 0) {
-    num /= 2;
-    den /= 2;
-  }
-  if (num === 0) return `${whole} in`;
-  return whole === 0 ? `${num}/${den} in` : `${whole} ${num}/${den} in`;
+  if (Math.round(value * 8) === 0) return value === 0 ? '0 in' : 'under 1/16 in';
+  return `${inchFraction(value, 8)} in`;
 }
 
 function formatCentimetres(value: number): string {

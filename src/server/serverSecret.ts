@@ -3,19 +3,15 @@
 import { randomBytes } from 'node:crypto';
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import { findOrInsertServerSecret } from './serverSecret.repository.ts';
 
 const cache = new Map<string, Uint8Array>();
 
 export async function serverSecret(db: Kysely<Database>, name: string): Promise<Uint8Array> {
   const known = cache.get(name);
   if (known) return known;
-  await db
-    .insertInto('server_secret')
-    .values({ name, value: randomBytes(32).toString('base64') })
-    .onConflict((oc) => oc.column('name').doNothing())
-    .execute();
-  const row = await db.selectFrom('server_secret').select('value').where('name', '=', name).executeTakeFirstOrThrow();
-  const key = new Uint8Array(Buffer.from(row.value, 'base64'));
+  const value = await findOrInsertServerSecret(db, name, randomBytes(32).toString('base64'));
+  const key = new Uint8Array(Buffer.from(value, 'base64'));
   cache.set(name, key);
   return key;
 }

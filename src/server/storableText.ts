@@ -4,6 +4,7 @@
 // naming where it is. (Invalid UTF-8 bytes are caught earlier, when the body is decoded: see http.ts.)
 
 /** Unpaired surrogates or NUL anywhere in the string. */
+// eslint-disable-next-line no-control-regex -- matching U+0000 is the point: PostgreSQL text refuses it.
 const UNSTORABLE = /\u0000|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
 
 export function isStorableText(s: string): boolean {

@@ -15,7 +15,7 @@ export function block(over: Record<string, unknown> = {}): Record<string, unknow
 }
 
 /**
- * E9 of shared/notes/engine-references.md §2: a 12 in block with its border and N vertical and N horizontal
+ * E9 of docs/engine.md §7.2: a 12 in block with its border and N vertical and N horizontal
  * lines at s/2 + n·s (s = 12/N), all quilting lines. Required length 48 + 24N; 4N odd points (the T-junctions on
  * the border); least retrace 24 for every N when the route runs (0,0) → (12,12). Edge travel is off and there
  * are no seams, so the only travel is retrace, as in the worked example.

@@ -16,10 +16,10 @@ async function create(title: string, design: Record<string, unknown>): Promise<{
   return res.body.design;
 }
 
-describe('check and plan against worked example E9 (shared/notes/engine-references.md §2)', () => {
+describe('check and plan against worked example E9 (docs/engine.md §7.2)', () => {
   // E9: border + N vertical and N horizontal lines at s/2 + n·s on a 12 in block, all stitched; the odd points are the
   // 4N T-junctions on the border, spaced s apart around it, so the least retrace from (0,0) to (12,12) is 2N·s = 24
-  // for every N (derived in the notes and checked there with exact rationals and networkx).
+  // for every N (derived in docs/engine.md §7.2, checked with exact rationals and networkx).
   for (const n of [4, 12]) {
     it(`N = ${n}: one pass, ${4 * n} odd points, stitch ${48 + 24 * n} in, retrace 24 in, proven optimal`, async () => {
       const d = await create(`E9 grid N=${n}`, e9Grid(n));

@@ -1,6 +1,6 @@
 // Accounts for tests: fresh ones written to the database (sign-up is e-mail confirmed and rate-limited per
 // address, so its own tests drive it: tests/api/resetAndSignUpLimits.test.ts) and signed in through the real
-// sign-in API; and the seeded demo guild (db/seed/demo-accounts.json).
+// sign-in API; and the seeded demo guild (scripts/seed/demo-accounts.json).
 import { readFileSync } from 'node:fs';
 import { hash } from '@node-rs/argon2';
 import type { Kysely } from 'kysely';
@@ -71,7 +71,7 @@ interface DemoFile {
   password: string;
   accounts: { email: string; displayName: string; role: Role }[];
 }
-const demo = JSON.parse(readFileSync(new URL('../../db/seed/demo-accounts.json', import.meta.url), 'utf8')) as DemoFile;
+const demo = JSON.parse(readFileSync(new URL('../../scripts/seed/demo-accounts.json', import.meta.url), 'utf8')) as DemoFile;
 
 /** The seeded demo guild: password and one account per role (first of each). */
 export const demoGuild = {

@@ -16,7 +16,7 @@ beforeAll(async () => {
 const exact = (o: PlanOptions = {}): PlanOptions => ({ ...o, exact: { solver, timeBudgetMs: 20_000 } });
 const routeLength = (p: RoutePlan): number => p.stitchLength + p.travelLength;
 
-// E10 (shared/notes/engine-references.md §2, checked there by an exhaustive oracle over traversal counts 0–2):
+// E10 (docs/engine.md §7.3, first found by an exhaustive search over traversal counts 0–2):
 // the block border as edge travel (sides cut at y = 4, 8) and two required lines y = 4 and y = 8, edge to edge.
 const e10 = (): PlanarGraph =>
   graphFromSegments([
@@ -41,7 +41,7 @@ const parse = (s: string): Edge[] =>
   });
 
 describe('the branch-and-cut on the route-inspection worked examples (one piece: must equal the known optimum)', () => {
-  // Values from shared/notes/engine-references.md §2 (E1: Pearson A-level text "Chapter 3 Chinese postman problem" with
+  // Values from docs/engine.md §7.1 (E1: Pearson A-level text "Chapter 3 Chinese postman problem" with
   // jgrapht's edge assignment; E2–E6: jgrapht ChinesePostmanTest; E7: README of dilsonpereira/chinese-postman-problem).
   const E1 = parse('A-B 50, A-C 50, A-D 50, B-D 50, B-E 70, B-F 50, C-D 70, C-G 70, C-H 120, D-F 60, E-F 70, F-H 60, G-H 70');
   const cases: [string, Edge[], string, string, number][] = [

@@ -18,7 +18,7 @@ export interface RppInstance {
 
 /**
  * The integer program (Ghiani & Laporte, Math. Programming 87 (2000) 467–481, with the free ends of
- * engine-references.md §1.3 through a dummy vertex D):
+ * docs/engine.md §3.1 through a dummy vertex D):
  *   x_e ∈ {0,1,2} travel count on each reduced travel edge (≤ 1 inside one piece), x_r ∈ {0,1} extra traversal of
  *   each required edge,
  *   y_v ∈ {0,1} a free thread end at kept vertex v (an edge v–D), z_v ≥ 0 integer;

@@ -2,7 +2,9 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import { apiRequest } from './apiClient.ts';
 import { designListSchema, type DesignList, type DesignListItem, type DesignSort } from '@shared/contract/designs.ts';
 import { designListPath, pendingRefreshDelayMs } from './designsApi.ts';
-import { formatDistance, formatEdited, formatSize, formatYards } from './formatFigures.ts';
+import type { Units } from '@shared/design/design.schema.ts';
+import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
+import { formatEdited } from './formatFigures.ts';
 
 type Load = { readonly state: 'loading' } | { readonly state: 'ready'; readonly list: DesignList } | { readonly state: 'failed'; readonly message: string };
 
@@ -22,7 +24,8 @@ const COLUMNS: readonly Columns[] = [
 ];
 
 /** The quilter's designs: sortable, searchable, paged; duplicate and delete (with undo). Fetches from the API. */
-export function DesignTable() {
+/** The quilter's designs, every figure in the viewer's units. */
+export function DesignTable({ viewerUnits }: { viewerUnits: Units }) {
   const [sort, setSort] = useState<DesignSort>('updated');
   const [dir, setDir] = useState<'asc' | 'desc'>('desc');
   const [query, setQuery] = useState('');
@@ -142,13 +145,13 @@ export function DesignTable() {
                     )}
                   </td>
                   <td className="px-2 py-2"><a href={`/designs/${d.id}`} className="font-semibold text-denim-600 underline">{d.title}</a></td>
-                  <td className="px-2 py-2 whitespace-nowrap">{formatSize(d.width, d.height, d.units)}</td>
+                  <td className="px-2 py-2 whitespace-nowrap">{formatSize(d.width, d.height, d.units, viewerUnits)}</td>
                   <td className="px-2 py-2">
                     {d.summaryPending ? <span title="The route engine is working out the figures">…<span className="sr-only">figures on the way</span></span> : (d.summary?.passes ?? '–')}
                   </td>
                   <td className="px-2 py-2">{d.summary?.stops ?? '–'}</td>
-                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatDistance(d.summary.travelLength, d.units) : '–'}</td>
-                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatYards(d.summary.thread.totalYards) : '–'}</td>
+                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatLength(d.summary.travelLength, d.units, viewerUnits) : '–'}</td>
+                  <td className="px-2 py-2 whitespace-nowrap">{d.summary ? formatThread(d.summary.thread.totalYards, viewerUnits) : '–'}</td>
                   <td className="px-2 py-2 whitespace-nowrap"><time dateTime={d.updatedAt}>{formatEdited(Date.parse(d.updatedAt), now)}</time></td>
                   <td className="px-2 py-2 whitespace-nowrap">
                     <button type="button" onClick={() => void duplicate(d)} className="mr-2 underline" aria-label={`Duplicate ${d.title}`}>Duplicate</button>

@@ -1,41 +1,4 @@
-import type { Units } from '@shared/design/design.schema.ts';
-
-/** Eighths of an inch as quilters write them: 12, 12 1/2, 3/8. Other values keep two decimals. */
-export function formatInches(value: number): string {
-  const eighths = Math.round(value * 8);
-  if (Math.abs(eighths / 8 - value) > 1e-6) return trimDecimals(value, 2);
-  const whole = Math.trunc(eighths / 8);
-  let num = Math.abs(eighths % 8);
-  let den = 8;
-  while (num > 0 && num % 2 === 0) {
-    num /= 2;
-    den /= 2;
-  }
-  if (num === 0) return String(whole);
-  const sign = eighths < 0 && whole === 0 ? '-' : '';
-  return whole === 0 ? `${sign}${num}/${den}` : `${whole} ${num}/${den}`;
-}
-
-/** A length in the design's units: "12 1/2 in", "30.5 cm". */
-export function formatLength(value: number, units: Units): string {
-  return units === 'in' ? `${formatInches(value)} in` : `${trimDecimals(value, 1)} cm`;
-}
-
-/** A block size: "12 × 12 in". */
-export function formatSize(width: number, height: number, units: Units): string {
-  const f = (v: number) => (units === 'in' ? formatInches(v) : trimDecimals(v, 1));
-  return `${f(width)} × ${f(height)} ${units}`;
-}
-
-/** A travel or stitch length, rounded for tables: "3.4 in", "0 in". */
-export function formatDistance(value: number, units: Units): string {
-  return `${trimDecimals(value, 1)} ${units}`;
-}
-
-/** Thread in yards (the unit thread is sold in here) with one decimal. */
-export function formatYards(yards: number): string {
-  return `${trimDecimals(yards, 1)} yd`;
-}
+// Lengths, sizes and thread are written by shared/units/units.ts (in the viewer's units); these are the other figures.
 
 /** Minutes, as "about 4 min" or "under 1 min". */
 export function formatMinutes(minutes: number): string {

@@ -1,5 +1,5 @@
-import { useCallback, useMemo, useRef, useState, type KeyboardEvent } from 'react';
-import type { Design } from '@shared/design/design.schema.ts';
+import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import type { Design, Units } from '@shared/design/design.schema.ts';
 import type { Guide } from '@shared/editor/guides.ts';
 import { halfwayGuide, extensionGuide } from '@shared/editor/guides.ts';
 import type { Point } from '@shared/geometry/point.ts';
@@ -7,8 +7,10 @@ import { generateMotif, type MotifKind } from '@shared/motifs/motifs.ts';
 import { findPatchFaces } from '@shared/walkthrough/patchFaces.ts';
 import { buildBlockPlaces, findPatchAt } from '@shared/walkthrough/locate.ts';
 import { namePatches } from '@shared/walkthrough/patchNames.ts';
-import { formatSize } from '../designs/formatFigures.ts';
+import { formatSize } from '@shared/units/units.ts';
 import { RouteCheckPanel } from '../route/RouteCheckPanel.tsx';
+import { JoinPanel } from './JoinPanel.tsx';
+import { joinLines, type JoinProposal } from '@shared/joins/findJoins.ts';
 import { RoutePanel } from '../route/RoutePanel.tsx';
 import { useRouteCheck } from '../route/useRouteCheck.ts';
 import { useRoutePlan } from '../route/useRoutePlan.ts';
@@ -41,10 +43,12 @@ import { zoomOf } from './viewport.ts';
 
 export interface DesignEditorProps {
   readonly designId: string;
+  /** The viewer's unit choice; figures are written in it (the design keeps its own units for drawing). */
+  readonly viewerUnits: Units;
 }
 
 /** The workbench island: loads the design, then shows the canvas, tools, route check and route preview. */
-export function DesignEditor({ designId }: DesignEditorProps) {
+export function DesignEditor({ designId, viewerUnits }: DesignEditorProps) {
   const doc = useDesignDocument(designId);
   if (doc.load.state === 'loading') return <p className="py-12 text-center">Opening the design…</p>;
   if (doc.load.state === 'missing' || !doc.design) {
@@ -56,14 +60,15 @@ export function DesignEditor({ designId }: DesignEditorProps) {
       </div>
     );
   }
-  return <Workbench designId={designId} doc={doc} design={doc.design} />;
+  return <Workbench designId={designId} doc={doc} design={doc.design} viewerUnits={viewerUnits} />;
 }
 
 const NO_STROKES: readonly RouteStroke[] = [];
 const NO_ORDER: readonly number[] = [];
 const NO_POINTS: readonly (readonly [number, number])[] = [];
 
-function Workbench({ designId, doc, design }: { designId: string; doc: DesignDocument; design: Design }) {
+function Workbench({ designId, doc, design, viewerUnits }: { designId: string; doc: DesignDocument; design: Design; viewerUnits: Units }) {
+  const unitPair = useMemo(() => ({ design: design.units, viewer: viewerUnits }), [design.units, viewerUnits]);
   const history = useEditHistory(doc.design, doc.setDesign, doc.generation);
   const stageBox = useRef<HTMLDivElement>(null);
   const size = useStageSize(stageBox);
@@ -78,7 +83,9 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
   const [announce, setAnnounce] = useState('');
 
   // Patches come from the seams and the block size only: drawing quilting lines leaves them alone.
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on seams and size on purpose (see above).
   const patches = useMemo(() => namePatches(findPatchFaces(design), design), [design.seams, design.width, design.height]);
+  // eslint-disable-next-line react-hooks/exhaustive-deps -- places read the size, units and seams, which change only with the patches.
   const places = useMemo(() => buildBlockPlaces(design, patches), [patches]);
   const [patchIndex, setPatchIndex] = useState<number | null>(null);
   const [motifKind, setMotifKind] = useState<MotifKind>('straight-lines');
@@ -97,6 +104,10 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
 
   const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, endsMode, dispatch: history.dispatch, onPickPatch });
   const check = useRouteCheck(designId, design, doc.savedCheck, doc.status.kind);
+  const [shownJoin, setShownJoin] = useState<JoinProposal | null>(null);
+  const joinPreview = useMemo(() => (shownJoin ? joinLines(shownJoin) : null), [shownJoin]);
+  // A join drawn for an older drawing would point at lines that moved: drop it on every edit.
+  useEffect(() => setShownJoin(null), [design]);
   const pieces = useMemo(() => findLinePieces(design), [design]);
   const routes = useRoutePlan(designId, design, doc.version);
   const shownStrokes = routes.plan?.route ?? (routes.saved && routes.savedIsCurrent ? routes.saved.strokes : null);
@@ -203,7 +214,7 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
           <span className="sr-only">Design title</span>
           <input value={doc.title} onChange={(e) => doc.setTitle(e.target.value)} className="rounded border border-transparent bg-transparent px-1 text-2xl font-bold hover:border-muslin-300 focus:border-denim-500" maxLength={200} />
         </label>
-        <span className="text-denim-700">{formatSize(design.width, design.height, design.units)}</span>
+        <span className="text-denim-700">{formatSize(design.width, design.height, design.units, viewerUnits)}</span>
         <SaveIndicator status={doc.status} onSaveNow={doc.saveNow} onResolve={doc.resolveConflict} />
         <span className="ml-auto flex flex-wrap gap-2">
           <a href={`/api/designs/${designId}/export.svg`} download className="rounded border border-denim-600 px-3 py-1 text-sm">Download SVG</a>
@@ -248,7 +259,7 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
             className="relative h-[62vh] min-h-[22rem] overflow-hidden rounded border border-muslin-300 bg-muslin-50"
             tabIndex={0}
             role="application"
-            aria-label={`Block canvas, ${formatSize(design.width, design.height, design.units)}, ${design.lines.length} quilting lines. Press ? for keys.`}
+            aria-label={`Block canvas, ${formatSize(design.width, design.height, design.units, viewerUnits)}, ${design.lines.length} quilting lines. Press ? for keys.`}
             data-testid="block-canvas"
           >
             {size.width > 0 && (
@@ -257,7 +268,7 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
                 <SeamLayer seams={design.seams} view={vp.view} theme={theme} patch={tool === 'motif' ? patch : null} selected={selectedSeams} />
                 <QuiltingLineLayer lines={design.lines} view={vp.view} theme={theme} selected={selectedLines} pieceOfLine={pieces} oddPoints={check.check?.oddPointPositions ?? NO_POINTS} start={design.start} end={design.end} ownOrder={tool === 'order' ? ctl.ownOrder : NO_ORDER} dimmed={shownStrokes !== null} stageWidth={size.width} stageHeight={size.height} />
                 {shownStrokes && <RouteLayer strokes={shownStrokes} view={vp.view} theme={theme} needle={player.needle} />}
-                <OverlayLayer view={vp.view} theme={theme} preview={tool === 'motif' && motif?.ok ? motif.lines : ctl.preview} snapped={ctl.snapped?.point ?? null} guides={guides} gap={check.check?.gap ?? null} />
+                <OverlayLayer view={vp.view} theme={theme} preview={tool === 'motif' && motif?.ok ? motif.lines : joinPreview ?? ctl.preview} snapped={ctl.snapped?.point ?? null} guides={guides} gap={check.check?.gap ?? null} />
                 <RulerLayer units={design.units} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} />
               </EditorStage>
             )}
@@ -279,9 +290,10 @@ function Workbench({ designId, doc, design }: { designId: string; doc: DesignDoc
               onPlace={() => motif?.ok && history.dispatch({ kind: 'addLines', target: 'lines', lines: motif.lines })}
             />
           )}
-          <RouteCheckPanel check={check.check} state={check.state} message={check.message} units={design.units} />
+          <RouteCheckPanel check={check.check} state={check.state} message={check.message} units={design.units} viewerUnits={viewerUnits} />
+          <JoinPanel design={design} units={unitPair} onAdd={history.dispatch} onShow={setShownJoin} shown={shownJoin} />
           <BlockSettingsPanel design={design} dispatch={history.dispatch} generation={doc.generation} />
-          <RoutePanel routes={routes} player={player} units={design.units} canKeep={doc.status.kind === 'saved'} hasOwnRoute={Boolean(own)} onClearOwn={() => { ctl.clearOwnOrder(); history.dispatch({ kind: 'setRoute', route: null }); }} />
+          <RoutePanel routes={routes} player={player} units={unitPair} canKeep={doc.status.kind === 'saved'} hasOwnRoute={Boolean(own)} onClearOwn={() => { ctl.clearOwnOrder(); history.dispatch({ kind: 'setRoute', route: null }); }} />
           <SavedVersionsPanel designId={designId} baseVersion={doc.version} canGoBack={doc.status.kind === 'saved'} onRestored={doc.replaceFromServer} onConflict={doc.openConflict} />
         </aside>
       </div>

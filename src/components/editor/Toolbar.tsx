@@ -1,7 +1,7 @@
 import { memo } from 'react';
 import type { ShortcutAction } from './shortcuts.ts';
 
-/** The drawing and marking tools of the workbench (our own names; see GLOSSARY.md). */
+/** The drawing and marking tools of the workbench (our own names; see docs/glossary.md). */
 export type ToolId = 'select' | 'seam' | 'ruler' | 'polyline' | 'curve' | 'freehand' | 'motif' | 'ends' | 'order';
 
 export const TOOLS: readonly { readonly id: ToolId; readonly label: string; readonly key: string; readonly icon: string; readonly shortcut: ShortcutAction }[] = [

@@ -61,6 +61,11 @@ export function useDesignDocument(designId: string): DesignDocument {
     s.current.timer = setTimeout(fn, ms);
   }, []);
 
+  const writeDraft = useCallback(() => {
+    const st = s.current;
+    if (st.design) saveDraft(window.localStorage, designId, { baseVersion: st.version, title: st.title, design: st.design, writtenAt: Date.now() });
+  }, [designId]);
+
   const save = useCallback(async (): Promise<void> => {
     const st = s.current;
     if (st.inFlight || st.conflict || !st.design || st.revision === st.savedRevision) return;
@@ -108,12 +113,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     st.attempt += 1;
     setStatus({ kind: 'retrying', attempt: st.attempt, retryAt: Date.now() + action.delayMs, reason: action.reason });
     schedule(action.delayMs, () => void save());
-  }, [designId, schedule]);
-
-  function writeDraft() {
-    const st = s.current;
-    if (st.design) saveDraft(window.localStorage, designId, { baseVersion: st.version, title: st.title, design: st.design, writtenAt: Date.now() });
-  }
+  }, [designId, schedule, writeDraft]);
 
   const markEdited = useCallback(() => {
     const st = s.current;
@@ -122,7 +122,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     if (st.conflict) return;
     setStatus({ kind: 'unsaved' });
     schedule(SAVE_DEBOUNCE_MS, () => void save());
-  }, [save, schedule]);
+  }, [save, schedule, writeDraft]);
 
   useEffect(() => {
     let cancelled = false;
@@ -179,6 +179,7 @@ export function useDesignDocument(designId: string): DesignDocument {
   }, [designId, save, schedule]);
 
   useEffect(() => {
+    const st = s.current;
     const retry = () => {
       if (s.current.attempt > 0) void save();
     };
@@ -190,7 +191,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     return () => {
       window.removeEventListener('online', retry);
       window.removeEventListener('beforeunload', warn);
-      clearTimeout(s.current.timer);
+      clearTimeout(st.timer);
     };
   }, [save]);
 
@@ -230,7 +231,7 @@ export function useDesignDocument(designId: string): DesignDocument {
       setStatus({ kind: 'unsaved' });
       void save();
     }
-  }, [designId, save, serverCopy]);
+  }, [designId, save, serverCopy, writeDraft]);
 
   const saveNow = useCallback(() => {
     s.current.attempt = 0;

@@ -1,5 +1,4 @@
-import type { Units } from '@shared/design/design.schema.ts';
-import { formatDistance } from '../designs/formatFigures.ts';
+import { formatLength, type UnitPair } from '@shared/units/units.ts';
 import { RoutePlayerControls } from './RoutePlayerControls.tsx';
 import type { RoutePlayer } from './useRoutePlayer.ts';
 import type { RoutePlanState } from './useRoutePlan.ts';
@@ -7,7 +6,7 @@ import type { RoutePlanState } from './useRoutePlan.ts';
 export interface RoutePanelProps {
   readonly routes: RoutePlanState;
   readonly player: RoutePlayer;
-  readonly units: Units;
+  readonly units: UnitPair;
   /** Keeping a route needs the design saved (the route is stored for a saved version). */
   readonly canKeep: boolean;
   readonly hasOwnRoute: boolean;
@@ -28,8 +27,8 @@ export function RoutePanel({ routes, player, units, canKeep, hasOwnRoute, onClea
       </div>
       {plan && (
         <p className="mt-1" data-figure="plan-summary">
-          Planned: {plan.passes} pass{plan.passes === 1 ? '' : 'es'}, {plan.stops} stop{plan.stops === 1 ? '' : 's'}, travel {formatDistance(plan.travelLength, units)}
-          {plan.optimal === true ? ' (least travel, proven)' : ''}.
+          Planned: {plan.passes} pass{plan.passes === 1 ? '' : 'es'}, {plan.stops} stop{plan.stops === 1 ? '' : 's'}, travel {formatLength(plan.travelLength, units.design, units.viewer)}
+          {plan.optimal === true ? ' (best possible route)' : ''}.
         </p>
       )}
       {!plan && saved && (

@@ -1,11 +1,10 @@
 import { useId } from 'react';
-import type { Units } from '@shared/design/design.schema.ts';
-import { formatDistance } from '../designs/formatFigures.ts';
+import { formatLength, type UnitPair } from '@shared/units/units.ts';
 import { PLAYER_SPEEDS, type RoutePlayer } from './useRoutePlayer.ts';
 
 export interface RoutePlayerControlsProps {
   readonly player: RoutePlayer;
-  readonly units: Units;
+  readonly units: UnitPair;
   /** Accessible name of the control group, e.g. "Route preview". */
   readonly label: string;
 }
@@ -39,7 +38,7 @@ export function RoutePlayerControls({ player, units, label }: RoutePlayerControl
         value={player.distance}
         onChange={(e) => player.seek(Number(e.target.value))}
         className="min-w-32 flex-1"
-        aria-valuetext={`${formatDistance(player.distance, units)} of ${formatDistance(total, units)}`}
+        aria-valuetext={`${formatLength(player.distance, units.design, units.viewer)} of ${formatLength(total, units.design, units.viewer)}`}
       />
       <span className="text-sm tabular-nums" aria-live="off">
         {player.needle ? `Pass ${player.needle.pass} · ${player.needle.kind === 'stitch' ? 'stitching' : `travel (${player.needle.kind})`}` : 'Ready'}

@@ -13,7 +13,7 @@ function valueOf(el: HTMLInputElement | HTMLTextAreaElement | HTMLSelectElement)
 }
 
 function fill(template: string, data: unknown): string {
-  return template.replace(/\{([\w.]+)\}/g, (_, path: string) => String(path.split('.').reduce<any>((o, k) => (o == null ? o : o[k]), data) ?? ''));
+  return template.replace(/\{([\w.]+)\}/g, (_, path: string) => String(path.split('.').reduce<unknown>((o, k) => (o == null ? o : (o as Record<string, unknown>)[k]), data) ?? ''));
 }
 
 async function submit(form: HTMLFormElement): Promise<void> {

@@ -17,7 +17,3 @@ export const ui = {
 export function formatDate(iso: string): string {
   return new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
 }
-
-export function formatLength(value: unknown, units: 'in' | 'cm'): string {
-  return typeof value === 'number' && Number.isFinite(value) ? `${value.toFixed(units === 'in' ? 2 : 1)} ${units}` : '—';
-}

@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { z } from 'zod';
+import type { Units } from '@shared/design/design.schema.ts';
 import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
 import { useProgressSync } from './useProgressSync.ts';
 import { WalkthroughView } from './WalkthroughView.tsx';
@@ -17,11 +18,13 @@ export interface LessonWalkthroughProps {
   readonly data: LessonData;
   /** PUT target for progress; null when this viewer has nothing to save (a teacher previewing). */
   readonly progressUrl: string | null;
+  /** The viewer's units (step lengths are written in them); the design's own when not given. */
+  readonly viewerUnits?: Units | undefined;
 }
 
 /** A lesson's walkthrough: resumes at the student's saved step and saves progress as they go. */
-export function LessonWalkthrough({ data, progressUrl }: LessonWalkthroughProps) {
-  const input = useMemo(() => parseWalkthroughInput(data.template.design, data.template.route), [data]);
+export function LessonWalkthrough({ data, progressUrl, viewerUnits }: LessonWalkthroughProps) {
+  const input = useMemo(() => parseWalkthroughInput(data.template.design, data.template.route, viewerUnits), [data, viewerUnits]);
   const progress = useProgressSync(progressUrl, data.progress?.finished ?? false);
   const lessonText = useMemo(() => [textOf(data.lesson.notesHtml)], [data]);
   if (!input.ok) return <p className="rounded border border-madder-500 bg-white p-4 text-lg" role="alert">{input.error}</p>;

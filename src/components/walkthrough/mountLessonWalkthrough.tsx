@@ -11,7 +11,9 @@ if (root && dataEl) {
   const parsed = lessonDataSchema.safeParse(JSON.parse(dataEl.textContent || 'null'));
   if (parsed.success) {
     const progressUrl = root.dataset['canSave'] === 'true' ? (root.dataset['progressUrl'] ?? null) : null;
+    const units = root.dataset['viewerUnits'];
+    const viewerUnits = units === 'in' || units === 'cm' ? units : undefined;
     root.replaceChildren();
-    createRoot(root).render(<LessonWalkthrough data={parsed.data} progressUrl={progressUrl} />);
+    createRoot(root).render(<LessonWalkthrough data={parsed.data} progressUrl={progressUrl} viewerUnits={viewerUnits} />);
   }
 }

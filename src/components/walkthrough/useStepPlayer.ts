@@ -43,6 +43,7 @@ export function useStepPlayer(steps: readonly Step[], strokes: readonly RouteStr
   useEffect(() => {
     // Deliberately keyed on the route only: a later change of step must not move the needle back.
     seek(spans[clamp(initialStep)]?.start ?? 0);
+    // eslint-disable-next-line react-hooks/exhaustive-deps -- keyed on the route only, as said above.
   }, [player.playback]);
 
   useEffect(() => {

@@ -38,11 +38,11 @@ export async function findAccountRowById(db: Db, id: string): Promise<AccountRow
 /** Inserts an account; undefined when the e-mail is already taken (any case). */
 export async function insertAccount(
   db: Db,
-  values: { email: string; displayName: string; passwordHash: string; units: UnitsPreference },
+  values: { email: string; displayName: string; passwordHash: string; units: UnitsPreference; role?: Role },
 ): Promise<AccountRow | undefined> {
   return db
     .insertInto('account')
-    .values({ email: values.email, display_name: values.displayName, password_hash: values.passwordHash, units: values.units })
+    .values({ email: values.email, display_name: values.displayName, password_hash: values.passwordHash, units: values.units, ...(values.role && { role: values.role }) })
     .onConflict((oc) => oc.expression(sql`lower(email)`).doNothing())
     .returningAll()
     .executeTakeFirst();
@@ -66,6 +66,10 @@ export async function updateAccount(
     .where('id', '=', id)
     .returningAll()
     .executeTakeFirst();
+}
+
+export async function setAccountPasswordHash(db: Db, id: string, passwordHash: string, now: Date): Promise<void> {
+  await db.updateTable('account').set({ password_hash: passwordHash, updated_at: now }).where('id', '=', id).execute();
 }
 
 /** Locks every admin row (FOR UPDATE) so two demotions cannot both see "another admin remains". */

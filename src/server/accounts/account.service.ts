@@ -5,6 +5,7 @@ import type { Database, Role, UnitsPreference } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 import { hashPassword, verifyPassword } from '../auth/password.ts';
 import { changePasswordHash } from '../auth/passwordChange.ts';
+import { inTransaction } from '../transaction.repository.ts';
 import {
   findAccountRowByEmail,
   findAccountRowById,
@@ -75,7 +76,7 @@ export async function setRole(
   accountId: string,
   role: Role,
 ): Promise<Result<Account, { kind: 'not-found' } | { kind: 'last-admin' }>> {
-  return db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const admins = await lockAdminIds(trx);
     const target = await findAccountRowById(trx, accountId);
     if (!target) return err({ kind: 'not-found' as const });

@@ -3,14 +3,15 @@
 // address gets a link (SIGN_UP_VALID_HOURS) that creates the account; a registered one gets a note to its owner.
 // The pending sign-up keeps only the password's hash and the SHA-256 of the token.
 import type { Kysely } from 'kysely';
-import { sql } from 'kysely';
 import type { Database, UnitsPreference } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 import { hashPassword } from '../auth/password.ts';
 import { generateSessionToken, hashToken } from '../auth/session.ts';
 import { sendEmail, type OutgoingEmail } from '../mail/mailer.ts';
 import { alreadyRegisteredEmail, confirmSignUpEmail } from '../mail/signUpEmails.ts';
+import { inTransaction } from '../transaction.repository.ts';
 import { findAccountRowByEmail, insertAccount, rowToAccount, type Account } from './account.repository.ts';
+import { deleteExpiredSignUpRequests, deleteSignUpRequest, deleteSignUpRequestsFor, insertSignUpRequest, lockSignUpRequest } from './signUpRequest.repository.ts';
 
 export const SIGN_UP_VALID_HOURS = 24;
 
@@ -30,10 +31,8 @@ export async function requestSignUp(db: Kysely<Database>, input: SignUpInput, or
     mail = alreadyRegisteredEmail(existing.email, existing.display_name, origin);
   } else {
     const token = generateSessionToken();
-    await db
-      .insertInto('sign_up_request')
-      .values({ id: hashToken(token), email: input.email, display_name: input.displayName, password_hash: passwordHash, units: input.units, expires_at: new Date(now.getTime() + SIGN_UP_VALID_HOURS * 3_600_000) })
-      .execute();
+    const expiresAt = new Date(now.getTime() + SIGN_UP_VALID_HOURS * 3_600_000);
+    await insertSignUpRequest(db, { id: hashToken(token), email: input.email, displayName: input.displayName, passwordHash, units: input.units, expiresAt });
     mail = confirmSignUpEmail(input.email, input.displayName, new URL(`/sign-up/confirm?token=${token}`, origin).href, SIGN_UP_VALID_HOURS);
   }
   // Not awaited: delivery time must not tell the two cases apart. sendEmail records failures itself.
@@ -47,14 +46,14 @@ export type ConfirmProblem = 'unknown' | 'expired' | 'taken';
  * pending sign-up for the address. 'taken' when the address got an account in the meantime.
  */
 export async function confirmSignUp(db: Kysely<Database>, token: string, now = new Date()): Promise<Result<Account, ConfirmProblem>> {
-  return db.transaction().execute(async (trx) => {
-    const row = await trx.selectFrom('sign_up_request').selectAll().where('id', '=', hashToken(token)).forUpdate().executeTakeFirst();
+  return inTransaction(db, async (trx) => {
+    const row = await lockSignUpRequest(trx, hashToken(token));
     if (!row) return err('unknown' as const);
     if (row.expires_at.getTime() <= now.getTime()) {
-      await trx.deleteFrom('sign_up_request').where('id', '=', row.id).execute();
+      await deleteSignUpRequest(trx, row.id);
       return err('expired' as const);
     }
-    await trx.deleteFrom('sign_up_request').where(sql<string>`lower(email)`, '=', row.email.toLowerCase()).execute();
+    await deleteSignUpRequestsFor(trx, row.email);
     const account = await insertAccount(trx, { email: row.email, displayName: row.display_name, passwordHash: row.password_hash, units: row.units });
     return account ? ok(rowToAccount(account)) : err('taken' as const);
   });
@@ -62,5 +61,5 @@ export async function confirmSignUp(db: Kysely<Database>, token: string, now = n
 
 /** Removes pending sign-ups whose link has expired (called now and then). */
 export async function pruneSignUpRequests(db: Kysely<Database>, now = new Date()): Promise<void> {
-  await db.deleteFrom('sign_up_request').where('expires_at', '<=', now).execute();
+  await deleteExpiredSignUpRequests(db, now);
 }

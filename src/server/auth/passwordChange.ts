@@ -3,15 +3,18 @@
 // and every session except the one making the change (none, for a reset link).
 import type { Kysely, Transaction } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import { setAccountPasswordHash } from '../accounts/account.repository.ts';
+import { inTransaction } from '../transaction.repository.ts';
+import { endUnusedPasswordResets } from './passwordReset.repository.ts';
 import { invalidateAccountSessions } from './session.ts';
 
 export async function setPasswordHash(trx: Transaction<Database>, accountId: string, passwordHash: string, keepSessionId?: string, now = new Date()): Promise<void> {
-  await trx.updateTable('account').set({ password_hash: passwordHash, updated_at: now }).where('id', '=', accountId).execute();
-  await trx.updateTable('password_reset').set({ used_at: now }).where('account_id', '=', accountId).where('used_at', 'is', null).execute();
+  await setAccountPasswordHash(trx, accountId, passwordHash, now);
+  await endUnusedPasswordResets(trx, accountId, now);
   await invalidateAccountSessions(trx, accountId, keepSessionId);
 }
 
 /** Runs setPasswordHash in its own transaction. */
 export async function changePasswordHash(db: Kysely<Database>, accountId: string, passwordHash: string, keepSessionId?: string): Promise<void> {
-  await db.transaction().execute((trx) => setPasswordHash(trx, accountId, passwordHash, keepSessionId));
+  await inTransaction(db, (trx) => setPasswordHash(trx, accountId, passwordHash, keepSessionId));
 }

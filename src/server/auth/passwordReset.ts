@@ -3,17 +3,16 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
+import { inTransaction } from '../transaction.repository.ts';
 import { setPasswordHash } from './passwordChange.ts';
+import { insertPasswordReset, lockPasswordReset } from './passwordReset.repository.ts';
 import { generateSessionToken, hashToken } from './session.ts';
 
 export const RESET_VALID_MINUTES = 60;
 
 export async function createPasswordReset(db: Kysely<Database>, accountId: string, now = new Date()): Promise<string> {
   const token = generateSessionToken();
-  await db
-    .insertInto('password_reset')
-    .values({ id: hashToken(token), account_id: accountId, expires_at: new Date(now.getTime() + RESET_VALID_MINUTES * 60_000) })
-    .execute();
+  await insertPasswordReset(db, { id: hashToken(token), accountId, expiresAt: new Date(now.getTime() + RESET_VALID_MINUTES * 60_000) });
   return token;
 }
 
@@ -29,8 +28,8 @@ export async function consumePasswordReset(
   passwordHash: string,
   now = new Date(),
 ): Promise<Result<{ accountId: string }, ResetTokenError>> {
-  return db.transaction().execute(async (trx) => {
-    const row = await trx.selectFrom('password_reset').selectAll().where('id', '=', hashToken(token)).forUpdate().executeTakeFirst();
+  return inTransaction(db, async (trx) => {
+    const row = await lockPasswordReset(trx, hashToken(token));
     if (!row) return err('unknown' as const);
     if (row.used_at) return err('used' as const);
     if (row.expires_at.getTime() <= now.getTime()) return err('expired' as const);

@@ -1,9 +1,10 @@
 // Fixed-window counters in the `rate_limit` table, shared by every server process. A key names what is limited
 // and for whom, e.g. "reset:ip:203.0.113.9". Gates that must hold under parallel requests reserve an attempt
 // before the work: see attemptGate.ts (which also slows down); the rules for account endpoints are in authLimits.ts.
-import { sql, type Kysely } from 'kysely';
+import type { Kysely } from 'kysely';
 import { RATE_LIMIT_SCALE } from 'astro:env/server';
 import type { Database } from '@db/schema.ts';
+import { countHit, deleteEndedRateLimits } from './rateLimit.repository.ts';
 
 export interface RateLimitRule {
   /** Attempts allowed per window, before RATE_LIMIT_SCALE is applied. */
@@ -22,33 +23,9 @@ function scaledLimit(rule: RateLimitRule): number {
  * ended starts again at 1, so concurrent requests cannot both slip past the count.
  */
 export async function consumeRateLimit(db: Kysely<Database>, key: string, rule: RateLimitRule, now = new Date()): Promise<RateLimitCheck> {
-  const windowEnds = new Date(now.getTime() + rule.windowMs);
-  const row = await db
-    .insertInto('rate_limit')
-    .values({ key, hits: 1, window_ends_at: windowEnds })
-    .onConflict((oc) =>
-      oc.column('key').doUpdateSet({
-        hits: sql<number>`case when rate_limit.window_ends_at <= ${now} then 1 else rate_limit.hits + 1 end`,
-        window_ends_at: sql<Date>`case when rate_limit.window_ends_at <= ${now} then ${windowEnds} else rate_limit.window_ends_at end`,
-      }),
-    )
-    .returning(['hits', 'window_ends_at'])
-    .executeTakeFirstOrThrow();
+  const row = await countHit(db, key, new Date(now.getTime() + rule.windowMs), now);
   // Now and then, sweep counters whose window has ended, so the table stays small without a job.
-  if (Math.random() < 0.01) await pruneRateLimits(db, now);
+  if (Math.random() < 0.01) await deleteEndedRateLimits(db, now);
   if (row.hits <= scaledLimit(rule)) return { allowed: true };
   return { allowed: false, retryAt: row.window_ends_at };
-}
-
-export async function clearRateLimit(db: Kysely<Database>, key: string): Promise<void> {
-  await db.deleteFrom('rate_limit').where('key', '=', key).execute();
-}
-
-/** Removes counters whose window has ended and whose wait is over; called now and then so the table stays small. */
-export async function pruneRateLimits(db: Kysely<Database>, now = new Date()): Promise<void> {
-  await db
-    .deleteFrom('rate_limit')
-    .where('window_ends_at', '<=', now)
-    .where((eb) => eb.or([eb('next_at', 'is', null), eb('next_at', '<=', now)]))
-    .execute();
 }

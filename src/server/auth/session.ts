@@ -5,6 +5,7 @@ import { sha256 } from '@oslojs/crypto/sha2';
 import { encodeBase32LowerCaseNoPadding, encodeHexLowerCase } from '@oslojs/encoding';
 import type { Kysely, Transaction } from 'kysely';
 import type { Database, Role, UnitsPreference } from '@db/schema.ts';
+import { deleteAccountSessions, deleteSession, findSessionWithAccount, insertSession, setSessionExpiry } from './session.repository.ts';
 
 export interface SessionUser {
   id: string;
@@ -37,29 +38,24 @@ export function hashToken(token: string): string {
 
 export async function createSession(db: Kysely<Database>, token: string, accountId: string, now = new Date()): Promise<SessionInfo> {
   const session = { id: hashToken(token), expiresAt: new Date(now.getTime() + SESSION_DAYS * DAY_MS) };
-  await db.insertInto('session').values({ id: session.id, account_id: accountId, expires_at: session.expiresAt }).execute();
+  await insertSession(db, { id: session.id, accountId, expiresAt: session.expiresAt });
   return session;
 }
 
 /** Looks the token up; deletes an expired session; renews one that is past half its life. */
 export async function validateSessionToken(db: Kysely<Database>, token: string, now = new Date()): Promise<SessionValidation> {
   const id = hashToken(token);
-  const row = await db
-    .selectFrom('session')
-    .innerJoin('account', 'account.id', 'session.account_id')
-    .select(['session.id', 'session.expires_at', 'account.id as account_id', 'account.email', 'account.display_name', 'account.role', 'account.units', 'account.created_at'])
-    .where('session.id', '=', id)
-    .executeTakeFirst();
+  const row = await findSessionWithAccount(db, id);
   if (!row) return { session: null, user: null, refreshed: false };
   if (row.expires_at.getTime() <= now.getTime()) {
-    await db.deleteFrom('session').where('id', '=', id).execute();
+    await deleteSession(db, id);
     return { session: null, user: null, refreshed: false };
   }
   const session: SessionInfo = { id, expiresAt: row.expires_at };
   let refreshed = false;
   if (row.expires_at.getTime() - now.getTime() < REFRESH_DAYS * DAY_MS) {
     session.expiresAt = new Date(now.getTime() + SESSION_DAYS * DAY_MS);
-    await db.updateTable('session').set({ expires_at: session.expiresAt }).where('id', '=', id).execute();
+    await setSessionExpiry(db, id, session.expiresAt);
     refreshed = true;
   }
   const user: SessionUser = { id: row.account_id, email: row.email, displayName: row.display_name, role: row.role, units: row.units, createdAt: row.created_at };
@@ -67,14 +63,12 @@ export async function validateSessionToken(db: Kysely<Database>, token: string, 
 }
 
 export async function invalidateSession(db: Kysely<Database>, sessionId: string): Promise<void> {
-  await db.deleteFrom('session').where('id', '=', sessionId).execute();
+  await deleteSession(db, sessionId);
 }
 
 /** Signs the account out everywhere, optionally keeping one session (the one changing its password). */
 export async function invalidateAccountSessions(db: Kysely<Database> | Transaction<Database>, accountId: string, keepSessionId?: string): Promise<void> {
-  let q = db.deleteFrom('session').where('account_id', '=', accountId);
-  if (keepSessionId) q = q.where('id', '!=', keepSessionId);
-  await q.execute();
+  await deleteAccountSessions(db, accountId, keepSessionId);
 }
 
 /** HttpOnly, SameSite=Lax; Secure whenever the request itself came over https. */

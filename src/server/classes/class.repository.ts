@@ -1,6 +1,6 @@
 // Queries on class, lesson and enrollment. Rows become camelCase JSON in classJson.ts.
-import { sql, type Kysely, type Transaction } from 'kysely';
-import type { Database } from '@db/schema.ts';
+import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
+import type { ClassTable, Database } from '@db/schema.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
 
@@ -82,4 +82,132 @@ export async function enrollStudent(db: Db, classId: string, studentId: string, 
     .returning('student_id')
     .executeTakeFirst();
   return row !== undefined;
+}
+
+export interface NewClassValues {
+  teacherId: string;
+  title: string;
+  description: string;
+  /** A calendar date, YYYY-MM-DD. */
+  startsOn: string;
+  priceCents: number | null;
+  currency: string | null;
+  joinCode: string;
+}
+
+/** Inserts a class; throws PostgreSQL's unique violation (23505) when the join code is taken. */
+export async function insertClass(db: Db, v: NewClassValues): Promise<string> {
+  const row = await db
+    .insertInto('class')
+    .values({
+      teacher_id: v.teacherId,
+      title: v.title,
+      description: v.description,
+      starts_on: v.startsOn,
+      price_cents: v.priceCents,
+      currency: v.currency,
+      join_code: v.joinCode,
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}
+
+export async function updateClassRow(
+  db: Db,
+  classId: string,
+  changes: Partial<{ title: string; description: string; startsOn: string; priceCents: number | null; currency: string | null; joinCode: string }>,
+): Promise<void> {
+  await db
+    .updateTable('class')
+    .set({
+      ...(changes.title !== undefined && { title: changes.title }),
+      ...(changes.description !== undefined && { description: changes.description }),
+      ...(changes.startsOn !== undefined && { starts_on: changes.startsOn }),
+      ...(changes.priceCents !== undefined && { price_cents: changes.priceCents }),
+      ...(changes.currency !== undefined && { currency: changes.currency }),
+      ...(changes.joinCode !== undefined && { join_code: changes.joinCode }),
+      updated_at: new Date(),
+    })
+    .where('id', '=', classId)
+    .execute();
+}
+
+/** The id of the teacher's class with exactly this title, if any (the demo seed's idempotency key). */
+export async function findTaughtClassIdByTitle(db: Db, teacherId: string, title: string): Promise<string | undefined> {
+  const row = await db.selectFrom('class').select('id').where('teacher_id', '=', teacherId).where('title', '=', title).executeTakeFirst();
+  return row?.id;
+}
+
+/** The class a join code opens, with its teacher's current role; undefined for an unknown code. */
+export async function findClassByJoinCode(db: Db, joinCode: string) {
+  return db
+    .selectFrom('class')
+    .innerJoin('account as teacher', 'teacher.id', 'class.teacher_id')
+    .select(['class.id', 'class.teacher_id', 'teacher.role as teacher_role'])
+    .where('class.join_code', '=', joinCode)
+    .executeTakeFirst();
+}
+
+export interface NewLessonValues {
+  classId: string;
+  title: string;
+  releaseAt: Date;
+  notesMd: string;
+  templateVersionId: string;
+}
+
+export async function insertLesson(db: Db, v: NewLessonValues): Promise<string> {
+  const row = await db
+    .insertInto('lesson')
+    .values({ class_id: v.classId, title: v.title, release_at: v.releaseAt, notes_md: v.notesMd, template_version_id: v.templateVersionId })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  return row.id;
+}
+
+export async function updateLessonRow(
+  db: Db,
+  lessonId: string,
+  changes: Partial<{ title: string; releaseAt: Date; notesMd: string; templateVersionId: string }>,
+): Promise<void> {
+  await db
+    .updateTable('lesson')
+    .set({
+      ...(changes.title !== undefined && { title: changes.title }),
+      ...(changes.releaseAt !== undefined && { release_at: changes.releaseAt }),
+      ...(changes.notesMd !== undefined && { notes_md: changes.notesMd }),
+      ...(changes.templateVersionId !== undefined && { template_version_id: changes.templateVersionId }),
+      updated_at: new Date(),
+    })
+    .where('id', '=', lessonId)
+    .execute();
+}
+
+export async function findClassById(db: Db, id: string): Promise<Selectable<ClassTable> | undefined> {
+  return db.selectFrom('class').selectAll().where('id', '=', id).executeTakeFirst();
+}
+
+export async function isEnrolled(db: Db, classId: string, studentId: string): Promise<boolean> {
+  const row = await db.selectFrom('enrollment').select('student_id').where('class_id', '=', classId).where('student_id', '=', studentId).executeTakeFirst();
+  return row !== undefined;
+}
+
+/** The lesson's class and whether it is out (the database clock decides: release_at <= now()). */
+export async function findLessonRelease(db: Db, lessonId: string): Promise<{ id: string; class_id: string; released: boolean } | undefined> {
+  const row = await db
+    .selectFrom('lesson')
+    .select((eb) => ['id', 'class_id', eb('release_at', '<=', sql<Date>`now()`).as('released')])
+    .where('id', '=', lessonId)
+    .executeTakeFirst();
+  return row && { id: row.id, class_id: row.class_id, released: Boolean(row.released) };
+}
+
+/** Deletes the class (its lessons, enrollments, invitations, progress and photo rows go with it, by cascade). */
+export async function deleteClass(db: Db, id: string): Promise<void> {
+  await db.deleteFrom('class').where('id', '=', id).execute();
+}
+
+export async function deleteLesson(db: Db, id: string): Promise<void> {
+  await db.deleteFrom('lesson').where('id', '=', id).execute();
 }

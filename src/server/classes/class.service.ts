@@ -5,7 +5,8 @@ import type { Database } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 import type { SessionUser } from '../auth/session.ts';
 import type { createClassSchema, createLessonSchema, updateClassSchema, updateLessonSchema } from './class.schema.ts';
-import { enrollStudent } from './class.repository.ts';
+import { findVersionAccess } from '../templates/template.repository.ts';
+import { enrollStudent, findClassByJoinCode, insertClass, insertLesson, updateClassRow, updateLessonRow } from './class.repository.ts';
 import { generateJoinCode, normalizeJoinCode } from './joinCode.ts';
 
 const UNIQUE_VIOLATION = '23505';
@@ -15,20 +16,15 @@ const isUniqueViolation = (e: unknown) => typeof e === 'object' && e !== null &&
 export async function createClass(db: Kysely<Database>, teacherId: string, input: z.output<typeof createClassSchema>): Promise<string> {
   for (let attempt = 0; ; attempt += 1) {
     try {
-      const row = await db
-        .insertInto('class')
-        .values({
-          teacher_id: teacherId,
-          title: input.title,
-          description: input.description,
-          starts_on: input.startsOn,
-          price_cents: input.priceCents,
-          currency: input.currency,
-          join_code: generateJoinCode(),
-        })
-        .returning('id')
-        .executeTakeFirstOrThrow();
-      return row.id;
+      return await insertClass(db, {
+        teacherId,
+        title: input.title,
+        description: input.description,
+        startsOn: input.startsOn,
+        priceCents: input.priceCents,
+        currency: input.currency,
+        joinCode: generateJoinCode(),
+      });
     } catch (e) {
       if (!isUniqueViolation(e) || attempt >= 4) throw e;
     }
@@ -36,23 +32,18 @@ export async function createClass(db: Kysely<Database>, teacherId: string, input
 }
 
 export async function updateClass(db: Kysely<Database>, classId: string, input: z.output<typeof updateClassSchema>): Promise<void> {
-  await db
-    .updateTable('class')
-    .set({
-      ...(input.title !== undefined && { title: input.title }),
-      ...(input.description !== undefined && { description: input.description }),
-      ...(input.startsOn !== undefined && { starts_on: input.startsOn }),
-      ...(input.priceCents !== undefined && { price_cents: input.priceCents }),
-      ...(input.currency !== undefined && { currency: input.currency }),
-      updated_at: new Date(),
-    })
-    .where('id', '=', classId)
-    .execute();
+  await updateClassRow(db, classId, {
+    ...(input.title !== undefined && { title: input.title }),
+    ...(input.description !== undefined && { description: input.description }),
+    ...(input.startsOn !== undefined && { startsOn: input.startsOn }),
+    ...(input.priceCents !== undefined && { priceCents: input.priceCents }),
+    ...(input.currency !== undefined && { currency: input.currency }),
+  });
 }
 
 export async function regenerateJoinCode(db: Kysely<Database>, classId: string): Promise<string> {
   const code = generateJoinCode();
-  await db.updateTable('class').set({ join_code: code, updated_at: new Date() }).where('id', '=', classId).execute();
+  await updateClassRow(db, classId, { joinCode: code });
   return code;
 }
 
@@ -61,49 +52,29 @@ export async function regenerateJoinCode(db: Kysely<Database>, classId: string):
  * reported exactly like a version that does not exist.
  */
 export async function canUseTemplateVersion(db: Kysely<Database>, teacherId: string, user: SessionUser, versionId: string): Promise<boolean> {
-  const row = await db
-    .selectFrom('template_version as tv')
-    .innerJoin('template', 'template.id', 'tv.template_id')
-    .select(['template.owner_id', 'template.visibility'])
-    .where('tv.id', '=', versionId)
-    .executeTakeFirst();
+  const row = await findVersionAccess(db, versionId);
   if (!row) return false;
   return row.visibility === 'public' || row.owner_id === teacherId || row.owner_id === user.id || user.role === 'admin';
 }
 
 export async function createLesson(db: Kysely<Database>, classId: string, input: z.output<typeof createLessonSchema>): Promise<string> {
-  const row = await db
-    .insertInto('lesson')
-    .values({ class_id: classId, title: input.title, release_at: new Date(input.releaseAt), notes_md: input.notes, template_version_id: input.templateVersionId })
-    .returning('id')
-    .executeTakeFirstOrThrow();
-  return row.id;
+  return insertLesson(db, { classId, title: input.title, releaseAt: new Date(input.releaseAt), notesMd: input.notes, templateVersionId: input.templateVersionId });
 }
 
 export async function updateLesson(db: Kysely<Database>, lessonId: string, input: z.output<typeof updateLessonSchema>): Promise<void> {
-  await db
-    .updateTable('lesson')
-    .set({
-      ...(input.title !== undefined && { title: input.title }),
-      ...(input.releaseAt !== undefined && { release_at: new Date(input.releaseAt) }),
-      ...(input.notes !== undefined && { notes_md: input.notes }),
-      ...(input.templateVersionId !== undefined && { template_version_id: input.templateVersionId }),
-      updated_at: new Date(),
-    })
-    .where('id', '=', lessonId)
-    .execute();
+  await updateLessonRow(db, lessonId, {
+    ...(input.title !== undefined && { title: input.title }),
+    ...(input.releaseAt !== undefined && { releaseAt: new Date(input.releaseAt) }),
+    ...(input.notes !== undefined && { notesMd: input.notes }),
+    ...(input.templateVersionId !== undefined && { templateVersionId: input.templateVersionId }),
+  });
 }
 
 export type JoinError = { kind: 'unknown-code' } | { kind: 'own-class' };
 
 /** Enrols the user in the class whose join code they typed. */
 export async function joinByCode(db: Kysely<Database>, user: SessionUser, typed: string): Promise<Result<{ classId: string; newlyJoined: boolean }, JoinError>> {
-  const cls = await db
-    .selectFrom('class')
-    .innerJoin('account as teacher', 'teacher.id', 'class.teacher_id')
-    .select(['class.id', 'class.teacher_id', 'teacher.role as teacher_role'])
-    .where('class.join_code', '=', normalizeJoinCode(typed))
-    .executeTakeFirst();
+  const cls = await findClassByJoinCode(db, normalizeJoinCode(typed));
   // A class whose teacher is no longer a teacher takes no new students (the code answers as unknown).
   if (!cls || cls.teacher_role === 'quilter') return err({ kind: 'unknown-code' });
   if (cls.teacher_id === user.id) return err({ kind: 'own-class' });

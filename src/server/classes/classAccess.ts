@@ -2,10 +2,11 @@
 // everyone else gets the same answer as for a class that does not exist (null → 404). The teacher's role is read
 // on every request: a teacher demoted to quilter stops managing their classes at once (the classes stay, read-only
 // for their students and managed by admins; see DEVELOPERS.md "Who may see what").
-import { sql, type Kysely, type Selectable, type Transaction } from 'kysely';
+import type { Kysely, Selectable, Transaction } from 'kysely';
 import type { ClassTable, Database } from '@db/schema.ts';
 import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
+import { findClassById, findLessonRelease, isEnrolled } from './class.repository.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
 export type ClassRow = Selectable<ClassTable>;
@@ -25,12 +26,11 @@ export const isUuid = (s: string | undefined): s is string => s !== undefined &&
 /** The class and the user's standing toward it, or null when the user may not see it at all. */
 export async function findClassAccess(db: Db, user: SessionUser, classId: string | undefined): Promise<ClassAccess | null> {
   if (!isUuid(classId)) return null;
-  const cls = await db.selectFrom('class').selectAll().where('id', '=', classId).executeTakeFirst();
+  const cls = await findClassById(db, classId);
   if (!cls) return null;
   if (cls.teacher_id === user.id && hasRole(user, 'teacher')) return { cls, standing: 'teacher' };
   if (user.role === 'admin') return { cls, standing: 'admin' };
-  const enrolled = await db.selectFrom('enrollment').select('student_id').where('class_id', '=', cls.id).where('student_id', '=', user.id).executeTakeFirst();
-  return enrolled ? { cls, standing: 'student' } : null;
+  return (await isEnrolled(db, cls.id, user.id)) ? { cls, standing: 'student' } : null;
 }
 
 export interface LessonAccess extends ClassAccess {
@@ -44,14 +44,10 @@ export interface LessonAccess extends ClassAccess {
  */
 export async function findLessonAccess(db: Db, user: SessionUser, lessonId: string | undefined): Promise<LessonAccess | null> {
   if (!isUuid(lessonId)) return null;
-  const lesson = await db
-    .selectFrom('lesson')
-    .select((eb) => ['id', 'class_id', eb('release_at', '<=', sql<Date>`now()`).as('released')])
-    .where('id', '=', lessonId)
-    .executeTakeFirst();
+  const lesson = await findLessonRelease(db, lessonId);
   if (!lesson) return null;
   const access = await findClassAccess(db, user, lesson.class_id);
   if (!access) return null;
   if (access.standing === 'student' && !lesson.released) return null;
-  return { ...access, lessonId: lesson.id, released: Boolean(lesson.released) };
+  return { ...access, lessonId: lesson.id, released: lesson.released };
 }

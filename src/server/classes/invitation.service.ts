@@ -5,7 +5,9 @@ import { err, ok, type Result } from '@shared/result.ts';
 import { hashToken } from '../auth/session.ts';
 import type { SessionUser } from '../auth/session.ts';
 import { sendEmail } from '../mail/mailer.ts';
+import { inTransaction } from '../transaction.repository.ts';
 import { enrollStudent } from './class.repository.ts';
+import { findInvitationByTokenHash, insertInvitation, markInvitationUsed } from './invitation.repository.ts';
 import { classInvitationEmail } from './teachingEmails.ts';
 import { inviteKey } from './inviteKey.ts';
 import { signInviteToken, verifyInviteToken } from './inviteToken.ts';
@@ -26,14 +28,10 @@ export async function inviteByEmail(db: Kysely<Database>, cls: { id: string; tit
   const out: InvitationSent[] = [];
   for (const email of new Set(emails.map((e) => e.trim()))) {
     const signed = signInviteToken(key, new Date(now.getTime() + INVITATION_VALID_DAYS * DAY_MS));
-    const row = await db
-      .insertInto('class_invitation')
-      .values({ class_id: cls.id, email, token_hash: hashToken(signed.id), expires_at: signed.expiresAt })
-      .returning('id')
-      .executeTakeFirstOrThrow();
+    const id = await insertInvitation(db, { classId: cls.id, email, tokenHash: hashToken(signed.id), expiresAt: signed.expiresAt });
     const link = new URL(`/invitations/${signed.token}`, origin).href;
     const sent = await sendEmail(db, classInvitationEmail(email, cls.title, teacherName, link, signed.expiresAt));
-    out.push({ id: row.id, email, expiresAt: signed.expiresAt, delivered: sent.status === 'sent' });
+    out.push({ id, email, expiresAt: signed.expiresAt, delivered: sent.status === 'sent' });
   }
   return out;
 }
@@ -58,13 +56,7 @@ export interface OpenInvitation {
 export async function inspectInvitation(db: Kysely<Database>, token: string, now = new Date()): Promise<Result<OpenInvitation, InvitationProblem>> {
   const checked = verifyInviteToken(await inviteKey(db), token, now);
   if (!checked.ok) return checked.error.kind === 'expired' ? err(checked.error) : err({ kind: 'forged' });
-  const row = await db
-    .selectFrom('class_invitation as i')
-    .innerJoin('class', 'class.id', 'i.class_id')
-    .innerJoin('account as teacher', 'teacher.id', 'class.teacher_id')
-    .select(['i.id', 'i.email', 'i.expires_at', 'i.used_at', 'i.revoked_at', 'class.id as class_id', 'class.title', 'class.teacher_id', 'teacher.display_name', 'teacher.role as teacher_role'])
-    .where('i.token_hash', '=', hashToken(checked.value.id))
-    .executeTakeFirst();
+  const row = await findInvitationByTokenHash(db, hashToken(checked.value.id));
   if (!row) return err({ kind: 'forged' });
   // A teacher demoted to quilter: their open invitations stop working, as if withdrawn (see classAccess.ts).
   if (row.revoked_at || row.teacher_role === 'quilter') return err({ kind: 'revoked' });
@@ -83,15 +75,8 @@ export async function acceptInvitation(db: Kysely<Database>, user: SessionUser, 
   const open = await inspectInvitation(db, token, now);
   if (!open.ok) return open;
   if (open.value.teacherId === user.id) return err({ kind: 'own-class' });
-  return db.transaction().execute(async (trx) => {
-    const used = await trx
-      .updateTable('class_invitation')
-      .set({ used_at: now, used_by: user.id })
-      .where('id', '=', open.value.invitationId)
-      .where('used_at', 'is', null)
-      .returning('id')
-      .executeTakeFirst();
-    if (!used) return err({ kind: 'used' as const, usedAt: now });
+  return inTransaction(db, async (trx) => {
+    if (!(await markInvitationUsed(trx, open.value.invitationId, user.id, now))) return err({ kind: 'used' as const, usedAt: now });
     await enrollStudent(trx, open.value.classId, user.id, 'invitation');
     return ok({ classId: open.value.classId });
   });

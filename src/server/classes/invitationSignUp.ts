@@ -8,7 +8,9 @@ import { err, ok, type Result } from '@shared/result.ts';
 import { insertAccount, rowToAccount, type Account } from '../accounts/account.repository.ts';
 import type { SignUpInput } from '../accounts/signUpRequest.ts';
 import { hashPassword } from '../auth/password.ts';
+import { inTransaction } from '../transaction.repository.ts';
 import { enrollStudent } from './class.repository.ts';
+import { markInvitationUsed } from './invitation.repository.ts';
 import { inspectInvitation, type InvitationProblem } from './invitation.service.ts';
 
 export type InvitationSignUpProblem = InvitationProblem | { kind: 'other-email'; invited: string } | { kind: 'email-taken' };
@@ -30,17 +32,10 @@ export async function signUpFromInvitation(
   if (open.value.email.trim().toLowerCase() !== input.email.toLowerCase()) return err({ kind: 'other-email', invited: open.value.email });
   const passwordHash = await hashPassword(input.password);
   try {
-    return await db.transaction().execute(async (trx) => {
+    return await inTransaction(db, async (trx) => {
       const row = await insertAccount(trx, { email: input.email, displayName: input.displayName, passwordHash, units: input.units });
       if (!row) throw new Abort({ kind: 'email-taken' });
-      const used = await trx
-        .updateTable('class_invitation')
-        .set({ used_at: now, used_by: row.id })
-        .where('id', '=', open.value.invitationId)
-        .where('used_at', 'is', null)
-        .returning('id')
-        .executeTakeFirst();
-      if (!used) throw new Abort({ kind: 'used', usedAt: now });
+      if (!(await markInvitationUsed(trx, open.value.invitationId, row.id, now))) throw new Abort({ kind: 'used', usedAt: now });
       await enrollStudent(trx, open.value.classId, row.id, 'invitation');
       return ok({ account: rowToAccount(row), passwordHash, classId: open.value.classId });
     });

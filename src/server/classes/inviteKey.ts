@@ -1,9 +1,9 @@
 // The HMAC key for invitation links: INVITE_SECRET when configured; otherwise 32 random bytes generated once
-// and kept in server_secret, so links survive restarts and every server process agrees on the key.
-import { randomBytes } from 'node:crypto';
+// and kept in server_secret (serverSecret.ts), so links survive restarts and every server process agrees on the key.
 import { INVITE_SECRET } from 'astro:env/server';
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import { serverSecret } from '../serverSecret.ts';
 
 let cached: Uint8Array | undefined;
 
@@ -13,12 +13,6 @@ export async function inviteKey(db: Kysely<Database>): Promise<Uint8Array> {
     cached = new TextEncoder().encode(INVITE_SECRET);
     return cached;
   }
-  await db
-    .insertInto('server_secret')
-    .values({ name: 'invite-hmac', value: randomBytes(32).toString('base64') })
-    .onConflict((oc) => oc.column('name').doNothing())
-    .execute();
-  const row = await db.selectFrom('server_secret').select('value').where('name', '=', 'invite-hmac').executeTakeFirstOrThrow();
-  cached = new Uint8Array(Buffer.from(row.value, 'base64'));
+  cached = await serverSecret(db, 'invite-hmac');
   return cached;
 }

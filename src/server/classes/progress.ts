@@ -2,6 +2,7 @@
 // whether the lesson is finished, and when they were last active. Saved by the walkthrough island.
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import { findProgress, upsertProgress } from './progress.repository.ts';
 
 export interface ProgressJson {
   lessonId: string;
@@ -13,7 +14,7 @@ export interface ProgressJson {
 }
 
 export async function readProgress(db: Kysely<Database>, lessonId: string, studentId: string): Promise<ProgressJson> {
-  const row = await db.selectFrom('lesson_progress').selectAll().where('lesson_id', '=', lessonId).where('student_id', '=', studentId).executeTakeFirst();
+  const row = await findProgress(db, lessonId, studentId);
   if (!row) return { lessonId, stepIndex: 0, totalSteps: 0, finished: false, finishedAt: null, lastActiveAt: null };
   return {
     lessonId,
@@ -33,17 +34,6 @@ export async function saveProgress(
   p: { stepIndex: number; totalSteps: number; finished: boolean },
   now = new Date(),
 ): Promise<ProgressJson> {
-  await db
-    .insertInto('lesson_progress')
-    .values({ lesson_id: lessonId, student_id: studentId, step_index: p.stepIndex, total_steps: p.totalSteps, finished_at: p.finished ? now : null, last_active_at: now })
-    .onConflict((oc) =>
-      oc.columns(['lesson_id', 'student_id']).doUpdateSet((eb) => ({
-        step_index: p.stepIndex,
-        total_steps: p.totalSteps,
-        last_active_at: now,
-        finished_at: p.finished ? eb.fn.coalesce('lesson_progress.finished_at', eb.val(now)) : null,
-      })),
-    )
-    .execute();
+  await upsertProgress(db, { lessonId, studentId, stepIndex: p.stepIndex, totalSteps: p.totalSteps, finished: p.finished, now });
   return readProgress(db, lessonId, studentId);
 }

@@ -2,9 +2,10 @@
 // Each enrolled student gets one e-mail per lesson: the outbox row's dedupe_key `lesson-release:<lesson>:<student>`
 // is unique, so a second sweep, a restart or two server processes racing cannot send it twice.
 // Students who joined after a lesson came out are not told about it (they see it in the class anyway).
-import { sql, type Kysely } from 'kysely';
+import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { sendEmail } from '../mail/mailer.ts';
+import { listUnannouncedReleases } from './lessonRelease.repository.ts';
 import { lessonReleasedEmail } from './teachingEmails.ts';
 
 export interface SweepReport {
@@ -17,25 +18,7 @@ export interface SweepReport {
 export const ANNOUNCE_WINDOW_DAYS = 14;
 
 export async function sweepLessonReleases(db: Kysely<Database>, origin: string): Promise<SweepReport> {
-  const due = await db
-    .selectFrom('lesson')
-    .innerJoin('class', 'class.id', 'lesson.class_id')
-    .innerJoin('enrollment', 'enrollment.class_id', 'lesson.class_id')
-    .innerJoin('account as student', 'student.id', 'enrollment.student_id')
-    .select(['lesson.id as lesson_id', 'lesson.title', 'class.id as class_id', 'class.title as class_title', 'student.id as student_id', 'student.email', 'student.display_name'])
-    .where('lesson.release_at', '<=', sql<Date>`now()`)
-    .where('lesson.release_at', '>', sql<Date>`now() - make_interval(days => ${ANNOUNCE_WINDOW_DAYS})`)
-    .where(sql<boolean>`greatest(lesson.release_at, lesson.updated_at) >= enrollment.joined_at`)
-    .where((eb) =>
-      eb.not(
-        eb.exists(
-          eb.selectFrom('email_message').select('email_message.id').whereRef('email_message.dedupe_key', '=', sql<string>`'lesson-release:' || lesson.id || ':' || student.id`),
-        ),
-      ),
-    )
-    .orderBy('lesson.release_at')
-    .limit(500)
-    .execute();
+  const due = await listUnannouncedReleases(db, ANNOUNCE_WINDOW_DAYS, 500);
   const report: SweepReport = { sent: 0, failed: 0, alreadySent: 0 };
   for (const r of due) {
     const link = new URL(`/classes/${r.class_id}/lessons/${r.lesson_id}`, origin).href;

@@ -2,6 +2,7 @@
 // last, its step and total), when they were last active, and how many photos they uploaded. Plus CSV export.
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import { countLessons, listEnrolledStudents, listLatestProgress } from './roster.repository.ts';
 
 export interface RosterEntry {
   studentId: string;
@@ -17,40 +18,9 @@ export interface RosterEntry {
 }
 
 export async function readRoster(db: Kysely<Database>, classId: string): Promise<RosterEntry[]> {
-  const lessonCount = await db.selectFrom('lesson').select((eb) => eb.fn.countAll<number>().as('n')).where('class_id', '=', classId).executeTakeFirstOrThrow();
-  const rows = await db
-    .selectFrom('enrollment as e')
-    .innerJoin('account as a', 'a.id', 'e.student_id')
-    .select(['a.id', 'a.display_name', 'a.email', 'e.joined_at', 'e.joined_via'])
-    .select((eb) => [
-      eb
-        .selectFrom('lesson_progress as p')
-        .innerJoin('lesson as l', 'l.id', 'p.lesson_id')
-        .select(eb.fn.countAll<number>().as('n'))
-        .whereRef('p.student_id', '=', 'a.id')
-        .where('l.class_id', '=', classId)
-        .where('p.finished_at', 'is not', null)
-        .as('finished'),
-      eb
-        .selectFrom('lesson_photo as ph')
-        .innerJoin('lesson as l', 'l.id', 'ph.lesson_id')
-        .select(eb.fn.countAll<number>().as('n'))
-        .whereRef('ph.student_id', '=', 'a.id')
-        .where('l.class_id', '=', classId)
-        .as('photos'),
-    ])
-    .where('e.class_id', '=', classId)
-    .orderBy('a.display_name')
-    .execute();
-  const latest = await db
-    .selectFrom('lesson_progress as p')
-    .innerJoin('lesson as l', 'l.id', 'p.lesson_id')
-    .distinctOn('p.student_id')
-    .select(['p.student_id', 'p.lesson_id', 'l.title', 'p.step_index', 'p.total_steps', 'p.finished_at', 'p.last_active_at'])
-    .where('l.class_id', '=', classId)
-    .orderBy('p.student_id')
-    .orderBy('p.last_active_at', 'desc')
-    .execute();
+  const lessonCount = await countLessons(db, classId);
+  const rows = await listEnrolledStudents(db, classId);
+  const latest = await listLatestProgress(db, classId);
   const byStudent = new Map(latest.map((p) => [p.student_id, p]));
   return rows.map((r) => {
     const p = byStudent.get(r.id);
@@ -61,7 +31,7 @@ export async function readRoster(db: Kysely<Database>, classId: string): Promise
       joinedAt: r.joined_at.toISOString(),
       joinedVia: r.joined_via,
       lessonsFinished: Number(r.finished ?? 0),
-      lessonCount: Number(lessonCount.n),
+      lessonCount,
       current: p ? { lessonId: p.lesson_id, lessonTitle: p.title, stepIndex: p.step_index, totalSteps: p.total_steps, finished: p.finished_at !== null } : null,
       lastActiveAt: p ? p.last_active_at.toISOString() : null,
       photos: Number(r.photos ?? 0),

@@ -40,6 +40,8 @@ export interface NewDesignValues {
   summary: DesignSummary | null;
   /** True when `summary` belongs to this drawing (else the figures are computed after the save). */
   summaryCurrent: boolean;
+  /** The template version this design was copied from, or null. */
+  copiedFromTemplateVersionId: string | null;
 }
 
 export async function insertDesign(db: Db, v: NewDesignValues): Promise<DesignRecordRow> {
@@ -53,6 +55,7 @@ export async function insertDesign(db: Db, v: NewDesignValues): Promise<DesignRe
       thumbnail_svg: v.thumbnailSvg,
       summary: v.summary === null ? null : JSON.stringify(v.summary),
       summary_version: v.summaryCurrent ? 1 : null,
+      copied_from_template_version_id: v.copiedFromTemplateVersionId,
     })
     .returning(RECORD_COLUMNS)
     .executeTakeFirstOrThrow();
@@ -63,6 +66,44 @@ export async function findOwnedDesign(db: Db, ownerId: string, id: string, inclu
   let q = db.selectFrom('design').select(RECORD_COLUMNS).where('id', '=', id).where('owner_id', '=', ownerId);
   if (!includeDeleted) q = q.where('deleted_at', 'is', null);
   return q.executeTakeFirst();
+}
+
+/** The id of the owner's live design with exactly this title, if any (the demo seed's idempotency key). */
+export async function findLiveDesignIdByTitle(db: Db, ownerId: string, title: string): Promise<string | undefined> {
+  const row = await db
+    .selectFrom('design')
+    .select('id')
+    .where('owner_id', '=', ownerId)
+    .where('title', '=', title)
+    .where('deleted_at', 'is', null)
+    .executeTakeFirst();
+  return row?.id;
+}
+
+/** The owner's live design's drawing (parsed jsonb) with its saved route, if any, and the version that route belongs to. */
+export async function findOwnedDesignWithRoute(db: Db, ownerId: string, designId: string) {
+  return db
+    .selectFrom('design')
+    .leftJoin('design_route', 'design_route.design_id', 'design.id')
+    .select(['design.data', 'design.version', 'design_route.strokes', 'design_route.summary', 'design_route.design_version as route_version'])
+    .where('design.id', '=', designId)
+    .where('design.owner_id', '=', ownerId)
+    .where('design.deleted_at', 'is', null)
+    .executeTakeFirst();
+}
+
+/** The owner's live designs whose saved route belongs to their current version (they can be published), newest first. */
+export async function listPublishableDesigns(db: Db, ownerId: string, limit: number): Promise<{ id: string; title: string }[]> {
+  return db
+    .selectFrom('design')
+    .innerJoin('design_route', 'design_route.design_id', 'design.id')
+    .select(['design.id', 'design.title'])
+    .where('design.owner_id', '=', ownerId)
+    .where('design.deleted_at', 'is', null)
+    .whereRef('design_route.design_version', '=', 'design.version')
+    .orderBy('design.updated_at', 'desc')
+    .limit(limit)
+    .execute();
 }
 
 export interface DesignChanges {

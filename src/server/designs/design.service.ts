@@ -6,17 +6,17 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
+import { inTransaction } from '../transaction.repository.ts';
 import {
   findDesignRoute,
   findOwnedDesign,
-  insertDesign,
   insertDesignVersion,
   setDesignDeleted,
   updateDesignIfVersion,
-  upsertDesignRoute,
   type DesignChanges,
   type DesignRecordRow,
 } from './design.repository.ts';
+import { writeNewDesign } from './designWriter.ts';
 import type { AcceptedDesign } from './designBody.ts';
 import { storedSummary, toSavedRouteJson } from './designRecord.ts';
 
@@ -31,18 +31,16 @@ export interface Drawing {
 const MAX_TITLE = 200;
 
 export async function createDesign(db: Kysely<Database>, ownerId: string, input: { title: string; notes: string; design: Drawing }): Promise<DesignRecordRow> {
-  return db.transaction().execute(async (trx) => {
-    const row = await insertDesign(trx, {
-      ownerId,
-      title: input.title,
-      notes: input.notes,
-      dataJson: input.design.text,
-      thumbnailSvg: input.design.thumbnailSvg,
-      summary: null,
-      summaryCurrent: false,
-    });
-    await insertDesignVersion(trx, row.id);
-    return row;
+  return writeNewDesign(db, {
+    ownerId,
+    title: input.title,
+    notes: input.notes,
+    dataJson: input.design.text,
+    thumbnailSvg: input.design.thumbnailSvg,
+    summary: null,
+    summaryCurrent: false,
+    copiedFromTemplateVersionId: null,
+    route: null,
   });
 }
 
@@ -83,7 +81,7 @@ export async function restoreDesignVersion(
 }
 
 async function saveOver(db: Kysely<Database>, ownerId: string, id: string, baseVersion: number, next: DesignChanges): Promise<Result<DesignRecordRow, SaveFailure>> {
-  return db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const row = await updateDesignIfVersion(trx, ownerId, id, baseVersion, next);
     if (!row) {
       const now = await findOwnedDesign(trx, ownerId, id);
@@ -99,23 +97,18 @@ export async function duplicateDesign(db: Kysely<Database>, ownerId: string, id:
   const source = await findOwnedDesign(db, ownerId, id);
   if (!source) return undefined;
   const summaryCurrent = source.summary_version === source.version;
-  return db.transaction().execute(async (trx) => {
-    const row = await insertDesign(trx, {
-      ownerId,
-      title: `Copy of ${source.title}`.slice(0, MAX_TITLE),
-      notes: source.notes,
-      dataJson: source.data_json,
-      thumbnailSvg: source.thumbnail_svg,
-      summary: summaryCurrent ? storedSummary(source) : null,
-      summaryCurrent,
-    });
-    await insertDesignVersion(trx, row.id);
-    const found = await findDesignRoute(trx, source.id);
-    const route = found ? toSavedRouteJson(found, source.version) : null;
-    if (route?.current) {
-      await upsertDesignRoute(trx, { designId: row.id, kind: route.kind, strokes: route.strokes, summary: route.summary, designVersion: row.version });
-    }
-    return row;
+  const found = await findDesignRoute(db, source.id);
+  const route = found ? toSavedRouteJson(found, source.version) : null;
+  return writeNewDesign(db, {
+    ownerId,
+    title: `Copy of ${source.title}`.slice(0, MAX_TITLE),
+    notes: source.notes,
+    dataJson: source.data_json,
+    thumbnailSvg: source.thumbnail_svg,
+    summary: summaryCurrent ? storedSummary(source) : null,
+    summaryCurrent,
+    copiedFromTemplateVersionId: null,
+    route: route?.current ? { kind: route.kind, strokes: route.strokes, summary: route.summary } : null,
   });
 }
 

@@ -6,6 +6,7 @@ import nodemailer from 'nodemailer';
 import { MAIL_FROM, SMTP_HOST, SMTP_PORT } from 'astro:env/server';
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import { findEmailMessage, insertEmailMessage, recordDeliveryAttempt } from './emailMessage.repository.ts';
 
 export interface OutgoingEmail {
   to: string;
@@ -32,27 +33,13 @@ const transport = nodemailer.createTransport({
 
 /** Queues the message in the outbox and delivers it now. Failures are recorded, not thrown. */
 export async function sendEmail(db: Kysely<Database>, mail: OutgoingEmail): Promise<SendOutcome> {
-  const row = await db
-    .insertInto('email_message')
-    .values({
-      to_address: mail.to,
-      subject: mail.subject,
-      body_text: mail.text,
-      body_html: mail.html ?? null,
-      kind: mail.kind,
-      dedupe_key: mail.dedupeKey ?? null,
-      last_error: null,
-      sent_at: null,
-    })
-    .onConflict((oc) => oc.column('dedupe_key').doNothing())
-    .returning('id')
-    .executeTakeFirst();
-  if (!row) return { status: 'duplicate' };
-  return deliver(db, row.id);
+  const id = await insertEmailMessage(db, { to: mail.to, subject: mail.subject, text: mail.text, html: mail.html ?? null, kind: mail.kind, dedupeKey: mail.dedupeKey ?? null });
+  if (id === undefined) return { status: 'duplicate' };
+  return deliver(db, id);
 }
 
 async function deliver(db: Kysely<Database>, id: string): Promise<SendOutcome> {
-  const msg = await db.selectFrom('email_message').selectAll().where('id', '=', id).executeTakeFirstOrThrow();
+  const msg = await findEmailMessage(db, id);
   try {
     await transport.sendMail({
       from: MAIL_FROM,
@@ -61,20 +48,12 @@ async function deliver(db: Kysely<Database>, id: string): Promise<SendOutcome> {
       text: msg.body_text,
       ...(msg.body_html !== null && { html: msg.body_html }),
     });
-    await db
-      .updateTable('email_message')
-      .set((eb) => ({ status: 'sent', attempts: eb('attempts', '+', 1), sent_at: new Date(), last_error: null }))
-      .where('id', '=', id)
-      .execute();
+    await recordDeliveryAttempt(db, id, { sentAt: new Date() });
     return { status: 'sent', id };
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     console.error(`[mail] message ${id} (${msg.kind}) to ${msg.to_address} failed: ${message}`);
-    await db
-      .updateTable('email_message')
-      .set((eb) => ({ status: 'failed', attempts: eb('attempts', '+', 1), last_error: message.slice(0, 1000) }))
-      .where('id', '=', id)
-      .execute();
+    await recordDeliveryAttempt(db, id, { error: message.slice(0, 1000) });
     return { status: 'failed', id, error: message };
   }
 }

@@ -6,6 +6,7 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import type { StoredObject } from '../storage/objectStore.ts';
+import { listPhotoKeysAmong } from './photo.repository.ts';
 
 /** An upload writes its objects and its row within seconds; a quarter of an hour is far beyond any in progress. */
 export const ORPHAN_GRACE_MS = 15 * 60 * 1000;
@@ -33,11 +34,7 @@ export async function sweepOrphanPhotos(db: Kysely<Database>, store: ObjectStore
   for await (const page of store.listPages(PHOTO_PREFIX)) {
     result.checked += page.length;
     const keys = page.map((o) => o.key);
-    const rows = await db
-      .selectFrom('lesson_photo')
-      .select(['object_key', 'thumb_key'])
-      .where((eb) => eb.or([eb('object_key', 'in', keys), eb('thumb_key', 'in', keys)]))
-      .execute();
+    const rows = await listPhotoKeysAmong(db, keys);
     const referenced = new Set(rows.flatMap((r) => [r.object_key, r.thumb_key]));
     const outcomes = await Promise.allSettled(orphanKeys(page, referenced, cutoff).map((key) => store.remove(key)));
     for (const o of outcomes) {

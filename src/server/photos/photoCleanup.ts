@@ -3,10 +3,9 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { deleteObject } from '../storage/objectStore.ts';
+import { listPhotoKeys } from './photo.repository.ts';
 
 export async function deletePhotoObjectsOf(db: Kysely<Database>, scope: { lessonId: string } | { classId: string }): Promise<void> {
-  let q = db.selectFrom('lesson_photo as p').innerJoin('lesson as l', 'l.id', 'p.lesson_id').select(['p.object_key', 'p.thumb_key']);
-  q = 'lessonId' in scope ? q.where('p.lesson_id', '=', scope.lessonId) : q.where('l.class_id', '=', scope.classId);
-  const rows = await q.execute();
+  const rows = await listPhotoKeys(db, scope);
   await Promise.allSettled(rows.flatMap((r) => [deleteObject(r.object_key), deleteObject(r.thumb_key)]));
 }

@@ -5,6 +5,8 @@ import type { Database } from '@db/schema.ts';
 import { designSchema, type Design } from '@shared/design/design.schema.ts';
 import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
 import { err, ok, type Result } from '@shared/result.ts';
+import { findOwnedDesignWithRoute } from '../designs/design.repository.ts';
+import { writeNewDesign } from '../designs/designWriter.ts';
 import type { TemplateVersionRow } from './template.repository.ts';
 import { savedRouteSummarySchema, type SavedRouteSummary } from '@shared/contract/figures.ts';
 import { strokePathsSchema, type StrokePath } from '@shared/contract/strokes.ts';
@@ -19,14 +21,7 @@ export type DesignSourceError = { kind: 'not-found' } | { kind: 'no-route' } | {
 
 /** The owner's design and its saved route; the route must belong to the design's current version. */
 export async function loadPublishableDesign(db: Kysely<Database>, ownerId: string, designId: string): Promise<Result<PublishableDesign, DesignSourceError>> {
-  const row = await db
-    .selectFrom('design')
-    .leftJoin('design_route', 'design_route.design_id', 'design.id')
-    .select(['design.data', 'design.version', 'design_route.strokes', 'design_route.summary', 'design_route.design_version as route_version'])
-    .where('design.id', '=', designId)
-    .where('design.owner_id', '=', ownerId)
-    .where('design.deleted_at', 'is', null)
-    .executeTakeFirst();
+  const row = await findOwnedDesignWithRoute(db, ownerId, designId);
   if (!row) return err({ kind: 'not-found' });
   if (row.route_version === null || row.strokes === null) return err({ kind: 'no-route' });
   if (row.route_version !== row.version) return err({ kind: 'stale-route', designVersion: row.version, routeVersion: row.route_version });
@@ -51,31 +46,17 @@ export async function copyVersionIntoDesigns(db: Kysely<Database>, ownerId: stri
   const summary = copiedDesignSummary(v.figures);
   const title = `${v.title} (template v${v.version})`.slice(0, 200);
   const notes = `Copied from the template "${v.title}", version ${v.version}.`;
-  const data = JSON.stringify(design);
-  const created = await db.transaction().execute(async (trx) => {
-    const created = await trx
-      .insertInto('design')
-      .values({
-        owner_id: ownerId,
-        title,
-        notes,
-        data,
-        thumbnail_svg: buildDesignThumbnailSvg(design),
-        summary: summary === null ? null : JSON.stringify(summary),
-        // A planned route's figures are the new version's figures; otherwise they follow from the engine.
-        summary_version: summary === null ? null : 1,
-        copied_from_template_version_id: v.id,
-      })
-      .returning(['id', 'version'])
-      .executeTakeFirstOrThrow();
-    await trx.insertInto('design_version').values({ design_id: created.id, version: created.version, title, notes, data }).execute();
-    if (route) {
-      await trx
-        .insertInto('design_route')
-        .values({ design_id: created.id, kind: route.kind, strokes: JSON.stringify(route.strokes), summary: JSON.stringify(route.summary), design_version: created.version })
-        .execute();
-    }
-    return created;
+  const created = await writeNewDesign(db, {
+    ownerId,
+    title,
+    notes,
+    dataJson: JSON.stringify(design),
+    thumbnailSvg: buildDesignThumbnailSvg(design),
+    // A planned route's figures are the new version's figures; otherwise they follow from the engine.
+    summary,
+    summaryCurrent: summary !== null,
+    copiedFromTemplateVersionId: v.id,
+    route,
   });
   return { id: created.id, version: created.version, figuresPending: summary === null };
 }

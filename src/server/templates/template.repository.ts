@@ -54,6 +54,39 @@ export async function lockTemplate(trx: Transaction<Database>, id: string): Prom
   return trx.selectFrom('template').selectAll().where('id', '=', id).forUpdate().executeTakeFirst();
 }
 
+/** Moves the template to its new latest version (and visibility); the updated row. */
+export async function setLatestVersion(trx: Db, id: string, latestVersion: number, visibility: TemplateVisibility): Promise<TemplateRow> {
+  return trx
+    .updateTable('template')
+    .set({ latest_version: latestVersion, visibility, updated_at: new Date() })
+    .where('id', '=', id)
+    .returningAll()
+    .executeTakeFirstOrThrow();
+}
+
+/** The first version with exactly this title among the owner's templates (the demo seed's idempotency key). */
+export async function findOwnedVersionIdByTitle(db: Db, ownerId: string, title: string): Promise<string | undefined> {
+  const row = await db
+    .selectFrom('template')
+    .innerJoin('template_version as tv', 'tv.template_id', 'template.id')
+    .select('tv.id')
+    .where('template.owner_id', '=', ownerId)
+    .where('tv.title', '=', title)
+    .orderBy('tv.version')
+    .executeTakeFirst();
+  return row?.id;
+}
+
+/** Who owns the template a version belongs to and who may see it; undefined for an unknown version. */
+export async function findVersionAccess(db: Db, versionId: string): Promise<{ owner_id: string; visibility: TemplateVisibility } | undefined> {
+  return db
+    .selectFrom('template_version as tv')
+    .innerJoin('template', 'template.id', 'tv.template_id')
+    .select(['template.owner_id', 'template.visibility'])
+    .where('tv.id', '=', versionId)
+    .executeTakeFirst();
+}
+
 export async function findTemplate(db: Db, id: string): Promise<TemplateRow | undefined> {
   return db.selectFrom('template').selectAll().where('id', '=', id).executeTakeFirst();
 }

@@ -1,5 +1,7 @@
 // Request bodies and query strings for templates.
 import { z } from 'zod';
+import type { Units } from '@shared/design/design.schema.ts';
+import { formatLength } from '@shared/units/units.ts';
 import { pgInt } from '../inputRules.ts';
 import { isStorableText, UNSTORABLE_MESSAGE } from '../storableText.ts';
 
@@ -34,11 +36,20 @@ export const newVersionSchema = z
   .strict();
 
 export const SIZE_BUCKETS = {
-  small: { label: 'up to 8 in', maxInches: 8 },
-  medium: { label: '8–14 in', maxInches: 14 },
-  large: { label: 'over 14 in', maxInches: Infinity },
+  small: { maxInches: 8 },
+  medium: { maxInches: 14 },
+  large: { maxInches: Infinity },
 } as const;
 export type SizeBucket = keyof typeof SIZE_BUCKETS;
+
+/** A size bucket's label in the viewer's units ("up to 8 in", "20.3–35.6 cm"). */
+export function sizeBucketLabel(bucket: SizeBucket, viewer: Units): string {
+  const side = (inches: number) => formatLength(inches, 'in', viewer).replace(/ (in|cm|m)$/, '');
+  const unit = viewer;
+  if (bucket === 'small') return `up to ${side(SIZE_BUCKETS.small.maxInches)} ${unit}`;
+  if (bucket === 'medium') return `${side(SIZE_BUCKETS.small.maxInches)}–${side(SIZE_BUCKETS.medium.maxInches)} ${unit}`;
+  return `over ${side(SIZE_BUCKETS.medium.maxInches)} ${unit}`;
+}
 
 export const galleryQuerySchema = z.object({
   q: z.string().trim().max(100).refine(isStorableText, UNSTORABLE_MESSAGE).optional(),

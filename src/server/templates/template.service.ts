@@ -5,7 +5,8 @@ import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 import { loadPublishableDesign, type DesignSourceError } from './designSource.ts';
-import { insertTemplate, insertVersion, lockTemplate, findVersion, type TemplateRow, type TemplateVersionRow, type VersionContent } from './template.repository.ts';
+import { inTransaction } from '../transaction.repository.ts';
+import { insertTemplate, insertVersion, lockTemplate, findVersion, setLatestVersion, type TemplateRow, type TemplateVersionRow, type VersionContent } from './template.repository.ts';
 import type { newVersionSchema, publishTemplateSchema } from './template.schema.ts';
 import type { z } from 'zod';
 
@@ -37,7 +38,7 @@ export async function publishTemplate(
     figures,
     sourceDesignId: input.designId,
   };
-  return db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const template = await insertTemplate(trx, ownerId, input.visibility, generateLinkToken());
     const version = await insertVersion(trx, template.id, 1, content);
     return ok({ template, version });
@@ -53,7 +54,7 @@ export async function publishNewVersion(
 ): Promise<Result<{ template: TemplateRow; version: TemplateVersionRow }, PublishError>> {
   const source = input.designId === undefined ? null : await loadPublishableDesign(db, editorId, input.designId);
   if (source && !source.ok) return source;
-  return db.transaction().execute(async (trx) => {
+  return inTransaction(db, async (trx) => {
     const template = await lockTemplate(trx, templateId);
     if (!template) return err({ kind: 'template-not-found' as const });
     const latest = await findVersion(trx, templateId, template.latest_version);
@@ -74,12 +75,7 @@ export async function publishNewVersion(
     };
     const next = template.latest_version + 1;
     const version = await insertVersion(trx, templateId, next, content);
-    const updated = await trx
-      .updateTable('template')
-      .set({ latest_version: next, visibility: input.visibility ?? template.visibility, updated_at: new Date() })
-      .where('id', '=', templateId)
-      .returningAll()
-      .executeTakeFirstOrThrow();
+    const updated = await setLatestVersion(trx, templateId, next, input.visibility ?? template.visibility);
     return ok({ template: updated, version });
   });
 }

@@ -1,10 +1,11 @@
 // Who may see a template. The owner and admins always; anyone (signed in or not) a public one; an unlisted one
 // only through its link token; a class-only one the students of a class with a released lesson that uses it
 // (the same rule also opens unlisted templates to those students, since their teacher chose it for them).
-import { sql, type Kysely } from 'kysely';
+import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
+import { hasReleasedLessonUsingTemplate } from '../classes/lessonRelease.repository.ts';
 import type { TemplateRow } from './template.repository.ts';
 
 export async function canSeeTemplate(db: Kysely<Database>, user: SessionUser | null, tpl: TemplateRow, viaLink: boolean): Promise<boolean> {
@@ -12,16 +13,7 @@ export async function canSeeTemplate(db: Kysely<Database>, user: SessionUser | n
   if (tpl.visibility === 'unlisted' && viaLink) return true;
   if (!user) return false;
   if (tpl.owner_id === user.id || user.role === 'admin') return true;
-  const lesson = await db
-    .selectFrom('lesson')
-    .innerJoin('template_version as tv', 'tv.id', 'lesson.template_version_id')
-    .innerJoin('enrollment', 'enrollment.class_id', 'lesson.class_id')
-    .select('lesson.id')
-    .where('tv.template_id', '=', tpl.id)
-    .where('enrollment.student_id', '=', user.id)
-    .where('lesson.release_at', '<=', sql<Date>`now()`)
-    .executeTakeFirst();
-  return lesson !== undefined;
+  return hasReleasedLessonUsingTemplate(db, tpl.id, user.id);
 }
 
 /** The owner while they are a teacher (a demoted teacher keeps reading their templates, no more), and admins. */

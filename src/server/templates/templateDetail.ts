@@ -2,20 +2,12 @@
 // the version list, and the share link for those who may edit.
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
+import type { TemplateDetail } from '@shared/templates/templateAnswers.ts';
 import type { SessionUser } from '../auth/session.ts';
 import { isUuid } from '../classes/classAccess.ts';
 import { findTemplate, findTemplateByLink, findTemplateCard, findVersion, listVersionNumbers, type TemplateRow } from './template.repository.ts';
 import { canEditTemplate, canSeeTemplate } from './templateAccess.ts';
-import { templateLinkPath, toTemplateCardJson, toVersionJson, type TemplateCardJson, type TemplateVersionJson } from './templateJson.ts';
-
-export interface TemplateDetail {
-  template: TemplateCardJson;
-  version: TemplateVersionJson;
-  versions: { id: string; version: number; title: string; publishedAt: string }[];
-  canEdit: boolean;
-  /** Present for editors: the unguessable link that opens an unlisted template. */
-  linkPath?: string;
-}
+import { templateLinkPath, toTemplateCardJson, toVersionJson } from './templateJson.ts';
 
 export type TemplateRef = { by: 'id'; id: string | undefined } | { by: 'link'; token: string | undefined };
 

@@ -1,20 +1,6 @@
 // How templates appear in API responses. The link token is shown only to those who may edit the template.
+import type { TemplateCardJson, TemplateVersionJson } from '@shared/templates/templateAnswers.ts';
 import type { TemplateCardRow, TemplateRow, TemplateVersionRow } from './template.repository.ts';
-
-export interface TemplateCardJson {
-  id: string;
-  visibility: TemplateRow['visibility'];
-  latestVersion: number;
-  versionId: string;
-  owner: { id: string; displayName: string };
-  title: string;
-  description: string;
-  difficulty: TemplateVersionRow['difficulty'];
-  motifs: string[];
-  size: { units: TemplateVersionRow['units']; width: number; height: number };
-  figures: unknown;
-  publishedAt: string;
-}
 
 export function toTemplateCardJson(r: TemplateCardRow): TemplateCardJson {
   return {
@@ -31,21 +17,6 @@ export function toTemplateCardJson(r: TemplateCardRow): TemplateCardJson {
     figures: r.figures,
     publishedAt: r.published_at.toISOString(),
   };
-}
-
-export interface TemplateVersionJson {
-  id: string;
-  templateId: string;
-  version: number;
-  title: string;
-  description: string;
-  difficulty: TemplateVersionRow['difficulty'];
-  motifs: string[];
-  size: { units: TemplateVersionRow['units']; width: number; height: number };
-  design: unknown;
-  route: unknown;
-  figures: unknown;
-  publishedAt: string;
 }
 
 export function toVersionJson(v: TemplateVersionRow): TemplateVersionJson {

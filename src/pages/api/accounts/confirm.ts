@@ -5,6 +5,7 @@ import { z } from 'zod';
 import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
 import { resetTokenSchema } from '@server/accounts/account.schema.ts';
+import { findAccountRowById } from '@server/accounts/account.repository.ts';
 import { toAccountJson } from '@server/accounts/accountJson.ts';
 import { confirmSignUp, type ConfirmProblem } from '@server/accounts/signUpRequest.ts';
 import { rememberThisDevice } from '@server/auth/deviceCookie.ts';
@@ -32,7 +33,8 @@ export const POST = (async ({ request, cookies, url }) => {
   const created = await confirmSignUp(db, body.value.token);
   if (!created.ok) return problem(400, 'invalid_token', message(created.error), { token: message(created.error) });
   const account = created.value;
-  const row = await db.selectFrom('account').select('password_hash').where('id', '=', account.id).executeTakeFirstOrThrow();
+  const row = await findAccountRowById(db, account.id);
+  if (!row) throw new Error(`pages/api/accounts/confirm: account ${account.id} vanished right after it was created`);
   await rememberThisDevice(db, cookies, url, { id: account.id, passwordHash: row.password_hash });
   const token = generateSessionToken();
   const session = await createSession(db, token, account.id);

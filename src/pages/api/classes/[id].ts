@@ -5,7 +5,7 @@ import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
 import { requireUser } from '@server/auth/guards.ts';
 import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
-import { findClassRow, listLessons } from '@server/classes/class.repository.ts';
+import { deleteClass, findClassRow, listLessons } from '@server/classes/class.repository.ts';
 import { toClassJson, toLessonJson } from '@server/classes/classJson.ts';
 import { updateClassSchema } from '@server/classes/class.schema.ts';
 import { updateClass } from '@server/classes/class.service.ts';
@@ -44,6 +44,6 @@ export const DELETE = (async ({ locals, params }) => {
   const access = await findClassAccess(db, signedIn.value.user, params['id']);
   if (!access || !isManager(access.standing)) return notFound();
   await deletePhotoObjectsOf(db, { classId: access.cls.id });
-  await db.deleteFrom('class').where('id', '=', access.cls.id).execute();
+  await deleteClass(db, access.cls.id);
   return new Response(null, { status: 204 });
 }) satisfies APIRoute;

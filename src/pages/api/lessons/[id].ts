@@ -6,7 +6,7 @@ import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
 import { requireUser } from '@server/auth/guards.ts';
 import { findLessonAccess, isManager } from '@server/classes/classAccess.ts';
-import { findLessonRow } from '@server/classes/class.repository.ts';
+import { deleteLesson, findLessonRow } from '@server/classes/class.repository.ts';
 import { toLessonJson } from '@server/classes/classJson.ts';
 import { updateLessonSchema } from '@server/classes/class.schema.ts';
 import { canUseTemplateVersion, updateLesson } from '@server/classes/class.service.ts';
@@ -59,6 +59,6 @@ export const DELETE = (async ({ locals, params }) => {
   const access = await findLessonAccess(db, signedIn.value.user, params['id']);
   if (!access || !isManager(access.standing)) return notFound();
   await deletePhotoObjectsOf(db, { lessonId: access.lessonId });
-  await db.deleteFrom('lesson').where('id', '=', access.lessonId).execute();
+  await deleteLesson(db, access.lessonId);
   return new Response(null, { status: 204 });
 }) satisfies APIRoute;

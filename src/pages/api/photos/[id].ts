@@ -6,7 +6,8 @@ import { problem } from '@server/http.ts';
 import { requireUser } from '@server/auth/guards.ts';
 import type { SessionUser } from '@server/auth/session.ts';
 import { findClassAccess, isManager, isUuid } from '@server/classes/classAccess.ts';
-import { deletePhoto, findPhotoRow } from '@server/photos/photo.service.ts';
+import { deletePhoto } from '@server/photos/photo.service.ts';
+import { findPhotoRow } from '@server/photos/photo.repository.ts';
 import { getObject } from '@server/storage/objectStore.ts';
 
 async function findVisiblePhoto(user: SessionUser, id: string | undefined) {

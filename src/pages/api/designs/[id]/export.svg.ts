@@ -20,6 +20,7 @@ export const GET = (async ({ locals, params }) => {
       designText: row.data_json,
       options: {
         title: row.title,
+        viewerUnits: owned.value.user.units,
         ...(route?.current ? { route: route.strokes } : {}),
         ...(route && !route.current ? { remark: `The saved route was made for version ${route.designVersion}; this is version ${row.version}. Plan the route again.` } : {}),
       },

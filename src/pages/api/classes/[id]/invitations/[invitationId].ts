@@ -4,6 +4,7 @@ import { db } from '@server/db.ts';
 import { problem } from '@server/http.ts';
 import { requireUser } from '@server/auth/guards.ts';
 import { findClassAccess, isManager, isUuid } from '@server/classes/classAccess.ts';
+import { revokeOpenInvitation } from '@server/classes/invitation.repository.ts';
 
 export const DELETE = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);
@@ -11,13 +12,6 @@ export const DELETE = (async ({ locals, params }) => {
   const access = await findClassAccess(db, signedIn.value.user, params['id']);
   const invitationId = params['invitationId'];
   if (!access || !isManager(access.standing) || !isUuid(invitationId)) return problem(404, 'not_found', 'Not found.');
-  const r = await db
-    .updateTable('class_invitation')
-    .set({ revoked_at: new Date() })
-    .where('id', '=', invitationId)
-    .where('class_id', '=', access.cls.id)
-    .where('used_at', 'is', null)
-    .returning('id')
-    .executeTakeFirst();
-  return r ? new Response(null, { status: 204 }) : problem(404, 'not_found', 'Not found (or already accepted).');
+  const revoked = await revokeOpenInvitation(db, access.cls.id, invitationId, new Date());
+  return revoked ? new Response(null, { status: 204 }) : problem(404, 'not_found', 'Not found (or already accepted).');
 }) satisfies APIRoute;

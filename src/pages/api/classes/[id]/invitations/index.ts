@@ -8,19 +8,15 @@ import { requireUser } from '@server/auth/guards.ts';
 import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
 import { inviteSchema } from '@server/classes/class.schema.ts';
 import { inviteByEmail } from '@server/classes/invitation.service.ts';
+import { listClassInvitations } from '@server/classes/invitation.repository.ts';
+import { findAccountRowById } from '@server/accounts/account.repository.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);
   if (!signedIn.ok) return signedIn.error;
   const access = await findClassAccess(db, signedIn.value.user, params['id']);
   if (!access || !isManager(access.standing)) return problem(404, 'not_found', 'Not found.');
-  const rows = await db
-    .selectFrom('class_invitation as i')
-    .leftJoin('account as a', 'a.id', 'i.used_by')
-    .select(['i.id', 'i.email', 'i.expires_at', 'i.used_at', 'i.revoked_at', 'i.created_at', 'a.display_name as used_by_name'])
-    .where('i.class_id', '=', access.cls.id)
-    .orderBy('i.created_at', 'desc')
-    .execute();
+  const rows = await listClassInvitations(db, access.cls.id);
   const now = Date.now();
   return json({
     invitations: rows.map((r) => ({
@@ -42,7 +38,8 @@ export const POST = (async ({ locals, params, request, url }) => {
   if (!access || !isManager(access.standing)) return problem(404, 'not_found', 'Not found.');
   const body = await readJson(request, inviteSchema);
   if (!body.ok) return body.error;
-  const teacher = await db.selectFrom('account').select('display_name').where('id', '=', access.cls.teacher_id).executeTakeFirstOrThrow();
+  const teacher = await findAccountRowById(db, access.cls.teacher_id);
+  if (!teacher) throw new Error(`pages/api/classes/invitations: class ${access.cls.id} has no teacher row`);
   const sent = await inviteByEmail(db, access.cls, teacher.display_name, body.value.emails, PUBLIC_ORIGIN ?? url.origin);
   return json({ invitations: sent.map((s) => ({ id: s.id, email: s.email, expiresAt: s.expiresAt.toISOString(), delivered: s.delivered })) }, 201);
 }) satisfies APIRoute;

@@ -56,7 +56,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
   const motif = usePatchMotif(design);
 
   const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, endsMode, dispatch: history.dispatch, onPickPatch: motif.pickPatchAt });
-  const check = useRouteCheck(designId, design);
+  const check = useRouteCheck(designId, design, doc.savedCheck, doc.status.kind);
   const [shownJoin, setShownJoin] = useState<JoinProposal | null>(null);
   const joinPreview = useMemo(() => (shownJoin ? joinLines(shownJoin) : null), [shownJoin]);
   // A join drawn for an older drawing would point at lines that moved: drop it on every edit.

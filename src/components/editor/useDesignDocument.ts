@@ -1,7 +1,8 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { assertNever } from '@shared/assertNever.ts';
-import type { DesignRecord } from '@shared/contract/designs.ts';
+import { savedWithCheckAnswerSchema, type DesignRecord } from '@shared/contract/designs.ts';
 import type { Design } from '@shared/design/design.schema.ts';
+import type { SavedCheck } from '@shared/editor/checkSource.ts';
 import { createSaveState, hasUnsavedEdits, stepSave, type SaveCommand, type SaveEvent, type SaveState } from '@shared/editor/saveMachine.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { parseDesignRecord } from '../designs/designsApi.ts';
@@ -22,6 +23,8 @@ export interface DesignDocument {
   /** The server version the edits build on. */
   readonly version: number;
   readonly status: SaveStatus;
+  /** The route check the last save answered with, for the document it sent (saves ask for it: PUT ?check=1). */
+  readonly savedCheck: SavedCheck | null;
   /** Bumped whenever the document is replaced wholesale (load, reload): undo history must restart. */
   readonly generation: number;
   /** Sets the document after an edit (the history applies commands and hands the result here). */
@@ -48,6 +51,7 @@ export function useDesignDocument(designId: string): DesignDocument {
   // The machine's state for event handlers and async answers (React state lags a render behind).
   const current = useRef(machine);
   const timer = useRef<ReturnType<typeof setTimeout> | undefined>(undefined);
+  const [savedCheck, setSavedCheck] = useState<SavedCheck | null>(null);
 
   const dispatch = useMemo(() => {
     const run = (event: SaveEvent<EditedDocument>): void => {
@@ -57,9 +61,13 @@ export function useDesignDocument(designId: string): DesignDocument {
       for (const command of step.commands) carryOut(command);
     };
     const send = async (doc: EditedDocument, baseVersion: number): Promise<void> => {
-      const res = await apiRequest('PUT', `/api/designs/${designId}`, { baseVersion, title: doc.title, notes: doc.notes, design: doc.design });
-      if (res.ok) run({ kind: 'saveSucceeded', version: parseDesignRecord(res.value)?.version ?? baseVersion + 1 });
-      else run({ kind: 'saveFailed', failure: sortSaveFailure(res.error), now: Date.now() });
+      // ?check=1: the answer carries the route check of the saved drawing, so the card needs no request of its own.
+      const res = await apiRequest('PUT', `/api/designs/${designId}?check=1`, { baseVersion, title: doc.title, notes: doc.notes, design: doc.design });
+      if (!res.ok) return run({ kind: 'saveFailed', failure: sortSaveFailure(res.error), now: Date.now() });
+      const answer = savedWithCheckAnswerSchema.safeParse(res.value);
+      const record = answer.success ? answer.data.design : parseDesignRecord(res.value);
+      if (answer.success) setSavedCheck({ design: doc.design, check: answer.data.check, checkError: answer.data.checkError });
+      run({ kind: 'saveSucceeded', version: record?.version ?? baseVersion + 1 });
     };
     const carryOut = (c: SaveCommand<EditedDocument>): void => {
       switch (c.kind) {
@@ -147,6 +155,7 @@ export function useDesignDocument(designId: string): DesignDocument {
     title: machine.doc?.title ?? '',
     version: machine.baseVersion,
     status,
+    savedCheck,
     generation: machine.generation,
     setDesign,
     setTitle,

@@ -3,7 +3,8 @@
  * 1. frame time while panning and zooming a 12 in design with 5,000 strokes in headless Chromium
  *    (target ≥ 50 fps), and
  * 2. the edit → route check round trip on the server for a typical 12 in block (nine-patch seams and
- *    36 quilting lines; target p95 < 150 ms), each round sending the edited draft as the workbench does.
+ *    36 quilting lines; target p95 < 150 ms), each round sending the edited draft as POST …/check does, and one
+ *    burst of edits saved and checked both ways: PUT + POST …/check (before issue 11) and PUT ?check=1 (the workbench now).
  * Seeded (mulberry32, bench/generators.ts), so runs compare like with like. Prints a Markdown table.
  * Run alone: `npx tsx bench/workbench.bench.ts`; `npm run bench` runs it with the other benches.
  * BENCH_PROFILE=1 also prints the page's top self-time functions during pan/zoom (Chrome DevTools profiler);
@@ -164,6 +165,29 @@ async function main(): Promise<void> {
     }
     times.sort((a, b) => a - b);
 
+    // 1b. One burst of edits as the workbench sends it: before issue 11, a save (PUT) and a check of the same drawing
+    // (POST …/check), each planning it (the save's figures in the background lane); now one PUT ?check=1 that plans
+    // once. Wall time until the card has its figures, alternating the two ways round by round.
+    const burst = { twoRequests: [] as number[], oneRequest: [] as number[] };
+    let version = created.json.design.version as number;
+    for (let i = 0; i < ROUND_TRIPS + 5; i++) {
+      const y = 0.5 + rand() * 3;
+      const draft: Design = { ...typical, lines: [...typical.lines, [[0.5, y], [3.5, y + 0.2]]] };
+      const old = i % 2 === 0;
+      const t0 = performance.now();
+      const saved = await client.send('PUT', `/api/designs/${typicalId}${old ? '' : '?check=1'}`, { baseVersion: version, design: draft });
+      if (saved.status !== 200) throw new Error(`bench/workbench: save answered ${saved.status}`);
+      if (old) {
+        const checked = await client.send('POST', `/api/designs/${typicalId}/check`, { design: draft });
+        if (checked.status !== 200) throw new Error(`bench/workbench: check answered ${checked.status}`);
+      } else if (saved.json.check === null) throw new Error('bench/workbench: the save answered without its check');
+      const t = performance.now() - t0;
+      version = saved.json.design.version as number;
+      if (i >= 5) (old ? burst.twoRequests : burst.oneRequest).push(t);
+    }
+    burst.twoRequests.sort((a, b) => a - b);
+    burst.oneRequest.sort((a, b) => a - b);
+
     // 2. Pan and zoom frame time with 5,000 strokes.
     const dense = await client.send('POST', '/api/designs', { title: 'Dense block', design: denseDesign(42) });
     if (dense.status !== 201) throw new Error(`bench/workbench: creating the dense design answered ${dense.status}`);
@@ -205,6 +229,8 @@ async function main(): Promise<void> {
     console.log('| --- | --- | --- |');
     console.log(`| pan + zoom, ${STROKES.toLocaleString('en')} strokes, headless Chromium (software raster) | ${(1000 / mean).toFixed(1)} fps (mean frame ${mean.toFixed(1)} ms, p95 ${percentile(sortedFrames, 95).toFixed(1)} ms, ${frames.length} frames) | ≥ 50 fps |`);
     console.log(`| edit → route check round trip, 12 in nine-patch + 37 lines (${times.length} rounds) | p50 ${percentile(times, 50).toFixed(1)} ms, p95 ${percentile(times, 95).toFixed(1)} ms | p95 < 150 ms |`);
+    console.log(`| edit burst → saved and checked, 2 requests: PUT + POST check (${burst.twoRequests.length} rounds) | p50 ${percentile(burst.twoRequests, 50).toFixed(1)} ms, p95 ${percentile(burst.twoRequests, 95).toFixed(1)} ms | — |`);
+    console.log(`| edit burst → saved and checked, 1 request: PUT ?check=1 (${burst.oneRequest.length} rounds) | p50 ${percentile(burst.oneRequest, 50).toFixed(1)} ms, p95 ${percentile(burst.oneRequest, 95).toFixed(1)} ms | p95 < 150 ms |`);
   } finally {
     for (const c of cleanups.reverse()) {
       try {

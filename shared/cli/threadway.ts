@@ -15,6 +15,7 @@ import { designSchema, type Design } from '../design/design.schema.ts';
 import { fillDesign, fillsSchema, type Fills } from '../motifs/fillDesign.ts';
 import { checkRoute } from '../route/checkRoute.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
+import { toPlanResult } from '../route/routeAnswers.ts';
 import { planDesign } from '../route/planDesign.ts';
 import { planSettingsSchema, type PlanSettings } from '../route/planSettings.ts';
 
@@ -81,30 +82,8 @@ async function plan(design: Design, settings: PlanSettings): Promise<object> {
   const solver = await loadHighsSolver();
   const planned = planDesign(design, { solver, settings, stopsTable: true, clock: () => performance.now() });
   if (!planned.ok) fail(planned.error.message);
-  const p = planned.value;
-  return {
-    command: 'plan',
-    units: design.units,
-    pieces: p.pieces,
-    oddPoints: p.oddPoints,
-    passes: p.passes,
-    stops: p.stops,
-    stitchLength: p.stitchLength,
-    travelLength: p.travelLength,
-    retraceLength: p.retraceLength,
-    ditchLength: p.ditchLength,
-    edgeLength: p.edgeLength,
-    optimal: p.optimal,
-    travelLowerBound: p.travelLowerBound,
-    lowerBound: p.travelLowerBound,
-    gapPercent: p.gapPercent,
-    settings: p.settings,
-    solver: solver.name,
-    stopsTable: p.stopsTable,
-    threadEnds: p.threadEnds.map(({ pass, end, point, place, reason }) => ({ pass, end, point, place, reason })),
-    threadBudget: p.threadBudget,
-    route: p.route.map((s) => ({ pass: s.pass, kind: s.kind, points: s.points })),
-  };
+  // The API's plan answer (shared/contract/plan.ts), built by the same function, plus the solver's name.
+  return { command: 'plan', ...toPlanResult(planned.value), solver: solver.name };
 }
 
 function check(design: Design): object {

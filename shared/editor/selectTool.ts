@@ -1,80 +1,76 @@
-import { pointSegmentDistance } from '../geometry/distance.ts';
-import type { Point, Polyline } from '../geometry/point.ts';
 import type { LineTarget } from '../design/commands.ts';
 import type { Design } from '../design/design.schema.ts';
+import type { Point, Polyline } from '../geometry/point.ts';
+import { pickLine } from './pickLine.ts';
 import type { ToolEvent, ToolStep } from './tool.types.ts';
 
-/** Select/move tool state: the selected line indices (view state, never in history) and a drag in progress. */
-export interface SelectToolState {
+/** The picked lines (view state: never saved, never undone). All from one list: quilting lines or seams. */
+export interface Selection {
   readonly target: LineTarget;
-  /** Hit radius in design units (the caller converts its pixel tolerance at the current zoom). */
-  readonly hitRadius: number;
-  readonly selection: readonly number[];
-  readonly drag: { readonly from: Point; readonly to: Point } | null;
+  readonly indices: readonly number[];
 }
 
-export function createSelectTool(target: LineTarget, hitRadius: number): SelectToolState {
-  return { target, hitRadius, selection: [], drag: null };
+/** Pick-and-move tool state: the pick and a drag in progress (`moved` once the pointer left its start). */
+export interface SelectToolState {
+  readonly selection: Selection | null;
+  readonly drag: { readonly from: Point; readonly moved: boolean } | null;
 }
 
-/**
- * The index of the line nearest to p within `radius` (design units), or null. Ties go to the line drawn
- * last (it is on top).
- */
-export function hitTestLine(lines: readonly Polyline[], p: Point, radius: number): number | null {
-  let best: number | null = null;
-  let bestDistance = radius;
-  lines.forEach((line, index) => {
-    for (let i = 1; i < line.length; i++) {
-      const d = pointSegmentDistance(p, line[i - 1]!, line[i]!);
-      if (d <= bestDistance) [best, bestDistance] = [index, d];
-    }
-  });
-  return best;
+export function createSelectTool(): SelectToolState {
+  return { selection: null, drag: null };
 }
 
 /**
- * One step of select/move: pressing on a line selects it (keeping a multi-selection it already belongs
- * to) and starts a drag; pressing on empty canvas clears the selection; dragging previews the moved lines;
- * releasing after a real move commits one moveLines command. Delete/Backspace deletes the selection;
- * Escape cancels a drag, or else clears the selection.
+ * One step of pick-and-move. Pressing on a line picks it (keeping a pick it already belongs to, so several
+ * lines move together); with shift it adds or takes the line from a pick of the same list; pressing on empty
+ * canvas drops the pick (not with shift). Dragging previews the picked lines moved; releasing after a real move
+ * commits one moveLines command. Escape cancels a drag, or else drops the pick. Removing the pick is the
+ * workbench's `delete` action, not a key of this tool.
+ *
+ * `hitRadius` is in design units (the caller converts its pixel tolerance at the current zoom); quilting lines
+ * win over seams at equal distance (pickLine).
  */
-export function stepSelectTool(state: SelectToolState, event: ToolEvent, design: Design): ToolStep<SelectToolState> {
-  const lines = design[state.target];
+export function stepSelectTool(state: SelectToolState, event: ToolEvent, design: Pick<Design, 'lines' | 'seams'>, hitRadius: number): ToolStep<SelectToolState> {
   switch (event.kind) {
-    case 'pointerDown': {
-      const hit = hitTestLine(lines, event.point, state.hitRadius);
-      if (hit === null) return { state: { ...state, selection: [], drag: null } };
-      const selection = state.selection.includes(hit) ? state.selection : [hit];
-      return { state: { ...state, selection, drag: { from: event.point, to: event.point } } };
-    }
+    case 'pointerDown':
+      return { state: pressed(state, event.raw ?? event.point, event.point, event.shift ?? false, design, hitRadius) };
     case 'pointerMove': {
-      if (!state.drag) return { state };
-      const next = { ...state, drag: { from: state.drag.from, to: event.point } };
-      return { state: next, preview: movedPreview(lines, next) };
+      const { drag, selection } = state;
+      if (!drag || !selection) return { state };
+      const dx = event.point[0] - drag.from[0];
+      const dy = event.point[1] - drag.from[1];
+      const next = dx !== 0 || dy !== 0 ? { ...state, drag: { ...drag, moved: true } } : state;
+      return { state: next, preview: movedLines(design[selection.target], selection.indices, dx, dy) };
     }
     case 'pointerUp': {
-      if (!state.drag) return { state };
-      const dx = event.point[0] - state.drag.from[0];
-      const dy = event.point[1] - state.drag.from[1];
+      const { drag, selection } = state;
+      if (!drag) return { state };
       const next = { ...state, drag: null };
-      if (dx === 0 && dy === 0) return { state: next };
-      return { state: next, command: { kind: 'moveLines', target: state.target, indices: state.selection, dx, dy } };
+      const dx = event.point[0] - drag.from[0];
+      const dy = event.point[1] - drag.from[1];
+      if (!drag.moved || !selection || (dx === 0 && dy === 0)) return { state: next };
+      return { state: next, command: { kind: 'moveLines', target: selection.target, indices: selection.indices, dx, dy } };
     }
     case 'doubleClick':
       return { state };
     case 'key':
-      if (event.key === 'Escape') return { state: state.drag ? { ...state, drag: null } : { ...state, selection: [] } };
-      if ((event.key === 'Delete' || event.key === 'Backspace') && state.selection.length > 0 && !state.drag) {
-        return { state: { ...state, selection: [] }, command: { kind: 'deleteLines', target: state.target, indices: state.selection } };
-      }
-      return { state };
+      if (event.key !== 'Escape') return { state };
+      return { state: state.drag ? { ...state, drag: null } : { ...state, selection: null } };
   }
 }
 
-function movedPreview(lines: readonly Polyline[], state: SelectToolState): Polyline[] {
-  if (!state.drag) return [];
-  const dx = state.drag.to[0] - state.drag.from[0];
-  const dy = state.drag.to[1] - state.drag.from[1];
-  return state.selection.map((i) => lines[i]!.map(([x, y]) => [x + dx, y + dy] as const));
+function pressed(state: SelectToolState, at: Point, snapped: Point, shift: boolean, design: Pick<Design, 'lines' | 'seams'>, hitRadius: number): SelectToolState {
+  const hit = pickLine(design, at, hitRadius);
+  const current = state.selection;
+  if (!hit) return shift ? { ...state, drag: null } : { selection: null, drag: null };
+  const already = current?.target === hit.target && current.indices.includes(hit.index);
+  let next: Selection;
+  if (shift && current?.target === hit.target) {
+    next = { target: hit.target, indices: already ? current.indices.filter((i) => i !== hit.index) : [...current.indices, hit.index] };
+  } else next = already && current ? current : { target: hit.target, indices: [hit.index] };
+  return { selection: next.indices.length > 0 ? next : null, drag: { from: snapped, moved: false } };
+}
+
+function movedLines(lines: readonly Polyline[], indices: readonly number[], dx: number, dy: number): Polyline[] {
+  return indices.map((i) => lines[i]!.map(([x, y]) => [x + dx, y + dy] as const));
 }

@@ -6,11 +6,15 @@ import type { DesignCommand } from '../design/commands.ts';
  * (see snap.ts), so tools never see screen pixels.
  */
 export type ToolEvent =
-  | { readonly kind: 'pointerDown'; readonly point: Point }
+  /**
+   * `raw` is the pointer before snapping: hit tests use it, so snapping never moves a click off the line it is on.
+   * `shift` adds to or takes from a pick.
+   */
+  | { readonly kind: 'pointerDown'; readonly point: Point; readonly raw?: Point; readonly shift?: boolean }
   | { readonly kind: 'pointerMove'; readonly point: Point }
   | { readonly kind: 'pointerUp'; readonly point: Point }
   | { readonly kind: 'doubleClick'; readonly point: Point }
-  | { readonly kind: 'key'; readonly key: 'Enter' | 'Escape' | 'Backspace' | 'Delete' };
+  | { readonly kind: 'key'; readonly key: 'Enter' | 'Escape' | 'Backspace' };
 
 /**
  * What a tool step yields: its next state, lines to draw as a preview (never saved), and at most one

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Design } from '../design/design.schema.ts';
 import { createDrawTool, stepDrawTool, type DrawToolState } from './drawTools.ts';
-import { createSelectTool, stepSelectTool, type SelectToolState } from './selectTool.ts';
+import { createSelectTool, stepSelectTool } from './selectTool.ts';
 import type { ToolEvent, ToolStep } from './tool.types.ts';
 
 const design: Design = {
@@ -78,18 +78,43 @@ describe('editor/drawTools', () => {
 });
 
 describe('editor/selectTool', () => {
-  it('selects by hit test, previews a drag, commits one move, deletes with Delete', () => {
-    let state: SelectToolState = createSelectTool('lines', 0.1);
-    let step = stepSelectTool(state, { kind: 'pointerDown', point: [3, 6.05] }, design);
-    expect(step.state.selection).toEqual([1]);
-    state = step.state;
-    step = stepSelectTool(state, { kind: 'pointerMove', point: [3, 7.05] }, design);
+  const withSeam: Design = { ...design, seams: [[[0, 3], [12, 3]]] };
+  const down = (point: readonly [number, number], shift = false): ToolEvent => ({ kind: 'pointerDown', point, shift });
+
+  it('picks by hit test, previews a drag, commits one move', () => {
+    let step = stepSelectTool(createSelectTool(), down([3, 6.05]), design, 0.1);
+    expect(step.state.selection).toEqual({ target: 'lines', indices: [1] });
+    step = stepSelectTool(step.state, { kind: 'pointerMove', point: [3, 7.05] }, design, 0.1);
     expect(step.preview).toEqual([[[1, 7], [6, 7]]]);
-    state = step.state;
-    step = stepSelectTool(state, { kind: 'pointerUp', point: [3, 7.05] }, design);
+    step = stepSelectTool(step.state, { kind: 'pointerUp', point: [3, 7.05] }, design, 0.1);
     expect(step.command).toEqual({ kind: 'moveLines', target: 'lines', indices: [1], dx: 0, dy: 1 });
-    step = stepSelectTool(step.state, { kind: 'key', key: 'Delete' }, design);
-    expect(step.command).toEqual({ kind: 'deleteLines', target: 'lines', indices: [1] });
-    expect(stepSelectTool(createSelectTool('lines', 0.1), { kind: 'pointerDown', point: [9, 9] }, design).state.selection).toEqual([]);
+    expect(step.state.drag).toBeNull();
+    expect(stepSelectTool(createSelectTool(), down([9, 9]), design, 0.1).state.selection).toBeNull();
+  });
+
+  it('a click without a move commits nothing; Escape cancels the drag, then drops the pick', () => {
+    let step = stepSelectTool(createSelectTool(), down([3, 1]), design, 0.1);
+    expect(stepSelectTool(step.state, { kind: 'pointerUp', point: [3, 1] }, design, 0.1).command).toBeUndefined();
+    step = stepSelectTool(step.state, { kind: 'pointerMove', point: [4, 1] }, design, 0.1);
+    step = stepSelectTool(step.state, { kind: 'key', key: 'Escape' }, design, 0.1);
+    expect(step.state).toEqual({ selection: { target: 'lines', indices: [0] }, drag: null });
+    expect(stepSelectTool(step.state, { kind: 'key', key: 'Escape' }, design, 0.1).state.selection).toBeNull();
+  });
+
+  it('shift adds and takes lines of the same list; pressing on a picked line keeps the whole pick for a move', () => {
+    let s = stepSelectTool(createSelectTool(), down([3, 1]), design, 0.1).state;
+    s = stepSelectTool(s, down([3, 6], true), design, 0.1).state;
+    expect(s.selection).toEqual({ target: 'lines', indices: [0, 1] });
+    s = stepSelectTool({ ...s, drag: null }, down([3, 1]), design, 0.1).state;
+    expect(s.selection?.indices).toEqual([0, 1]);
+    s = stepSelectTool({ ...s, drag: null }, down([3, 1], true), design, 0.1).state;
+    expect(s.selection?.indices).toEqual([1]);
+    expect(stepSelectTool(s, down([9, 9], true), design, 0.1).state.selection?.indices).toEqual([1]);
+  });
+
+  it('picks seams too, hit-testing where the pointer is rather than where it snapped', () => {
+    const s = stepSelectTool(createSelectTool(), { kind: 'pointerDown', point: [3, 4], raw: [3, 3.05] }, withSeam, 0.1).state;
+    expect(s.selection).toEqual({ target: 'seams', indices: [0] });
+    expect(s.drag?.from).toEqual([3, 4]);
   });
 });

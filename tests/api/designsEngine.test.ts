@@ -172,6 +172,6 @@ describe('SVG export', () => {
     const route = (await ann.client.get(`/api/designs/${d.id}/route`)).body.route;
     expect(res.text.match(/data-pass="/g)).toHaveLength(route.strokes.length);
     expect(res.text).toContain('class="retrace"');
-    expect(res.text).toContain('Block 12 × 12 in (30.48 × 30.48 cm)');
+    expect(res.text).toContain('Block 12 × 12 in (30.5 × 30.5 cm)');
   });
 });

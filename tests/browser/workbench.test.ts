@@ -86,8 +86,19 @@ describe('block workbench', () => {
     expect(await figure(page, 'odd-points').textContent()).toBe('2');
 
     // A second line inside the centre square touches nothing the needle could travel along: a second pass, one stop.
+    // One burst of edits is one request: the save (PUT ?check=1) brings the route check; no separate check is sent.
+    await page.locator('[data-save-status="saved"]').waitFor({ timeout: 20_000 });
+    const designCalls: string[] = [];
+    const countCall = (r: { method(): string; url(): string }) => {
+      const u = new URL(r.url());
+      if (u.pathname.startsWith('/api/designs/') && r.method() !== 'GET') designCalls.push(`${r.method()} ${u.pathname}${u.search}`);
+    };
+    page.on('request', countCall);
     await drawRulerLine(page, [4.5, 4.5], [7.5, 7.5]);
     await waitForFigure(page, 'stops', '1');
+    await page.locator('[data-save-status="saved"]').waitFor({ timeout: 20_000 });
+    page.off('request', countCall);
+    expect(designCalls).toEqual([`PUT ${new URL(designUrl).pathname.replace('/designs/', '/api/designs/')}?check=1`]);
     expect(await figure(page, 'passes').textContent()).toBe('2');
     await screenshot(page, 'workbench-03-two-pieces');
 

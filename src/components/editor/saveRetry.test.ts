@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { ApiFailure } from '../designs/apiClient.ts';
-import { canWorkOnDraftWhileUnavailable, saveFailureAction } from './saveRetry.ts';
+import { canWorkOnDraftWhileUnavailable, sortSaveFailure } from './saveRetry.ts';
 
 const http = (status: number, retryAfterMs?: number): ApiFailure => ({
   kind: 'http',
@@ -12,23 +12,23 @@ const http = (status: number, retryAfterMs?: number): ApiFailure => ({
 });
 const offline: ApiFailure = { kind: 'offline', message: 'The server could not be reached.' };
 
-describe('saveFailureAction', () => {
+describe('sortSaveFailure', () => {
   it('re-sends unsaved edits when the database restarts (503), the network fails, or the server is busy', () => {
-    expect(saveFailureAction(http(503, 5_000), 1)).toEqual({ kind: 'retry', delayMs: 5_000, reason: 'answered 503' });
-    expect(saveFailureAction(offline, 1)).toEqual({ kind: 'retry', delayMs: 1_000, reason: 'The server could not be reached.' });
-    expect(saveFailureAction(offline, 3)).toMatchObject({ kind: 'retry', delayMs: 4_000 });
-    expect(saveFailureAction(http(500), 2)).toMatchObject({ kind: 'retry', delayMs: 2_000 });
-    expect(saveFailureAction(http(429, 2_000), 1)).toMatchObject({ kind: 'retry', delayMs: 2_000 });
-    // A silly Retry-After is bounded both ways.
-    expect(saveFailureAction(http(503, 3_600_000), 1)).toMatchObject({ kind: 'retry', delayMs: 60_000 });
-    expect(saveFailureAction(http(503, 0), 1)).toMatchObject({ kind: 'retry', delayMs: 500 });
+    expect(sortSaveFailure(http(503, 5_000))).toEqual({ kind: 'unavailable', reason: 'answered 503', retryAfterMs: 5_000 });
+    expect(sortSaveFailure(offline)).toEqual({ kind: 'unavailable', reason: 'The server could not be reached.' });
+    expect(sortSaveFailure(http(500))).toEqual({ kind: 'unavailable', reason: 'answered 500' });
+    expect(sortSaveFailure(http(429, 2_000))).toMatchObject({ kind: 'unavailable', retryAfterMs: 2_000 });
   });
 
-  it('stops on answers that a retry cannot change', () => {
-    expect(saveFailureAction(http(409), 1)).toEqual({ kind: 'conflict' });
-    expect(saveFailureAction(http(400), 1)).toEqual({ kind: 'refused', message: 'answered 400' });
-    expect(saveFailureAction(http(413), 1)).toMatchObject({ kind: 'refused' });
-    expect(saveFailureAction(http(404), 1)).toMatchObject({ kind: 'refused' });
+  it('stops on answers that cannot change by retrying, keeping the server\'s copy of a 409', () => {
+    expect(sortSaveFailure(http(409))).toEqual({ kind: 'conflict', server: null });
+    const design = { version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [], edgeTravel: true };
+    const record = { id: '00000000-0000-4000-8000-000000000001', title: 'Theirs', notes: '', version: 7, design, summary: null, summaryPending: false, createdAt: '2026-12-05T05:00:00.000Z', updatedAt: '2026-12-05T06:00:00.000Z' };
+    const conflict = sortSaveFailure({ kind: 'http', status: 409, code: 'version_conflict', message: 'answered 409', body: { design: record } });
+    expect(conflict.kind === 'conflict' ? conflict.server?.version : null).toBe(7);
+    expect(sortSaveFailure(http(400))).toEqual({ kind: 'refused', message: 'answered 400' });
+    expect(sortSaveFailure(http(413))).toMatchObject({ kind: 'refused' });
+    expect(sortSaveFailure(http(404))).toMatchObject({ kind: 'refused' });
   });
 });
 

@@ -1,29 +1,25 @@
+import type { SaveFailure } from '@shared/editor/saveMachine.ts';
 import type { ApiFailure } from '../designs/apiClient.ts';
-import { retryDelayMs } from './saveStatus.ts';
+import { parseDesignRecord } from '../designs/designsApi.ts';
+import { serverCopyOf, type EditedDocument } from './editedDocument.ts';
 
 /**
- * What the workbench does when a save does not go through. Only answers that say "this save can never
- * succeed as it is" stop it (409: someone saved in between; 400/413: the design is refused; 404: it is gone).
- * Everything else — no answer, 5xx (e.g. 503 while the database restarts), 429 — keeps the edits on this
- * device and sends them again: after the server's Retry-After when it gave one, else after the backoff.
+ * How a save that did not go through reads to the save machine. Only answers that say "this save can never
+ * succeed as it is" stop it (409: someone saved in between, with their copy in the body; 400/413: the design is
+ * refused; 404: it is gone). Everything else — no answer, 5xx (e.g. 503 while the database restarts), 429 — is
+ * `unavailable`: the machine keeps the edits on this device and sends them again, after the server's Retry-After
+ * when it gave one.
  */
-export type SaveFailureAction =
-  | { readonly kind: 'conflict' }
-  | { readonly kind: 'refused'; readonly message: string }
-  | { readonly kind: 'retry'; readonly delayMs: number; readonly reason: string };
-
-/** Longest wait we accept from a Retry-After (ms): a save should not sit for minutes on a bad header. */
-const MAX_RETRY_AFTER_MS = 60_000;
-
-export function saveFailureAction(failure: ApiFailure, attempt: number): SaveFailureAction {
+export function sortSaveFailure(failure: ApiFailure): SaveFailure<EditedDocument> {
   if (failure.kind === 'http') {
-    if (failure.status === 409) return { kind: 'conflict' };
+    if (failure.status === 409) {
+      const record = parseDesignRecord(failure.body);
+      return { kind: 'conflict', server: record ? serverCopyOf(record) : null };
+    }
     if (failure.status === 400 || failure.status === 413 || failure.status === 404) return { kind: 'refused', message: failure.message };
+    if (failure.retryAfterMs !== undefined) return { kind: 'unavailable', reason: failure.message, retryAfterMs: failure.retryAfterMs };
   }
-  const backoff = retryDelayMs(attempt);
-  const asked = failure.kind === 'http' ? failure.retryAfterMs : undefined;
-  const delayMs = asked === undefined ? backoff : Math.min(MAX_RETRY_AFTER_MS, Math.max(asked, 500));
-  return { kind: 'retry', delayMs, reason: failure.message };
+  return { kind: 'unavailable', reason: failure.message };
 }
 
 /**

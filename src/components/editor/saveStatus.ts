@@ -1,8 +1,9 @@
 import { assertNever } from '@shared/assertNever.ts';
+import type { SaveState } from '@shared/editor/saveMachine.ts';
 
 /**
- * Where the design stands against the server. Edits are numbered (`revision`); the server has
- * everything up to `savedRevision`. Nothing here touches the network: useAutosave drives it.
+ * Where the design stands against the server, as the save indicator tells it: read off the save machine's
+ * state (shared/editor/saveMachine.ts) by saveStatusOf.
  */
 export type SaveStatus =
   | { readonly kind: 'saved' }
@@ -15,9 +16,24 @@ export type SaveStatus =
   /** The server refused the design (too large, invalid); retrying would not help. */
   | { readonly kind: 'refused'; readonly message: string };
 
-/** First retry after 1 s, doubling up to 30 s (common practice for backoff, no source). */
-export function retryDelayMs(attempt: number): number {
-  return Math.min(30_000, 1000 * 2 ** Math.max(0, attempt - 1));
+/** The indicator's state for a save machine state: edits waiting behind a save on its way read as unsaved. */
+export function saveStatusOf(state: SaveState<unknown>): SaveStatus {
+  switch (state.phase) {
+    case 'saved':
+      return { kind: 'saved' };
+    case 'edited':
+      return { kind: 'unsaved' };
+    case 'saving':
+      return state.inFlight !== null && state.inFlight < state.revision ? { kind: 'unsaved' } : { kind: 'saving' };
+    case 'conflict':
+      return { kind: 'conflict', serverVersion: state.server?.version ?? state.baseVersion };
+    case 'refused':
+      return { kind: 'refused', message: state.message };
+    case 'offline':
+      return { kind: 'retrying', attempt: state.attempt, retryAt: state.retryAt, reason: state.message };
+    default:
+      return assertNever(state.phase);
+  }
 }
 
 /** The indicator's words; `now` in ms to count down a retry. */
@@ -40,9 +56,4 @@ export function describeSaveStatus(status: SaveStatus, now: number): string {
     default:
       return assertNever(status);
   }
-}
-
-/** True when the quilter may lose work by leaving the page. */
-export function hasUnsavedWork(status: SaveStatus): boolean {
-  return status.kind !== 'saved';
 }

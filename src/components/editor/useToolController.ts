@@ -5,17 +5,14 @@ import type { Point, Polyline } from '@shared/geometry/point.ts';
 import { createDrawTool, stepDrawTool, type DrawMode, type DrawToolState } from '@shared/editor/drawTools.ts';
 import { projectOntoGuide, type Guide } from '@shared/editor/guides.ts';
 import { collectSnapTargets, snapPoint, type SnapKind } from '@shared/editor/snap.ts';
+import { orientOwnRoute, pickLine } from '@shared/editor/pickLine.ts';
+import { createSelectTool, stepSelectTool, type Selection, type SelectToolState } from '@shared/editor/selectTool.ts';
 import type { ToolEvent } from '@shared/editor/tool.types.ts';
 import type { CanvasPointer } from './canvas/EditorStage.tsx';
 import type { ToolId } from './Toolbar.tsx';
-import { orientOwnRoute, pickLine } from './tools/pickLine.ts';
 import { SNAP_RADIUS_PX, snapGridPitch } from './tools/snapSettings.ts';
 
-/** The picked lines (view state: never saved, never undone). */
-export interface Selection {
-  readonly target: LineTarget;
-  readonly indices: readonly number[];
-}
+export type { Selection };
 
 export interface ToolController {
   readonly preview: readonly Polyline[];
@@ -29,8 +26,6 @@ export interface ToolController {
   onKey(key: 'Enter' | 'Escape' | 'Backspace'): boolean;
   setSelection(s: Selection | null): void;
   clearOwnOrder(): void;
-  /** The point the pointer is over (snapped), for the motif and guide tools. */
-  readonly hover: Point | null;
 }
 
 export interface ToolOptions {
@@ -65,17 +60,17 @@ function drawModeOf(tool: ToolId, scale: number): DrawMode | null {
 
 /**
  * Turns canvas pointer events into tool steps: drawing tools run the shared state machines
- * (shared/editor/drawTools.ts) on snapped points; pick-and-move, start/end and stitching-order tools
- * are handled here. Every finished gesture is exactly one command.
+ * (shared/editor/drawTools.ts) on snapped points, pick-and-move runs shared/editor/selectTool.ts; the
+ * start/end and stitching-order tools (one command per click) are handled here. Every finished gesture is exactly one command.
  */
 export function useToolController(o: ToolOptions): ToolController {
   const { tool, design, scale, snapOn, guides, endsMode, dispatch, onPickPatch } = o;
   const [preview, setPreview] = useState<readonly Polyline[]>([]);
   const [snapped, setSnapped] = useState<ToolController['snapped']>(null);
-  const [selection, setSelection] = useState<Selection | null>(null);
+  const [selection, setSelectionState] = useState<Selection | null>(null);
   const [ownOrder, setOwnOrder] = useState<readonly number[]>([]);
   const draw = useRef<DrawToolState | null>(null);
-  const drag = useRef<{ from: Point; moved: boolean } | null>(null);
+  const select = useRef<SelectToolState>(createSelectTool());
   const targets = useMemo(() => (design && snapOn ? collectSnapTargets(design) : []), [design, snapOn]);
   const mode = drawModeOf(tool, scale);
   const lineTarget: LineTarget = tool === 'seam' ? 'seams' : 'lines';
@@ -103,11 +98,25 @@ export function useToolController(o: ToolOptions): ToolController {
     if (step.command) dispatch(step.command);
   }, [dispatch]);
 
+  const runSelect = useCallback((event: ToolEvent) => {
+    if (!design) return;
+    const step = stepSelectTool(select.current, event, design, SNAP_RADIUS_PX / scale);
+    select.current = step.state;
+    setSelectionState(step.state.selection);
+    setPreview(step.preview ?? []);
+    if (step.command) dispatch(step.command);
+  }, [design, scale, dispatch]);
+
+  const setSelection = useCallback((next: Selection | null) => {
+    select.current = { selection: next, drag: null };
+    setSelectionState(next);
+  }, []);
+
   const onPointer = useCallback((e: CanvasPointer) => {
     if (!design) return;
     if (e.type === 'cancel') {
       runDraw({ kind: 'key', key: 'Escape' });
-      drag.current = null;
+      select.current = { ...select.current, drag: null };
       setPreview([]);
       return;
     }
@@ -120,34 +129,10 @@ export function useToolController(o: ToolOptions): ToolController {
     }
     const radius = SNAP_RADIUS_PX / scale;
     switch (tool) {
-      case 'select': {
-        if (e.type === 'down') {
-          const hit = pickLine(design, e.point, radius);
-          if (!hit) {
-            if (!e.shift) setSelection(null);
-            return;
-          }
-          const already = selection?.target === hit.target && selection.indices.includes(hit.index);
-          const next: Selection = e.shift && selection?.target === hit.target
-            ? { target: hit.target, indices: already ? selection.indices.filter((i) => i !== hit.index) : [...selection.indices, hit.index] }
-            : already && selection ? selection : { target: hit.target, indices: [hit.index] };
-          setSelection(next.indices.length ? next : null);
-          drag.current = { from: s.point, moved: false };
-        } else if (e.type === 'move' && drag.current && selection) {
-          const dx = s.point[0] - drag.current.from[0];
-          const dy = s.point[1] - drag.current.from[1];
-          if (dx !== 0 || dy !== 0) drag.current.moved = true;
-          setPreview(selection.indices.map((i) => design[selection.target][i]!.map(([x, y]) => [x + dx, y + dy] as const)));
-        } else if (e.type === 'up' && drag.current) {
-          const { from, moved } = drag.current;
-          drag.current = null;
-          setPreview([]);
-          const dx = s.point[0] - from[0];
-          const dy = s.point[1] - from[1];
-          if (moved && selection && (dx !== 0 || dy !== 0)) dispatch({ kind: 'moveLines', target: selection.target, indices: selection.indices, dx, dy });
-        }
+      case 'select':
+        if (e.type === 'down') runSelect({ kind: 'pointerDown', point: s.point, raw: e.point, shift: e.shift });
+        else runSelect({ kind: e.type === 'move' ? 'pointerMove' : 'pointerUp', point: s.point });
         return;
-      }
       case 'ends':
         if (e.type === 'down') dispatch(endsMode === 'start' ? { kind: 'setStart', point: s.point } : { kind: 'setEnd', point: s.point });
         return;
@@ -166,20 +151,19 @@ export function useToolController(o: ToolOptions): ToolController {
       default:
         return;
     }
-  }, [design, snap, runDraw, scale, tool, selection, dispatch, endsMode, ownOrder, onPickPatch]);
+  }, [design, snap, runDraw, runSelect, scale, tool, dispatch, endsMode, ownOrder, onPickPatch]);
 
   const onKey = useCallback((key: 'Enter' | 'Escape' | 'Backspace'): boolean => {
     if (draw.current && draw.current.points.length > 0) {
       runDraw({ kind: 'key', key });
       return true;
     }
-    if (key === 'Escape' && drag.current) {
-      drag.current = null;
-      setPreview([]);
+    if (key === 'Escape' && select.current.drag) {
+      runSelect({ kind: 'key', key });
       return true;
     }
     return false;
-  }, [runDraw]);
+  }, [runDraw, runSelect]);
 
   const onDoubleClick = useCallback((point: Point) => {
     if (draw.current) runDraw({ kind: 'doubleClick', point: snap(point).point });
@@ -192,7 +176,6 @@ export function useToolController(o: ToolOptions): ToolController {
     selection,
     ownOrder,
     cursor,
-    hover: snapped?.point ?? null,
     onPointer,
     onDoubleClick,
     onKey,

@@ -1,12 +1,8 @@
 import type { Point } from '@shared/geometry/point.ts';
-import type { StrokeKind } from '@shared/contract/strokes.ts';
+import type { StrokeKind, StrokePath } from '@shared/contract/strokes.ts';
 
-/** A drawn stroke of a route as the API sends it (lengths are recomputed here from the points). */
-export interface RouteStroke {
-  readonly pass: number;
-  readonly kind: StrokeKind;
-  readonly points: readonly Point[];
-}
+/** What playback reads of a route's stroke (shared/contract/strokes.ts); lengths are recomputed from the points. */
+export type RouteStroke = Pick<StrokePath, 'pass' | 'kind' | 'points'>;
 
 /**
  * A route laid out along one distance axis, so a player can ask "where is the needle after d units".

@@ -1,9 +1,10 @@
 import { useEffect, useRef, useState } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
+import { chooseCheckSource, type SaveKind, type SavedCheck } from '@shared/editor/checkSource.ts';
 import { apiRequest } from '../designs/apiClient.ts';
-import { parseCheckAnswer, type RouteCheckView } from './routeCheckView.ts';
+import { parseCheckAnswer, toCheckView, type RouteCheckView } from './routeCheckView.ts';
 
-/** Wait after the last edit before asking the server for a route check (ms). */
+/** Wait after the last edit before asking the server for a route check of its own (ms). */
 export const CHECK_DEBOUNCE_MS = 400;
 
 export interface RouteCheckState {
@@ -13,10 +14,13 @@ export interface RouteCheckState {
 }
 
 /**
- * The server's route check of the design being edited (the unsaved copy is sent along), refreshed
- * CHECK_DEBOUNCE_MS after each edit. A newer edit aborts the request still on its way.
+ * The server's route check of the design being edited. Saves carry the check of what they saved
+ * (useDesignDocument sends PUT ?check=1), so after a burst of edits the card waits for the save and shows its
+ * check: one request per burst. Only when no save will bring a check (just opened, conflict, refused, retrying)
+ * does it ask POST …/check itself, CHECK_DEBOUNCE_MS after the last edit, with the unsaved copy; a newer edit aborts
+ * the request still on its way. The choice is chooseCheckSource (shared/editor/checkSource.ts).
  */
-export function useRouteCheck(designId: string, design: Design | null): RouteCheckState {
+export function useRouteCheck(designId: string, design: Design | null, saved: SavedCheck | null, save: SaveKind): RouteCheckState {
   const [result, setResult] = useState<RouteCheckState>({ check: null, state: 'idle', message: null });
   const controller = useRef<AbortController | null>(null);
 
@@ -26,6 +30,13 @@ export function useRouteCheck(designId: string, design: Design | null): RouteChe
     if (design.lines.length === 0) {
       controller.current?.abort();
       setResult({ check: null, state: 'idle', message: null });
+      return;
+    }
+    const source = chooseCheckSource(design, saved, save);
+    if (source.kind !== 'fresh') {
+      controller.current?.abort();
+      if (source.kind === 'await-save') setResult((r) => ({ ...r, state: 'checking' }));
+      else setResult((r) => fromSavedCheck(source.saved, r));
       return;
     }
     setResult((r) => ({ ...r, state: 'checking' }));
@@ -48,8 +59,16 @@ export function useRouteCheck(designId: string, design: Design | null): RouteChe
       }
     }, CHECK_DEBOUNCE_MS);
     return () => clearTimeout(timer);
-  }, [designId, design]);
+  }, [designId, design, saved, save]);
 
   useEffect(() => () => controller.current?.abort(), []);
   return result;
+}
+
+/** The card from a save's check; a refused drawing clears the figures, a busy engine keeps the last ones. */
+function fromSavedCheck(saved: SavedCheck, previous: RouteCheckState): RouteCheckState {
+  if (saved.check) return { check: toCheckView(saved.check), state: 'idle', message: null };
+  const error = saved.checkError;
+  if (error?.code === 'invalid_input') return { check: null, state: 'failed', message: error.message };
+  return { check: previous.check, state: 'failed', message: `Route check failed: ${error?.message ?? 'no answer.'}` };
 }

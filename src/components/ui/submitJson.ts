@@ -1,5 +1,6 @@
 // Browser side of the API's one error shape. Islands call sendJson() and get either the parsed body or
-// { message, fields } to show beside the form and its inputs.
+// { message, fields } to show beside the form and its inputs. Error bodies are read with the contract's problemSchema.
+import { problemSchema } from '@shared/contract/errors.ts';
 export interface ApiFailure {
   status: number;
   code: string;
@@ -23,7 +24,8 @@ export async function sendJson<T = unknown>(method: 'POST' | 'PUT' | 'PATCH' | '
   }
   const data: unknown = res.status === 204 ? null : await res.json().catch(() => null);
   if (res.ok) return { ok: true, status: res.status, data: data as T };
-  const e = (data as { error?: { code?: string; message?: string; fields?: Record<string, string> } } | null)?.error;
+  const problem = problemSchema.safeParse(data);
+  const e = problem.success ? problem.data.error : undefined;
   return {
     ok: false,
     error: { status: res.status, code: e?.code ?? 'unknown', message: e?.message ?? `The request failed (${res.status}).`, fields: e?.fields ?? {} },

@@ -6,6 +6,7 @@ import { sql, type RawBuilder } from 'kysely';
 import type { Db } from './design.repository.ts';
 
 import type { DesignSort } from '@shared/contract/designs.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 
 export interface DesignListQuery {
   /** Case-insensitive substring of the title; '' matches all. */
@@ -52,7 +53,7 @@ export async function listOwnedDesigns(db: Db, ownerId: string, query: DesignLis
         sql<string | null>`case when length(thumbnail_svg) <= ${LIST_THUMBNAIL_MAX_CHARS} then thumbnail_svg end`.as('thumbnail_svg'),
         'created_at',
         'updated_at',
-        sql<string>`data->>'units'`.as('units'),
+        sql<Units>`data->>'units'`.as('units'), // stored designs passed designSchema
         sql<number>`(data->>'width')::float8`.as('width'),
         sql<number>`(data->>'height')::float8`.as('height'),
       ])

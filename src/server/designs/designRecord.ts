@@ -5,7 +5,9 @@
 import type { z } from 'zod';
 import type { DesignRouteRow, DesignRow } from '@db/schema.ts';
 import { designSummarySchema, savedRouteSummarySchema, type DesignSummary } from '@shared/contract/figures.ts';
+import type { CheckResult } from '@shared/contract/check.ts';
 import type { DesignRecord, SavedRoute } from '@shared/contract/designs.ts';
+import type { ProblemDetail } from '@shared/contract/errors.ts';
 import { strokePathsSchema } from '@shared/contract/strokes.ts';
 import type { DesignRecordRow, DesignVersionRecordRow } from './design.repository.ts';
 
@@ -45,6 +47,14 @@ export function designJsonText(row: DesignRecordRow, designText: string): string
     updatedAt: row.updated_at.toISOString(),
   };
   return `{"design":${designText},${JSON.stringify(meta).slice(1)}`;
+}
+
+/**
+ * The answer of a save with ?check=1 as JSON text (savedWithCheckAnswerSchema): the saved version (drawing spliced in
+ * as in designJsonText) and its route check, or why there is none.
+ */
+export function savedWithCheckJsonText(row: DesignRecordRow, designText: string, check: CheckResult | null, checkError: ProblemDetail | null): string {
+  return `{"design":${designJsonText(row, designText)},"check":${JSON.stringify(check)},"checkError":${JSON.stringify(checkError)}}`;
 }
 
 /** One saved version as JSON text (drawing spliced in as in designJsonText). */

@@ -2,6 +2,7 @@
 // POST /api/designs { title, notes?, design } — create; 201 { design }. Returns at once: the figures
 //   (`summary`) follow when the route engine has them (`summaryPending` until then; the list shows them).
 import type { APIRoute } from 'astro';
+import type { DesignList, DesignListItem } from '@shared/contract/designs.ts';
 import { db } from '@server/db.ts';
 import { invalidInput, json } from '@server/http.ts';
 import { requireUser } from '@server/auth/guards.ts';
@@ -21,7 +22,7 @@ export const GET = (async ({ locals, url }) => {
   const { q, sort, page, pageSize } = query.data;
   const dir = query.data.dir ?? (sort === 'updated' || sort === 'created' ? 'desc' : 'asc');
   const { rows, total } = await listOwnedDesigns(db, signedIn.value.user.id, { q, sort, dir, limit: pageSize, offset: (page - 1) * pageSize });
-  const designs = rows.map((r) => {
+  const designs = rows.map((r): DesignListItem => {
     // Figures still to come (or lost to a restart), or a thumbnail from before the point budget: ask for them.
     requestDesignDerive({ id: r.id, owner_id: signedIn.value.user.id, version: r.version }, { summary: r.summary_pending, thumbnail: r.thumbnail_svg === null });
     return {
@@ -38,7 +39,7 @@ export const GET = (async ({ locals, url }) => {
       updatedAt: r.updated_at.toISOString(),
     };
   });
-  return json({ designs, total, page, pageSize, sort, dir, q });
+  return json({ designs, total, page, pageSize, sort, dir, q } satisfies DesignList);
 }) satisfies APIRoute;
 
 export const POST = (async ({ locals, request }) => {

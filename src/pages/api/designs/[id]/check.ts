@@ -3,6 +3,7 @@
 // 400 names a line the engine refuses; 422 engine_timeout; 429 rate_limited (this account's queue is full);
 // 503 engine_busy.
 import type { APIRoute } from 'astro';
+import type { CheckAnswer } from '@shared/contract/check.ts';
 import { json } from '@server/http.ts';
 import { readDesignBody } from '@server/designs/designBody.ts';
 import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '@server/designs/designHttp.ts';
@@ -18,5 +19,5 @@ export const POST = (async ({ locals, params, request }) => {
   const draft = body.value.design;
   const checked = await checkDesignOnServer(designPayloadOf(row, draft?.text ?? null), account, request.signal);
   if (!checked.ok) return checked.error.kind === 'problem' ? designProblemResponse(checked.error.problem) : engineFailureResponse(checked.error.failure);
-  return json({ designVersion: row.version, draft: draft !== null, ...checked.value });
+  return json({ designVersion: row.version, draft: draft !== null, ...checked.value } satisfies CheckAnswer);
 }) satisfies APIRoute;

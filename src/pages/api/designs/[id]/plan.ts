@@ -4,6 +4,7 @@
 // stopsTable, threadEnds, settings, units, route, threadBudget } }.
 // 429 rate_limited when this account already has its share of checks and plans waiting; 503 engine_busy.
 import type { APIRoute } from 'astro';
+import type { PlanAnswer } from '@shared/contract/plan.ts';
 import { json } from '@server/http.ts';
 import { readDesignBody } from '@server/designs/designBody.ts';
 import { designProblemResponse, engineFailureResponse, requireOwnedDesign } from '@server/designs/designHttp.ts';
@@ -19,5 +20,5 @@ export const POST = (async ({ locals, params, request }) => {
   const draft = body.value.design;
   const planned = await planDesignOnServer(designPayloadOf(row, draft?.text ?? null), account, body.value.fields.settings, request.signal);
   if (!planned.ok) return planned.error.kind === 'problem' ? designProblemResponse(planned.error.problem) : engineFailureResponse(planned.error.failure);
-  return json({ designVersion: row.version, draft: draft !== null, plan: planned.value });
+  return json({ designVersion: row.version, draft: draft !== null, plan: planned.value } satisfies PlanAnswer);
 }) satisfies APIRoute;

@@ -4,6 +4,7 @@
 //   The server computes strokes and figures itself. 409 { error, design: current } when designVersion is not current.
 // SavedRoute = { kind, designVersion, current, strokes: [{ pass, kind, points, length }], summary, createdAt, updatedAt }.
 import type { APIRoute } from 'astro';
+import type { SavedRouteAnswer } from '@shared/contract/designs.ts';
 import { db } from '@server/db.ts';
 import { invalidInput, json } from '@server/http.ts';
 import { assertNever } from '@shared/assertNever.ts';
@@ -18,7 +19,7 @@ export const GET = (async ({ locals, params }) => {
   if (!owned.ok) return owned.error;
   const { row } = owned.value;
   const route = await findDesignRoute(db, row.id);
-  return json({ route: route ? toSavedRouteJson(route, row.version) : null });
+  return json({ route: route ? toSavedRouteJson(route, row.version) : null } satisfies SavedRouteAnswer);
 }) satisfies APIRoute;
 
 export const PUT = (async ({ locals, params, request }) => {
@@ -43,5 +44,5 @@ export const PUT = (async ({ locals, params, request }) => {
         return assertNever(f);
     }
   }
-  return json({ route: toSavedRouteJson(saved.value, row.version) });
+  return json({ route: toSavedRouteJson(saved.value, row.version) } satisfies SavedRouteAnswer);
 }) satisfies APIRoute;

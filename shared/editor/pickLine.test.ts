@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { orientOwnRoute, pickLine } from './pickLine.ts';
 
-describe('picking lines', () => {
+describe('editor/pickLine: picking lines', () => {
   const design = { seams: [[[0, 6], [12, 6]] as const], lines: [[[0, 0], [12, 12]] as const, [[1, 6.1], [11, 6.1]] as const] };
 
   it('finds the nearest line within the radius, with the foot of the perpendicular', () => {
@@ -21,7 +21,7 @@ describe('picking lines', () => {
   });
 });
 
-describe('own stitching order', () => {
+describe('editor/pickLine: own stitching order', () => {
   it('runs each line from the end nearest the previous line', () => {
     const route = orientOwnRoute([
       [[0, 0], [4, 0]],

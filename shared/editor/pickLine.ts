@@ -1,7 +1,7 @@
-import type { LineTarget } from '@shared/design/commands.ts';
-import type { Design } from '@shared/design/design.schema.ts';
-import { closestParameter, pointSegmentDistance } from '@shared/geometry/distance.ts';
-import type { Point, Polyline } from '@shared/geometry/point.ts';
+import type { LineTarget } from '../design/commands.ts';
+import type { Design } from '../design/design.schema.ts';
+import { closestParameter, pointSegmentDistance } from '../geometry/distance.ts';
+import type { Point, Polyline } from '../geometry/point.ts';
 
 /** A line under the pointer: which list, its index, the segment hit (end point index ≥ 1) and the nearest point on it. */
 export interface LineHit {

@@ -1,5 +1,6 @@
 // Browser side of the API's one error shape. Islands call sendJson() and get either the parsed body or
 // { message, fields } to show beside the form and its inputs. Error bodies are read with the contract's problemSchema.
+import '../zodJitless.ts'; // first: before the contract's schemas are built (see the file)
 import { problemSchema } from '@shared/contract/errors.ts';
 export interface ApiFailure {
   status: number;

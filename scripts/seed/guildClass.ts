@@ -1,36 +1,70 @@
-// Marigold's published template and her "Tuesday quilt-along" class (invented demo content). The template is
+// Marigold's two published templates and her "Tuesday quilt-along" class (invented demo content). The template is
 // published through the app's own publishTemplate (from her seeded design and its planned route); the class and
 // its two lessons through class.service, in one transaction; the enrollments as a join code does. Idempotent by
 // owner + title.
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { publishTemplate } from '@server/templates/template.service.ts';
-import { findOwnedVersionIdByTitle } from '@server/templates/template.repository.ts';
+import { findOwnedVersionIdByTitle, findVersionById } from '@server/templates/template.repository.ts';
+import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
+import { routeNote } from '@shared/walkthrough/routeNote.ts';
 import { createClass, createLesson } from '@server/classes/class.service.ts';
 import { enrollStudent, findTaughtClassIdByTitle } from '@server/classes/class.repository.ts';
 import { inTransaction } from '@server/transaction.repository.ts';
 import { seedDesign } from './guildDesigns.ts';
-import { marigoldDrawing } from './guildDrawings.ts';
+import { marigoldDrawings, type GuildDrawing } from './guildDrawings.ts';
 
-const TEMPLATE_TITLE = 'Pinwheel in the ditch';
 const CLASS_TITLE = 'Tuesday quilt-along';
 const DAY_MS = 24 * 60 * 60 * 1000;
 
-/** The id of Marigold's published template version 1, publishing it first if needed; `added` counts new rows' owners. */
-async function seedTemplateVersion(db: Kysely<Database>, teacherId: string): Promise<{ versionId: string; added: number }> {
-  const existing = await findOwnedVersionIdByTitle(db, teacherId, TEMPLATE_TITLE);
+interface TemplateRecipe {
+  title: string;
+  description: string;
+  motifs: string[];
+  drawing: GuildDrawing;
+}
+
+function marigoldTemplates(): { ditch: TemplateRecipe; echoes: TemplateRecipe } {
+  const drawings = marigoldDrawings();
+  return {
+    ditch: {
+      title: 'Pinwheel in the ditch',
+      description: 'A pinwheel quilted in the ditch in one pass: a first block for walking-foot quilters.',
+      motifs: ['stitch in the ditch'],
+      drawing: drawings.ditch,
+    },
+    echoes: {
+      title: 'Pinwheel with echoed blades',
+      description: 'The same pinwheel with echoes inside each blade, stepping in from ring to ring, still in one pass.',
+      motifs: ['stitch in the ditch', 'echo'],
+      drawing: drawings.echoes,
+    },
+  };
+}
+
+/** The id of Marigold's published template version 1, publishing it first if needed; `added` counts new templates. */
+async function seedTemplateVersion(db: Kysely<Database>, teacherId: string, t: TemplateRecipe): Promise<{ versionId: string; added: number }> {
+  const existing = await findOwnedVersionIdByTitle(db, teacherId, t.title);
   if (existing) return { versionId: existing, added: 0 };
-  const source = await seedDesign(db, teacherId, marigoldDrawing());
+  const source = await seedDesign(db, teacherId, t.drawing);
   const published = await publishTemplate(db, teacherId, {
     designId: source.id,
-    title: TEMPLATE_TITLE,
-    description: 'A 12 in pinwheel quilted in the ditch in one pass: a first block for walking-foot quilters.',
+    title: t.title,
+    description: t.description,
     difficulty: 'beginner',
-    motifs: ['stitch in the ditch'],
+    motifs: t.motifs,
     visibility: 'public',
   });
-  if (!published.ok) throw new Error(`scripts/seed/guildClass: publishing "${TEMPLATE_TITLE}" failed: ${JSON.stringify(published.error)}`);
+  if (!published.ok) throw new Error(`scripts/seed/guildClass: publishing "${t.title}" failed: ${JSON.stringify(published.error)}`);
   return { versionId: published.value.version.id, added: 1 };
+}
+
+/** A lesson note that describes the route the template version really has (read back as it was published). */
+async function noteFor(db: Kysely<Database>, versionId: string, lead: string): Promise<string> {
+  const version = await findVersionById(db, versionId);
+  const input = version ? parseWalkthroughInput(version.design, version.route) : null;
+  if (!input?.ok) throw new Error(`scripts/seed/guildClass: template version ${versionId} has no readable route`);
+  return `${lead} ${routeNote(input.value.design, input.value.route)}`;
 }
 
 /** Counts of what this run added: templates, classes, enrollments. */
@@ -40,11 +74,16 @@ export async function seedGuildClass(
   studentIds: readonly string[],
   now: Date,
 ): Promise<{ templates: number; classes: number; enrollments: number }> {
-  const { versionId, added: templates } = await seedTemplateVersion(db, teacherId);
+  const recipes = marigoldTemplates();
+  const week1 = await seedTemplateVersion(db, teacherId, recipes.ditch);
+  const week2 = await seedTemplateVersion(db, teacherId, recipes.echoes);
+  const templates = week1.added + week2.added;
   let classId = await findTaughtClassIdByTitle(db, teacherId, CLASS_TITLE);
   let classes = 0;
   if (!classId) {
     const startsOn = new Date(now.getTime() - 14 * DAY_MS).toISOString().slice(0, 10);
+    const week1Notes = await noteFor(db, week1.versionId, 'Every seam of the pinwheel, in the ditch.');
+    const week2Notes = await noteFor(db, week2.versionId, 'A second pinwheel: the same ditch lines as week 1, with echoes 1/2 in apart inside each blade, stepping in from one echo to the next.');
     classId = await inTransaction(db, async (trx) => {
       const created = await createClass(trx, teacherId, {
         title: CLASS_TITLE,
@@ -56,14 +95,14 @@ export async function seedGuildClass(
       await createLesson(trx, created, {
         title: 'Week 1: the pinwheel in the ditch',
         releaseAt: new Date(now.getTime() - 7 * DAY_MS).toISOString(),
-        notes: 'Start at the centre and follow the route: every seam is sewn once, in one pass.',
-        templateVersionId: versionId,
+        notes: week1Notes,
+        templateVersionId: week1.versionId,
       });
       await createLesson(trx, created, {
         title: 'Week 2: echoes around the blades',
         releaseAt: new Date(now.getTime() + 30 * DAY_MS).toISOString(),
-        notes: 'Bring your week 1 block; we add echo lines inside each blade.',
-        templateVersionId: versionId,
+        notes: week2Notes,
+        templateVersionId: week2.versionId,
       });
       return created;
     });

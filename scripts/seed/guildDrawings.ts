@@ -76,10 +76,21 @@ export function saoirseDrawings(): GuildDrawing[] {
   ];
 }
 
-export function marigoldDrawing(): GuildDrawing {
+/** The pinwheel's blades (patches 0, 2, 4, 6 of the layout: the top, right, bottom and left blade). */
+const PINWHEEL_BLADES = [0, 2, 4, 6];
+
+/** Marigold's two lesson blocks: week 1 in the ditch, week 2 the same block with echoes in the blades. */
+export function marigoldDrawings(): { ditch: GuildDrawing; echoes: GuildDrawing } {
   return {
-    title: 'Quilt-along week 1: pinwheel echoes',
-    notes: 'Lesson block for the Tuesday quilt-along.',
-    design: buildDrawing({ layout: 'pinwheel', units: 'in', size: 12, ditch: true, motifs: [] }),
+    ditch: {
+      title: 'Quilt-along week 1: pinwheel in the ditch',
+      notes: 'Lesson block for the Tuesday quilt-along: every seam in the ditch.',
+      design: buildDrawing({ layout: 'pinwheel', units: 'in', size: 12, ditch: true, motifs: [] }),
+    },
+    echoes: {
+      title: 'Quilt-along week 2: pinwheel with echoed blades',
+      notes: 'Lesson block for the Tuesday quilt-along: the week 1 ditch lines plus echoes 1/2 in apart inside each blade.',
+      design: buildDrawing({ layout: 'pinwheel', units: 'in', size: 12, ditch: true, motifs: PINWHEEL_BLADES.map((patch) => ({ patch, params: { kind: 'echo', spacing: 0.5 } })) }),
+    },
   };
 }

@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/format/dates.ts';
 import { useEffect, useState, type FormEvent } from 'react';
 import { FormAlert } from '../ui/FormAlert.tsx';
 import { buttonClass } from '../ui/SubmitButton.tsx';
@@ -104,7 +105,7 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
                   {row.id === currentAccountId && <span className="ml-2 text-sm font-normal text-denim-700">(you)</span>}
                 </td>
                 <td className="px-3 py-2 break-all">{row.email}</td>
-                <td className="px-3 py-2 whitespace-nowrap">{row.createdAt.slice(0, 10)}</td>
+                <td className="px-3 py-2 whitespace-nowrap"><time dateTime={row.createdAt}>{formatDate(row.createdAt, 'day')}</time></td>
                 <td className="px-3 py-2">
                   <select
                     aria-label={`Role of ${row.displayName}`}

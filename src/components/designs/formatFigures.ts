@@ -1,4 +1,5 @@
 // Lengths, sizes and thread are written by shared/units/units.ts (in the viewer's units); these are the other figures.
+import { formatDate } from '@shared/format/dates.ts';
 
 /** Minutes, as "about 4 min" or "under 1 min". */
 export function formatMinutes(minutes: number): string {
@@ -17,7 +18,7 @@ export function formatEdited(at: number, now: number): string {
   const d = Math.round(h / 24);
   if (d === 1) return 'yesterday';
   if (d < 14) return `${d} days ago`;
-  return new Date(at).toISOString().slice(0, 10);
+  return formatDate(at, 'day');
 }
 
 function trimDecimals(value: number, digits: number): string {

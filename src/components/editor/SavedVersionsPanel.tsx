@@ -1,3 +1,4 @@
+import { formatDate } from '@shared/format/dates.ts';
 import { useCallback, useEffect, useState } from 'react';
 import { z } from 'zod';
 import { apiRequest } from '../designs/apiClient.ts';
@@ -77,7 +78,7 @@ export function SavedVersionsPanel({ designId, baseVersion, canGoBack, onRestore
             <li key={v.version} className="border-b border-muslin-100 pb-1" data-version={v.version}>
               <div className="flex justify-between gap-2">
                 <span className="font-semibold">Version {v.version}{v.version === list.current ? ' (current)' : ''}</span>
-                <time dateTime={v.savedAt} className="text-denim-700">{new Date(v.savedAt).toLocaleString()}</time>
+                <time dateTime={v.savedAt} className="text-denim-700">{formatDate(v.savedAt, 'day-time')}</time>
               </div>
               <p>{v.lines} quilting line{v.lines === 1 ? '' : 's'}, {v.seams} seam{v.seams === 1 ? '' : 's'}</p>
               {v.version !== list.current && (

@@ -14,6 +14,3 @@ export const ui = {
   td: 'border-b border-muslin-200 px-3 py-2 align-top',
 } as const;
 
-export function formatDate(iso: string): string {
-  return new Date(iso).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' }) + ' UTC';
-}

@@ -1,5 +1,6 @@
 // Plain answers for invitation links that cannot be used. The wording tells the student what to do next.
 import { assertNever } from '@shared/assertNever.ts';
+import { formatDate, WITHOUT_VIEWER } from '@shared/format/dates.ts';
 import { problem } from '../http.ts';
 import type { AcceptProblem } from './invitation.service.ts';
 
@@ -8,7 +9,7 @@ export function invitationMessage(p: AcceptProblem): string {
     case 'forged':
       return 'This invitation link is not valid. Check that you opened the whole link from the e-mail, or ask your teacher to send a new one.';
     case 'expired':
-      return `This invitation expired on ${p.expiredAt.toISOString().slice(0, 10)}. Ask your teacher to send a new one.`;
+      return `This invitation expired on ${formatDate(p.expiredAt, 'day', WITHOUT_VIEWER)}. Ask your teacher to send a new one.`;
     case 'used':
       return 'This invitation has already been used. If that was you, the class is in your list of classes; otherwise ask your teacher for a new one.';
     case 'revoked':

@@ -1,7 +1,9 @@
 // The teaching e-mails, as plain text (links on their own line so every mail client makes them clickable).
 import type { OutgoingEmail } from '../mail/mailer.ts';
 
-const day = (d: Date) => d.toISOString().slice(0, 10);
+import { formatDate, WITHOUT_VIEWER } from '@shared/format/dates.ts';
+
+const day = (d: Date) => formatDate(d, 'day', WITHOUT_VIEWER);
 
 export function classInvitationEmail(to: string, classTitle: string, teacherName: string, link: string, expiresAt: Date): OutgoingEmail {
   return {

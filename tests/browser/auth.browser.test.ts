@@ -37,7 +37,7 @@ describe('account flow in the browser', () => {
     await screenshot(page, '01b-sign-up-check-inbox');
     await finishSignUpFromMail(page, email, since);
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toContain('Hollis Fairweather');
-    expect(await page.getByRole('link', { name: 'Open my designs' }).getAttribute('href')).toBe('/designs');
+    expect(await page.getByRole('link', { name: 'All my designs' }).getAttribute('href')).toBe('/designs');
     expect(await page.getByText('centimetres').count()).toBeGreaterThan(0);
     await screenshot(page, '02-dashboard');
 

@@ -23,8 +23,18 @@ const COLUMNS: readonly Columns[] = [
   { key: 'updated', label: 'Last edited' },
 ];
 
-/** The quilter's designs: sortable, searchable, paged; duplicate and delete (with undo). Fetches from the API. */
-/** The quilter's designs, every figure in the viewer's units. */
+/**
+ * The quilter's designs: sortable, searchable, paged; duplicate and delete (with undo); every figure in the viewer's
+ * units. A table from tablet width up, cards on phones (a table of nine columns does not fit 390 px).
+ */
+function Thumbnail({ svg, size }: { svg: string | null; size: number }) {
+  return svg === null ? (
+    <span className="block shrink-0 rounded border border-muslin-200 bg-muslin-100" style={{ width: size, height: size }} title="The drawing's picture is being made" />
+  ) : (
+    <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(svg)}`} alt="" width={size} height={size} className="shrink-0 rounded border border-muslin-200 bg-white" />
+  );
+}
+
 export function DesignTable({ viewerUnits }: { viewerUnits: Units }) {
   const [sort, setSort] = useState<DesignSort>('updated');
   const [dir, setDir] = useState<'asc' | 'desc'>('desc');
@@ -118,7 +128,52 @@ export function DesignTable({ viewerUnits }: { viewerUnits: Units }) {
       )}
       {list && list.total === 0 && query && <p className="mt-6">No design titles contain “{query}”.</p>}
       {list && list.designs.length > 0 && (
-        <div className="mt-4 overflow-x-auto">
+        <div className="mt-4">
+          <div className="md:hidden" data-designs-cards>
+            <label className="flex items-center gap-2">
+              <span>Sort by</span>
+              <select
+                value={`${sort}:${dir}`}
+                onChange={(e) => {
+                  const [key, order] = e.target.value.split(':') as [DesignSort, 'asc' | 'desc'];
+                  setSort(key);
+                  setDir(order);
+                  setPage(1);
+                }}
+                className="min-h-11 rounded border border-muslin-300 bg-white px-2"
+              >
+                {COLUMNS.filter((c) => c.key !== null).flatMap((c) => [
+                  <option key={`${c.key}:asc`} value={`${c.key}:asc`}>{c.label}{c.key === 'updated' ? ' (oldest first)' : ' (lowest first)'}</option>,
+                  <option key={`${c.key}:desc`} value={`${c.key}:desc`}>{c.label}{c.key === 'updated' ? ' (newest first)' : ' (highest first)'}</option>,
+                ])}
+              </select>
+            </label>
+            <ul className="mt-3 flex flex-col gap-3">
+              {list.designs.map((d) => (
+                <li key={d.id} className="flex items-start gap-3 rounded-lg border border-muslin-200 bg-white p-3">
+                  <Thumbnail svg={d.thumbnailSvg} size={64} />
+                  <div className="min-w-0 flex-1">
+                    <a href={`/designs/${d.id}`} className="font-semibold break-words text-denim-600 underline">{d.title}</a>
+                    <p className="text-sm text-denim-700">
+                      {formatSize(d.width, d.height, d.units, viewerUnits)} ·{' '}
+                      {d.summaryPending ? 'figures on the way' : d.summary ? `${d.summary.passes} ${d.summary.passes === 1 ? 'pass' : 'passes'} · ${d.summary.stops} ${d.summary.stops === 1 ? 'stop' : 'stops'}` : 'no route yet'}
+                    </p>
+                    {d.summary && (
+                      <p className="text-sm text-denim-700">
+                        Travel {formatLength(d.summary.travelLength, d.units, viewerUnits)} · thread {formatThread(d.summary.thread.totalYards, viewerUnits)}
+                      </p>
+                    )}
+                    <p className="text-sm text-denim-700">Edited <time dateTime={d.updatedAt}>{formatEdited(Date.parse(d.updatedAt), now)}</time></p>
+                    <p className="mt-1 flex gap-4">
+                      <button type="button" onClick={() => void duplicate(d)} className="min-h-11 underline" aria-label={`Duplicate ${d.title}`}>Duplicate</button>
+                      <button type="button" onClick={() => void remove(d)} className="min-h-11 text-madder-600 underline" aria-label={`Delete ${d.title}`}>Delete</button>
+                    </p>
+                  </div>
+                </li>
+              ))}
+            </ul>
+          </div>
+          <div className="hidden overflow-x-auto md:block">
           <table className="w-full border-collapse text-left">
             <thead>
               <tr className="border-b-2 border-muslin-300">
@@ -137,13 +192,7 @@ export function DesignTable({ viewerUnits }: { viewerUnits: Units }) {
             <tbody>
               {list.designs.map((d) => (
                 <tr key={d.id} className="border-b border-muslin-200 align-middle">
-                  <td className="px-2 py-2">
-                    {d.thumbnailSvg === null ? (
-                      <span className="block h-14 w-14 rounded border border-muslin-200 bg-muslin-100" title="The drawing's picture is being made" />
-                    ) : (
-                      <img src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`} alt="" width={56} height={56} className="rounded border border-muslin-200 bg-white" />
-                    )}
-                  </td>
+                  <td className="px-2 py-2"><Thumbnail svg={d.thumbnailSvg} size={56} /></td>
                   <td className="px-2 py-2"><a href={`/designs/${d.id}`} className="font-semibold text-denim-600 underline">{d.title}</a></td>
                   <td className="px-2 py-2 whitespace-nowrap">{formatSize(d.width, d.height, d.units, viewerUnits)}</td>
                   <td className="px-2 py-2">
@@ -161,6 +210,7 @@ export function DesignTable({ viewerUnits }: { viewerUnits: Units }) {
               ))}
             </tbody>
           </table>
+          </div>
           {pages > 1 && (
             <nav className="mt-4 flex items-center gap-3" aria-label="Pages">
               <button type="button" disabled={page <= 1} onClick={() => setPage(page - 1)} className="rounded border px-3 py-1 disabled:opacity-50">Previous</button>

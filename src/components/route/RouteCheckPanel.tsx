@@ -97,8 +97,9 @@ function Row({ label, figure, children }: { label: string; figure: string; child
 
 function FigureList({ figures, units, extra }: { figures: RouteFigures; units: UnitPair; extra: readonly (readonly [string, string, string])[] }) {
   return (
-    <dl className="mt-2 text-sm">
-      <div className="grid grid-cols-2 gap-2 pb-2">
+    <div className="mt-2 text-sm">
+      {/* A <dl> may hold only dt/dd groups wrapped in one <div> each, so the two big figures are a list of their own. */}
+      <dl className="grid grid-cols-2 gap-2 pb-2">
         <div className="rounded bg-muslin-100 p-2 text-center">
           <dt className="text-xs uppercase tracking-wide">Passes</dt>
           <dd className="text-2xl font-bold" data-figure="passes">{figures.passes}</dd>
@@ -107,7 +108,8 @@ function FigureList({ figures, units, extra }: { figures: RouteFigures; units: U
           <dt className="text-xs uppercase tracking-wide">Stops</dt>
           <dd className="text-2xl font-bold" data-figure="stops">{figures.stops}</dd>
         </div>
-      </div>
+      </dl>
+      <dl>
       <Row label="Loose ends" figure="odd-points">{figures.oddPoints}</Row>
       <Row label="Line groups" figure="pieces">{figures.pieces}</Row>
       <Row label="Stitching" figure="stitch-length">{length(figures.stitchLength, units)}</Row>
@@ -116,7 +118,8 @@ function FigureList({ figures, units, extra }: { figures: RouteFigures; units: U
       <Row label="Edge travel" figure="edge">{length(figures.edgeLength, units)}</Row>
       {figures.optimal !== undefined && <Row label="Planned route" figure="optimal">{figures.optimal ? 'best possible' : 'good, not proven best'}</Row>}
       {extra.map(([label, value, key]) => <Row key={key} label={label} figure={key}>{value}</Row>)}
-    </dl>
+      </dl>
+    </div>
   );
 }
 

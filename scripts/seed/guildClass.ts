@@ -9,13 +9,15 @@ import { findOwnedVersionIdByTitle, findVersionById } from '@server/templates/te
 import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
 import { routeNote } from '@shared/walkthrough/routeNote.ts';
 import { createClass, createLesson } from '@server/classes/class.service.ts';
-import { enrollStudent, findTaughtClassIdByTitle } from '@server/classes/class.repository.ts';
+import { enrollStudent, findTaughtClassIdByTitle, listLessons, updateLessonRow } from '@server/classes/class.repository.ts';
 import { inTransaction } from '@server/transaction.repository.ts';
 import { seedDesign } from './guildDesigns.ts';
 import { marigoldDrawings, type GuildDrawing } from './guildDrawings.ts';
 
 const CLASS_TITLE = 'Tuesday quilt-along';
 const DAY_MS = 24 * 60 * 60 * 1000;
+const WEEK2_TITLE = 'Week 2: echoes around the blades';
+const WEEK2_LEAD = 'A second pinwheel: the same ditch lines as week 1, with echoes 1/2 in apart inside each blade, stepping in from one echo to the next.';
 
 interface TemplateRecipe {
   title: string;
@@ -67,6 +69,16 @@ async function noteFor(db: Kysely<Database>, versionId: string, lead: string): P
   return `${lead} ${routeNote(input.value.design, input.value.route)}`;
 }
 
+/**
+ * Databases seeded before the echoes template existed have week 2 pointing at the ditch template, with a note that
+ * does not match its route. Point it at the echoes template and rewrite the note (only that lesson, only then).
+ */
+async function repairWeek2Lesson(db: Kysely<Database>, classId: string, echoesVersionId: string): Promise<void> {
+  const week2 = (await listLessons(db, classId, false)).find((l) => l.title === WEEK2_TITLE);
+  if (!week2 || week2.template_version_id === echoesVersionId) return;
+  await updateLessonRow(db, week2.id, { templateVersionId: echoesVersionId, notesMd: await noteFor(db, echoesVersionId, WEEK2_LEAD) });
+}
+
 /** Counts of what this run added: templates, classes, enrollments. */
 export async function seedGuildClass(
   db: Kysely<Database>,
@@ -83,7 +95,7 @@ export async function seedGuildClass(
   if (!classId) {
     const startsOn = new Date(now.getTime() - 14 * DAY_MS).toISOString().slice(0, 10);
     const week1Notes = await noteFor(db, week1.versionId, 'Every seam of the pinwheel, in the ditch.');
-    const week2Notes = await noteFor(db, week2.versionId, 'A second pinwheel: the same ditch lines as week 1, with echoes 1/2 in apart inside each blade, stepping in from one echo to the next.');
+    const week2Notes = await noteFor(db, week2.versionId, WEEK2_LEAD);
     classId = await inTransaction(db, async (trx) => {
       const created = await createClass(trx, teacherId, {
         title: CLASS_TITLE,
@@ -99,7 +111,7 @@ export async function seedGuildClass(
         templateVersionId: week1.versionId,
       });
       await createLesson(trx, created, {
-        title: 'Week 2: echoes around the blades',
+        title: WEEK2_TITLE,
         releaseAt: new Date(now.getTime() + 30 * DAY_MS).toISOString(),
         notes: week2Notes,
         templateVersionId: week2.versionId,
@@ -107,6 +119,8 @@ export async function seedGuildClass(
       return created;
     });
     classes = 1;
+  } else {
+    await repairWeek2Lesson(db, classId, week2.versionId);
   }
   let enrollments = 0;
   for (const studentId of studentIds) if (await enrollStudent(db, classId, studentId, 'join-code')) enrollments += 1;

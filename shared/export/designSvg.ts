@@ -1,9 +1,9 @@
+import { dashFor, LINE_STYLES } from '../style/lineStyles.ts';
 import type { StrokePath } from '../contract/strokes.ts';
 import type { Design, Units } from '../design/design.schema.ts';
 import { formatSize } from '../units/units.ts';
 import { bindingBandOf, CM_PER_INCH } from '../design/design.schema.ts';
 import type { Point, Polyline } from '../geometry/point.ts';
-import { assertNever } from '../assertNever.ts';
 import { thumbnailLines, type ThumbnailLines } from './thumbnailLines.ts';
 
 /** One stroke of a route as the SVG draws it (the planner's and the route check's strokes fit this shape). */
@@ -20,8 +20,16 @@ export interface DesignSvgOptions {
   readonly viewerUnits?: Units;
 }
 
-// Our own palette: stitching in deep indigo, travel in warm tones, seams in grey.
-const INK = { block: '#fbf8f2', outline: '#4a4a4a', seam: '#9a9a9a', band: '#efe6d6', stitch: '#263a7a', retrace: '#c2571a', ditch: '#8a6d1f', edge: '#7a2f5c', text: '#222222' } as const;
+// Lines and route kinds in the one visual language (shared/style/lineStyles.ts), so a printed plan reads like the
+// workbench and its legend; the block's paper, outline and text are print colours of their own.
+const INK = {
+  block: '#fbf8f2',
+  outline: '#4a4a4a',
+  band: '#efe6d6',
+  text: '#222222',
+  seam: LINE_STYLES.seam.colour,
+  stitch: LINE_STYLES.stitch.colour,
+} as const;
 
 /**
  * An SVG split into its root element's attributes and its content, so a page can write the root element itself
@@ -148,18 +156,11 @@ function routeGroup(route: readonly SvgStroke[], stroke: number, side: number): 
 }
 
 function strokeStyle(kind: SvgStroke['kind'], stroke: number): string {
-  switch (kind) {
-    case 'stitch':
-      return `stroke="${INK.stitch}" stroke-width="${num(stroke * 1.6)}"`;
-    case 'retrace':
-      return `stroke="${INK.retrace}" stroke-width="${num(stroke)}" stroke-dasharray="${num(stroke * 4)} ${num(stroke * 3)}"`;
-    case 'ditch':
-      return `stroke="${INK.ditch}" stroke-width="${num(stroke)}" stroke-dasharray="${num(stroke * 1.5)} ${num(stroke * 3)}"`;
-    case 'edge':
-      return `stroke="${INK.edge}" stroke-width="${num(stroke)}" stroke-dasharray="${num(stroke * 6)} ${num(stroke * 2)} ${num(stroke)} ${num(stroke * 2)}"`;
-    default:
-      return assertNever(kind);
-  }
+  const style = LINE_STYLES[kind];
+  // Stitching is drawn heavier than travel, as on the canvas; dashes are in multiples of the drawn width.
+  const width = kind === 'stitch' ? stroke * 1.6 : stroke;
+  const dash = dashFor(style, width);
+  return `stroke="${style.colour}" stroke-width="${num(width)}"${dash.length > 0 ? ` stroke-dasharray="${dash.map(num).join(' ')}"` : ''}`;
 }
 
 /** A filled triangle pointing along the polyline at half its length; null for a zero-length polyline. */

@@ -1,7 +1,11 @@
 /**
- * Canvas colours, read from the same palette tokens as the page (src/styles/global.css), so the canvas
- * and the controls around it always agree. Konva needs concrete colour strings, hence this lookup.
+ * Canvas colours. The paper, grid, rulers and selection come from the page's palette tokens (src/styles/global.css),
+ * so the canvas and the controls around it agree; every line and mark that carries meaning (seams, quilting lines,
+ * the route's kinds, loose ends, the widest gap, line groups) comes from the one visual language in
+ * shared/style/lineStyles.ts, which the legend, the SVG export and printed plans share.
  */
+import { LINE_GROUP_COLOURS, LINE_STYLES, MARK_STYLES, PREVIEW_COLOUR } from '@shared/style/lineStyles.ts';
+
 export interface CanvasTheme {
   readonly paper: string;
   readonly fabric: string;
@@ -14,6 +18,8 @@ export interface CanvasTheme {
   readonly selected: string;
   readonly preview: string;
   readonly guide: string;
+  /** The walkthrough's current step (its ends and direction marks). */
+  readonly highlight: string;
   readonly oddPoint: string;
   readonly stitch: string;
   readonly retrace: string;
@@ -32,33 +38,28 @@ const TOKENS = {
   gridMajor: ['--color-muslin-300', '#d4c4a3'],
   ruler: ['--color-muslin-100', '#f4eee1'],
   rulerInk: ['--color-indigo-ink', '#1f2f4a'],
-  seam: ['--color-denim-500', '#3d5a80'],
-  line: ['--color-indigo-ink', '#1f2f4a'],
   selected: ['--color-ochre-500', '#c8922e'],
-  preview: ['--color-madder-500', '#b5473a'],
   guide: ['--color-sage-500', '#6f8f72'],
-  oddPoint: ['--color-madder-600', '#983a2f'],
-  stitch: ['--color-indigo-ink', '#1f2f4a'],
-  retrace: ['--color-madder-500', '#b5473a'],
-  ditch: ['--color-denim-500', '#3d5a80'],
-  edge: ['--color-sage-600', '#587459'],
-  needle: ['--color-madder-600', '#983a2f'],
-  gap: ['--color-ochre-500', '#c8922e'],
+  highlight: ['--color-madder-600', '#983a2f'],
 } as const satisfies Record<string, readonly [string, string]>;
 
-const PIECE_TOKENS = [
-  ['--color-denim-600', '#2f4868'],
-  ['--color-madder-500', '#b5473a'],
-  ['--color-sage-600', '#587459'],
-  ['--color-ochre-500', '#c8922e'],
-  ['--color-indigo-ink', '#1f2f4a'],
-  ['--color-madder-600', '#983a2f'],
-] as const;
+const MEANINGFUL = {
+  seam: LINE_STYLES.seam.colour,
+  line: LINE_STYLES.quiltingLine.colour,
+  preview: PREVIEW_COLOUR,
+  oddPoint: MARK_STYLES.looseEnd.colour,
+  stitch: LINE_STYLES.stitch.colour,
+  retrace: LINE_STYLES.retrace.colour,
+  ditch: LINE_STYLES.ditch.colour,
+  edge: LINE_STYLES.edge.colour,
+  needle: MARK_STYLES.needle.colour,
+  gap: MARK_STYLES.widestGap.colour,
+} as const;
 
 /** Reads the palette from the document's computed style; falls back to the token defaults. */
 export function readCanvasTheme(root: Element = document.documentElement): CanvasTheme {
   const style = getComputedStyle(root);
   const read = ([name, fallback]: readonly [string, string]) => style.getPropertyValue(name).trim() || fallback;
   const entries = Object.entries(TOKENS).map(([k, token]) => [k, read(token)] as const);
-  return { ...(Object.fromEntries(entries) as Omit<CanvasTheme, 'pieces'>), pieces: PIECE_TOKENS.map(read) };
+  return { ...(Object.fromEntries(entries) as Pick<CanvasTheme, keyof typeof TOKENS>), ...MEANINGFUL, pieces: LINE_GROUP_COLOURS };
 }

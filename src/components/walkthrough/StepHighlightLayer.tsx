@@ -41,19 +41,19 @@ export function StepHighlightLayer({ step, strokes, view, theme }: StepHighlight
           />
         )}
         {arrows.map((a, i) => (
-          <RegularPolygon key={i} x={a.point[0]} y={a.point[1]} sides={3} radius={9 * px} rotation={(a.angle * 180) / Math.PI + 90} fill={theme.preview} stroke={theme.paper} strokeWidth={1.5} strokeScaleEnabled={false} />
+          <RegularPolygon key={i} x={a.point[0]} y={a.point[1]} sides={3} radius={9 * px} rotation={(a.angle * 180) / Math.PI + 90} fill={theme.highlight} stroke={theme.paper} strokeWidth={1.5} strokeScaleEnabled={false} />
         ))}
         {lines.length > 0 && (
           <>
-            <Circle x={step.from[0]} y={step.from[1]} radius={10 * px} stroke={theme.preview} strokeWidth={3} strokeScaleEnabled={false} />
-            <RegularPolygon x={step.to[0]} y={step.to[1]} sides={4} radius={9 * px} rotation={45} stroke={theme.preview} strokeWidth={3} strokeScaleEnabled={false} />
+            <Circle x={step.from[0]} y={step.from[1]} radius={10 * px} stroke={theme.highlight} strokeWidth={3} strokeScaleEnabled={false} />
+            <RegularPolygon x={step.to[0]} y={step.to[1]} sides={4} radius={9 * px} rotation={45} stroke={theme.highlight} strokeWidth={3} strokeScaleEnabled={false} />
           </>
         )}
         {mark && (
           <Group x={step.from[0]} y={step.from[1]}>
-            <Circle radius={16 * px} stroke={theme.preview} strokeWidth={4} strokeScaleEnabled={false} />
+            <Circle radius={16 * px} stroke={theme.highlight} strokeWidth={4} strokeScaleEnabled={false} />
             <Circle radius={6 * px} fill={theme.needle} />
-            <Text text={mark} x={20 * px} y={-9 * px} fontSize={16 * px} fontStyle="bold" fill={theme.preview} />
+            <Text text={mark} x={20 * px} y={-9 * px} fontSize={16 * px} fontStyle="bold" fill={theme.highlight} />
           </Group>
         )}
       </Group>

@@ -23,7 +23,8 @@ export function OverlayLayer({ view, theme, preview, snapped, guides, gap }: Ove
   return (
     <Layer listening={false}>
       <Group x={view.x} y={view.y} scaleX={view.scale} scaleY={view.scale}>
-        {gap && <Circle x={gap.center[0]} y={gap.center[1]} radius={gap.radius} stroke={theme.gap} strokeWidth={2} dash={[4, 4]} strokeScaleEnabled={false} fill={theme.gap} opacity={0.25} />}
+        {/* A thin ring, not a filled disc: the quilting inside it stays readable. */}
+        {gap && <Circle x={gap.center[0]} y={gap.center[1]} radius={gap.radius} stroke={theme.gap} strokeWidth={1.25} dash={[5, 3]} strokeScaleEnabled={false} />}
         {guides.map((g, i) => (
           <Line key={i} points={[g[0][0], g[0][1], g[1][0], g[1][1]]} stroke={theme.guide} strokeWidth={1.5} dash={[10, 6]} strokeScaleEnabled={false} />
         ))}

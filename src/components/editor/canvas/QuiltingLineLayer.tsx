@@ -87,8 +87,14 @@ export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
             strokeScaleEnabled={false}
           />
         )}
-        {start && <Circle x={start[0]} y={start[1]} radius={7 * px} fill={theme.guide} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />}
-        {end && <RegularPolygon x={end[0]} y={end[1]} sides={4} radius={8 * px} fill={theme.preview} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />}
+        {/* Start: a ring with a dot; finish: a diamond (shapes from shared/style/lineStyles.ts, as in the legend). */}
+        {start && (
+          <Group x={start[0]} y={start[1]}>
+            <Circle radius={7 * px} fill={theme.paper} stroke={theme.line} strokeWidth={2} strokeScaleEnabled={false} />
+            <Circle radius={2.5 * px} fill={theme.line} />
+          </Group>
+        )}
+        {end && <RegularPolygon x={end[0]} y={end[1]} sides={4} radius={8 * px} fill={theme.line} stroke={theme.paper} strokeWidth={1.5} strokeScaleEnabled={false} />}
         {ownOrder.map((li, k) => {
           const at = midpointOf(lines[li]);
           return at ? <Text key={`own${k}`} x={at[0] + 4 * px} y={at[1] - 14 * px} text={String(k + 1)} fontSize={13 * px} fontStyle="bold" fill={theme.retrace} /> : null;

@@ -2,6 +2,7 @@ import { useMemo } from 'react';
 import { Circle, Group, Layer, Label, Shape, Tag, Text } from 'react-konva';
 import { STROKE_KINDS, type StrokeKind } from '@shared/contract/strokes.ts';
 import { arrowMarks, passStarts, type NeedlePosition, type RouteStroke } from '../../route/routePlayback.ts';
+import { dashFor, LINE_STYLES } from '@shared/style/lineStyles.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';
@@ -16,20 +17,11 @@ export interface RouteLayerProps {
   readonly focusPass?: number | null;
 }
 
-/** How each stroke kind is drawn: stitching solid, travel dashed in its own colour. */
+/** How each stroke kind is drawn: the shared visual language (stitching solid, each travel kind its own dash). */
 function strokeStyle(kind: StrokeKind, theme: CanvasTheme): { color: string; dash: number[]; width: number } {
-  switch (kind) {
-    case 'stitch':
-      return { color: theme.stitch, dash: [], width: 2.5 };
-    case 'retrace':
-      return { color: theme.retrace, dash: [8, 4], width: 3 };
-    case 'ditch':
-      return { color: theme.ditch, dash: [2, 4], width: 3.5 };
-    case 'edge':
-      return { color: theme.edge, dash: [10, 3, 2, 3], width: 3 };
-  }
+  const style = LINE_STYLES[kind];
+  return { color: theme[kind], dash: dashFor(style), width: style.width };
 }
-
 
 /** Above this many passes the labels would cover the block; the check card still counts them. */
 const MAX_PASS_LABELS = 60;

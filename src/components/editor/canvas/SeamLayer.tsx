@@ -1,6 +1,7 @@
 import { Group, Layer, Line, Shape } from 'react-konva';
 import type { Polyline } from '@shared/geometry/point.ts';
 import type { Patch } from '@shared/layouts/patch.ts';
+import { LINE_STYLES } from '@shared/style/lineStyles.ts';
 import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';
@@ -15,7 +16,7 @@ export interface SeamLayerProps {
   readonly selected: ReadonlySet<number>;
 }
 
-/** The seam lines of the pieced layout (where stitch-in-the-ditch travel runs). View only. */
+/** The seam lines of the pieced layout (where stitch-in-the-ditch travel runs): thin and solid, never dashed like travel. View only. */
 export function SeamLayer({ seams, view, theme, patch, selected }: SeamLayerProps) {
   return (
     <Layer listening={false}>
@@ -27,8 +28,7 @@ export function SeamLayer({ seams, view, theme, patch, selected }: SeamLayerProp
             ctx.strokeShape(shape);
           }}
           stroke={theme.seam}
-          strokeWidth={2}
-          dash={[6, 3]}
+          strokeWidth={LINE_STYLES.seam.width}
           strokeScaleEnabled={false}
           lineCap="round"
         />

@@ -4,6 +4,7 @@ import { buildWalkthrough } from '@shared/walkthrough/buildWalkthrough.ts';
 import { findSafetyCautions } from '@shared/walkthrough/safetyCautions.ts';
 import type { RouteStrokeInput } from '@shared/walkthrough/walkthrough.types.ts';
 import { KeyList } from './KeyList.tsx';
+import { PlaybackSettings } from './PlaybackSettings.tsx';
 import { StepCard } from './StepCard.tsx';
 import { StepControls } from './StepControls.tsx';
 import { StepList } from './StepList.tsx';
@@ -29,7 +30,7 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
   const walkthrough = useMemo(() => buildWalkthrough(design, route), [design, route]);
   const { steps } = walkthrough;
   const cautions = useMemo(() => findSafetyCautions(lessonText), [lessonText]);
-  const sp = useStepPlayer(steps, route, design.units, initialStep);
+  const sp = useStepPlayer(steps, route, design.units, design.thread, initialStep);
   const step = steps[sp.stepIndex]!;
   const patch = walkthrough.patches.find((p) => p.name === step.patch) ?? null;
   const last = sp.stepIndex === steps.length - 1;
@@ -51,6 +52,7 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
       else if (action === 'first-step') sp.goTo(0);
       else if (action === 'last-step') sp.goTo(steps.length - 1);
       else if (action === 'replay-step') sp.replay();
+      else if (action === 'step-end') sp.jumpToStepEnd();
       else if (action === 'faster') sp.changeSpeed(1);
       else sp.changeSpeed(-1);
     };
@@ -61,12 +63,12 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
   return (
     <div className="@container flex flex-col gap-6" data-testid="walkthrough">
       <div className="grid gap-4 @4xl:grid-cols-[minmax(0,1fr)_28rem]">
-        <div className="h-[40vh] min-h-72 @4xl:h-[65vh] print:hidden">
+        {/* Desktop: the block stays put (sticky) while the card column scrolls; the controls bar sits under it. */}
+        <div className="h-[40vh] min-h-72 @4xl:sticky @4xl:top-2 @4xl:h-[min(65vh,calc(100dvh-11rem))] @4xl:self-start print:hidden">
           <WalkthroughCanvas design={design} strokes={route} step={step} patch={patch} needle={sp.needle} />
         </div>
         <div className="flex flex-col gap-4">
           <StepCard step={step} />
-          <StepControls sp={sp} stepCount={steps.length} units={design.units} />
           <div className="flex flex-col gap-2 print:hidden">
             {last && progress.state !== 'off' && (
               <button
@@ -77,14 +79,21 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
                 {progress.finished ? '✓ Lesson done (tap to re-open)' : 'Mark lesson done'}
               </button>
             )}
+            {progress.state !== 'off' && (
+              <p className="text-lg" data-progress>
+                {progress.finished ? 'You finished this lesson.' : `You are on step ${sp.stepIndex + 1} of ${steps.length}.`}
+              </p>
+            )}
             <p className="text-base" role="status" data-testid="save-state" data-state={progress.state}>
               {progress.finished && progress.state !== 'off' ? 'You finished this lesson. ' : ''}{SAVE_LABEL[progress.state]}
             </p>
           </div>
+          <PlaybackSettings sp={sp} units={design.units} />
           <KeyList />
         </div>
       </div>
       <StepList title={title} steps={steps} cautions={cautions} current={sp.stepIndex} onPick={sp.goTo} />
+      <StepControls sp={sp} stepCount={steps.length} />
     </div>
   );
 }

@@ -8,7 +8,9 @@ import { PlaybackSettings } from './PlaybackSettings.tsx';
 import { StepCard } from './StepCard.tsx';
 import { StepControls } from './StepControls.tsx';
 import { StepList } from './StepList.tsx';
+import type { OfflineReadiness } from './offlineLesson.ts';
 import type { ProgressSync } from './useProgressSync.ts';
+import { useOnline } from './useOnline.ts';
 import { useStepPlayer } from './useStepPlayer.ts';
 import { WalkthroughCanvas } from './WalkthroughCanvas.tsx';
 import { findWalkthroughAction } from './walkthroughKeys.ts';
@@ -21,12 +23,28 @@ export interface WalkthroughViewProps {
   readonly lessonText: readonly string[];
   readonly initialStep: number;
   readonly progress: ProgressSync;
+  /** Whether the lesson is kept on this device for working offline (lessons only; null for templates). */
+  readonly offline?: OfflineReadiness | null;
 }
 
-const SAVE_LABEL = { off: 'Progress is not saved here (open the walkthrough from a class lesson to keep your place).', saved: 'Your place is saved.', saving: 'Saving your place…', retrying: 'Not saved yet: retrying when the connection is back.' } as const;
+const SAVE_LABEL = {
+  off: 'Progress is not saved here (open the walkthrough from a class lesson to keep your place).',
+  saved: 'Your place is saved.',
+  saving: 'Saving your place…',
+  kept: 'Your place is kept on this device and will be sent when the connection is back.',
+  refused: 'Your place could not be saved for this lesson (it may have been removed). Reload the page.',
+} as const;
+
+const OFFLINE_NOTE: Record<OfflineReadiness, string | null> = {
+  unsupported: null,
+  keeping: 'Keeping this lesson on this device for sewing offline…',
+  ready: 'This lesson is kept on this device: it opens and keeps your place without a connection.',
+  failed: 'This lesson could not be kept on this device; it needs a connection to open again.',
+};
 
 /** The student walkthrough: canvas replay, the current step, controls, keyboard, and the printable step list. */
-export function WalkthroughView({ title, design, route, lessonText, initialStep, progress }: WalkthroughViewProps) {
+export function WalkthroughView({ title, design, route, lessonText, initialStep, progress, offline = null }: WalkthroughViewProps) {
+  const online = useOnline();
   const walkthrough = useMemo(() => buildWalkthrough(design, route), [design, route]);
   const { steps } = walkthrough;
   const cautions = useMemo(() => findSafetyCautions(lessonText), [lessonText]);
@@ -62,6 +80,11 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
 
   return (
     <div className="@container flex flex-col gap-6" data-testid="walkthrough">
+      {!online && (
+        <p role="status" data-testid="offline-banner" className="rounded border-2 border-ochre-500 bg-muslin-100 px-4 py-3 text-lg font-semibold">
+          You are offline. The walkthrough keeps working{progress.state === 'off' ? '' : ', and your place is kept on this device until the connection is back'}.
+        </p>
+      )}
       <div className="grid gap-4 @4xl:grid-cols-[minmax(0,1fr)_28rem]">
         {/* Desktop: the block stays put (sticky) while the card column scrolls; the controls bar sits under it. */}
         <div className="h-[40vh] min-h-72 @4xl:sticky @4xl:top-2 @4xl:h-[min(65vh,calc(100dvh-11rem))] @4xl:self-start print:hidden">
@@ -87,6 +110,7 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
             <p className="text-base" role="status" data-testid="save-state" data-state={progress.state}>
               {progress.finished && progress.state !== 'off' ? 'You finished this lesson. ' : ''}{SAVE_LABEL[progress.state]}
             </p>
+            {offline && OFFLINE_NOTE[offline] && <p className="text-base" data-testid="offline-ready" data-state={offline}>{OFFLINE_NOTE[offline]}</p>}
           </div>
           <PlaybackSettings sp={sp} units={design.units} />
           <KeyList />

@@ -1,12 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
-  acknowledgeProgress, choosePlace, EMPTY_QUEUE, findQueued, nextMoveInstant, queueProgress, readQueue,
+  acknowledgeProgress, choosePlace, EMPTY_QUEUE, findPending, findQueued, nextMoveInstant, queueProgress, readQueue,
   type ProgressQueue, type QueuedProgress,
 } from './progressQueue.ts';
 
 const move = (stepIndex: number, at: string, over: Partial<QueuedProgress> = {}): QueuedProgress =>
-  ({ lessonId: 'L1', studentId: 'S1', stepIndex, totalSteps: 20, finished: false, at, ...over });
+  ({ lessonId: 'L1', studentId: 'S1', stepIndex, totalSteps: 20, finished: false, at, pending: true, ...over });
 
 describe('the offline progress queue', () => {
   it('keeps the newest move per lesson and student, and only drops what the server took', () => {
@@ -18,8 +18,21 @@ describe('the offline progress queue', () => {
     expect(q.entries).toHaveLength(2);
     const sent = findQueued(q, 'L1', 'S1')!;
     const newer = queueProgress(q, move(5, '2027-01-05T10:00:02.000Z')); // moved on while the save was out
-    expect(findQueued(acknowledgeProgress(newer, sent), 'L1', 'S1')?.stepIndex).toBe(5);
-    expect(findQueued(acknowledgeProgress(q, sent), 'L1', 'S1')).toBeNull();
+    expect(findPending(acknowledgeProgress(newer, sent), 'L1', 'S1')?.stepIndex).toBe(5);
+    // Taken: nothing left to send, but the device still knows the place (a stale page copy must not win later).
+    expect(findPending(acknowledgeProgress(q, sent), 'L1', 'S1')).toBeNull();
+    expect(findQueued(acknowledgeProgress(q, sent), 'L1', 'S1')).toMatchObject({ stepIndex: 4, pending: false });
+  });
+
+  it('keeps at most 400 places, dropping the oldest ones already sent, never a pending one', () => {
+    let q: ProgressQueue = EMPTY_QUEUE;
+    for (let i = 0; i < 450; i++) {
+      const m = move(1, new Date(Date.UTC(2027, 0, 5, 10, 0, i)).toISOString(), { lessonId: `L${i}` });
+      q = queueProgress(q, m);
+      if (i % 2 === 0) q = acknowledgeProgress(q, findQueued(q, `L${i}`, 'S1')!);
+    }
+    expect(q.entries.length).toBeLessThanOrEqual(400);
+    for (let i = 1; i < 450; i += 2) expect(findPending(q, `L${i}`, 'S1')).not.toBeNull();
   });
 
   it('stamps moves in order even within one millisecond or with a clock set back', () => {
@@ -32,6 +45,8 @@ describe('the offline progress queue', () => {
   it('resumes from the queued place when it is newer than the server’s', () => {
     const server = { stepIndex: 2, totalSteps: 20, finished: false, clientAt: '2027-01-05T10:00:00.000Z' };
     expect(choosePlace(server, move(6, '2027-01-05T10:05:00.000Z'))).toMatchObject({ stepIndex: 6, fromQueue: true });
+    // A place the server already took still beats an older copy of the page (opened offline from the worker's cache).
+    expect(choosePlace(server, move(8, '2027-01-05T10:05:00.000Z', { pending: false }))).toMatchObject({ stepIndex: 8 });
     expect(choosePlace(server, move(6, '2027-01-05T09:05:00.000Z'))).toMatchObject({ stepIndex: 2, fromQueue: false });
     expect(choosePlace(null, null)).toBeNull();
   });
@@ -82,7 +97,7 @@ describe('the offline progress queue against a server that ignores older saves (
             lastStep = e.step;
             queue = queueProgress(queue, move(e.step, last));
           } else if (e.kind === 'send') {
-            const entry = findQueued(queue, 'L1', 'S1');
+            const entry = findPending(queue, 'L1', 'S1');
             if (!entry) continue;
             sentBefore.push(entry);
             if (e.outcome !== 'lost-before') serverSave(server, entry);
@@ -94,7 +109,7 @@ describe('the offline progress queue against a server that ignores older saves (
           if (before !== null) expect(Date.parse(server.clientAt!)).toBeGreaterThanOrEqual(Date.parse(before));
         }
         // Back online: send until the queue is empty.
-        for (let entry = findQueued(queue, 'L1', 'S1'); entry; entry = findQueued(queue, 'L1', 'S1')) {
+        for (let entry = findPending(queue, 'L1', 'S1'); entry; entry = findPending(queue, 'L1', 'S1')) {
           serverSave(server, entry);
           queue = acknowledgeProgress(queue, entry);
         }

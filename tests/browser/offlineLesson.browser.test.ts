@@ -85,7 +85,21 @@ describe('offline lesson', () => {
     const held = await serverProgress();
     expect(held.stepIndex).toBe(5);
     expect(await page.locator('[data-progress]').textContent()).toBe(`You are on step 6 of ${held.totalSteps}.`);
-    expect(await page.evaluate(() => localStorage.getItem('threadway.progressQueue'))).toBeNull();
+    // Nothing left to send; the device remembers step 6 as taken.
+    const kept = await page.evaluate(() => JSON.parse(localStorage.getItem('threadway.progressQueue') ?? 'null'));
+    expect(kept.entries).toEqual([expect.objectContaining({ lessonId, stepIndex: 5, pending: false })]);
     await screenshot(page, 'offline-lesson-03-back-online');
+
+    // Offline again: the worker's copy of the page still embeds step 1 (kept when the lesson was first opened); the
+    // device's own place wins, so the student is not sent back, and the server is not moved back on return.
+    await context.setOffline(true);
+    await context.route('**', refuseWorkerNetwork);
+    await page.reload();
+    await page.getByTestId('walkthrough').waitFor();
+    expect(await counter.textContent()).toMatch(/^Step 6 of /);
+    await context.unroute('**', refuseWorkerNetwork);
+    await context.setOffline(false);
+    await page.locator('[data-testid="save-state"][data-state="saved"]').waitFor();
+    expect((await serverProgress()).stepIndex).toBe(5);
   });
 });

@@ -1,7 +1,7 @@
 import { EMPTY_QUEUE, readQueue, type ProgressQueue } from '@shared/walkthrough/progressQueue.ts';
 
-// The device's queue of walkthrough progress not yet on the server (shared/walkthrough/progressQueue.ts), in
-// localStorage so it outlives a closed tab or a reload without a connection.
+// The device's walkthrough places, pending or taken by the server (shared/walkthrough/progressQueue.ts), in
+// localStorage so they outlive a closed tab or a reload without a connection.
 const KEY = 'threadway.progressQueue';
 
 export function loadProgressQueue(): ProgressQueue {

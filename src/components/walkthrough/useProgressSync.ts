@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
-import { acknowledgeProgress, findQueued, nextMoveInstant, queueProgress, type QueuedProgress } from '@shared/walkthrough/progressQueue.ts';
+import { acknowledgeProgress, findPending, findQueued, nextMoveInstant, queueProgress } from '@shared/walkthrough/progressQueue.ts';
 import { sendJson } from '../ui/submitJson.ts';
 import { loadProgressQueue, saveProgressQueue } from './progressStore.ts';
 
@@ -31,7 +31,8 @@ const RETRY_MS = 5000;
 /**
  * Saves walkthrough progress through PUT /api/lessons/:id/progress ({ stepIndex, totalSteps, finished, at }). Every
  * move goes into the device's queue first (localStorage, shared/walkthrough/progressQueue.ts) stamped with when it was
- * made, then to the server; it leaves the queue only when the server has taken it. Without a connection the queue
+ * made, then to the server; it stays pending until the server has taken it (and is kept afterwards as the device's
+ * last known place, so an older copy of the page opened offline resumes from it). Without a connection the queue
  * holds the newest place and is sent when the browser is back online (and every 5 s meanwhile). The server ignores
  * a save older than the one it holds, so a re-sent save never moves the student back. `target` null turns saving off.
  */
@@ -45,7 +46,7 @@ export function useProgressSync(target: ProgressTarget | null, initialFinished: 
 
   const flush = useCallback(async (): Promise<void> => {
     if (!url || busy.current) return;
-    const entry = findQueued(loadProgressQueue(), lessonId, studentId);
+    const entry = findPending(loadProgressQueue(), lessonId, studentId);
     if (!entry) return;
     busy.current = true;
     setState('saving');
@@ -55,7 +56,7 @@ export function useProgressSync(target: ProgressTarget | null, initialFinished: 
       // Taken, or refused for good (the lesson is gone, the student left the class): either way it leaves the queue.
       saveProgressQueue(acknowledgeProgress(loadProgressQueue(), entry));
       if (!res.ok) return setState('refused');
-      if (findQueued(loadProgressQueue(), lessonId, studentId)) return flush();
+      if (findPending(loadProgressQueue(), lessonId, studentId)) return flush();
       return setState('saved');
     }
     setState('kept');
@@ -71,15 +72,15 @@ export function useProgressSync(target: ProgressTarget | null, initialFinished: 
   // Send what an earlier visit left on the device, and send again as soon as the connection is back.
   useEffect(() => {
     if (!url) return;
-    const queued = findQueued(loadProgressQueue(), lessonId, studentId);
-    if (queued) {
-      last.current.at = queued.at;
+    const known = findQueued(loadProgressQueue(), lessonId, studentId);
+    if (known) last.current.at = known.at;
+    if (known?.pending) {
       setState(navigator.onLine ? 'saving' : 'kept');
       schedule(0);
     }
     const onOnline = () => schedule(0);
     const onOffline = () => {
-      if (findQueued(loadProgressQueue(), lessonId, studentId)) setState('kept');
+      if (findPending(loadProgressQueue(), lessonId, studentId)) setState('kept');
     };
     window.addEventListener('online', onOnline);
     window.addEventListener('offline', onOffline);
@@ -93,8 +94,7 @@ export function useProgressSync(target: ProgressTarget | null, initialFinished: 
   const keep = useCallback((stepIndex: number, totalSteps: number, done: boolean): void => {
     const at = nextMoveInstant(last.current.at, Date.now());
     last.current.at = at;
-    const entry: QueuedProgress = { lessonId, studentId, stepIndex, totalSteps, finished: done, at };
-    saveProgressQueue(queueProgress(loadProgressQueue(), entry));
+    saveProgressQueue(queueProgress(loadProgressQueue(), { lessonId, studentId, stepIndex, totalSteps, finished: done, at }));
     if (!navigator.onLine) setState('kept');
   }, [lessonId, studentId]);
 

@@ -178,6 +178,8 @@ export interface LessonProgressTable {
   total_steps: number;
   finished_at: Date | null;
   last_active_at: ColumnType<Date, Date | undefined, Date>;
+  /** When the student made the saved move, by the device's clock; older saves are ignored (re-sent offline queue). */
+  client_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 
 export interface LessonPhotoTable {

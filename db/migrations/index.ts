@@ -6,6 +6,7 @@ import * as addDesignTemplateSource from './2026_12_02_1610_add_design_template_
 import * as repairCopiedDesignSummaries from './2026_12_04_0900_repair_copied_design_summaries.ts';
 import * as hardenAccounts from './2026_12_04_1710_harden_accounts.ts';
 import * as addDesignSummaryVersion from './2026_12_04_1800_add_design_summary_version.ts';
+import * as addProgressClientAt from './2026_12_05_0900_add_progress_client_at.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
@@ -16,6 +17,7 @@ export const migrations: Record<string, Migration> = {
   '2026_12_04_0900_repair_copied_design_summaries': repairCopiedDesignSummaries,
   '2026_12_04_1710_harden_accounts': hardenAccounts,
   '2026_12_04_1800_add_design_summary_version': addDesignSummaryVersion,
+  '2026_12_05_0900_add_progress_client_at': addProgressClientAt,
 };
 
 export const migrationProvider: MigrationProvider = {

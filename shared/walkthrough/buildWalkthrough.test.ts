@@ -114,12 +114,13 @@ describe('buildWalkthrough: step text for known strokes (analytic)', () => {
     return buildWalkthrough(d, [{ pass: 1, kind: 'stitch', points }]).steps;
   };
 
-  // y grows toward the quilter (design schema), so a line from y = 5.5 up to y = 4.5 runs away from her.
+  // y grows toward the quilter (design schema), so a line from y = 7.5 up to y = 4.5 runs toward the top edge. The
+  // text names the block's edges, so it stays true once the tip has the block turned.
   it.each([
-    [[[5, 7.5], [5, 4.5]], 'away from you', '3 in', 'give the block a half turn'],
-    [[[5, 4.5], [5, 7.5]], 'toward you', '3 in', null],
-    [[[4.5, 5], [7.25, 5]], 'to the right', '2 3/4 in', 'give the block a quarter turn'],
-    [[[7.5, 6], [4.75, 6]], 'to the left', '2 3/4 in', 'give the block a quarter turn'],
+    [[[5, 7.5], [5, 4.5]], 'toward the top edge of the block', '3 in', 'give the block a half turn so its top edge is nearest you'],
+    [[[5, 4.5], [5, 7.5]], 'toward the bottom edge of the block', '3 in', null],
+    [[[4.5, 5], [7.25, 5]], 'toward the right edge of the block', '2 3/4 in', 'give the block a quarter turn so its right edge is nearest you'],
+    [[[7.5, 6], [4.75, 6]], 'toward the left edge of the block', '2 3/4 in', 'give the block a quarter turn so its left edge is nearest you'],
   ] as const)('%j reads "%s", %s', (points, words, length, hint) => {
     const steps = one(points);
     expect(steps.map((s) => s.kind)).toEqual(['start', 'stitch', 'tie-off']);
@@ -145,7 +146,7 @@ describe('buildWalkthrough: step text for known strokes (analytic)', () => {
   it('reads centimetres to the nearest 0.5 cm', () => {
     const d = design(buildPiecedLayout('nine-patch', 30, 30).seams, [[[12, 18], [12, 11.2]]], 'cm', 30);
     const stitch = buildWalkthrough(d, [{ pass: 1, kind: 'stitch', points: [[12, 18], [12, 11.2]] }]).steps[1]!;
-    expect(stitch.instruction).toContain('a straight line 7 cm long, away from you, in the centre square');
+    expect(stitch.instruction).toContain('a straight line 7 cm long in the centre square, toward the top edge of the block');
   });
 
   it('groups travel strokes into one move and names each leg', () => {
@@ -162,7 +163,7 @@ describe('buildWalkthrough: step text for known strokes (analytic)', () => {
     expect(w.steps[2]!.strokes).toEqual([1, 2, 3]);
     expect(w.steps[2]!.title).toBe('Travel');
     // 0.707 + 2.121 + 4 = 6.828 in → 6 7/8 in; legs 3/4, 2 1/8 and 4 in (Pythagoras, ruler to 1/8 in).
-    expect(w.steps[2]!.instruction).toMatch(/^Travel 6 7\/8 in to the top edge of the block, by the top-left square: 3\/4 in over your stitching away from you, then 2 1\/8 in along the seam toward you, then 4 in along the edge away from you\.$/);
+    expect(w.steps[2]!.instruction).toMatch(/^Travel 6 7\/8 in to the top edge of the block, by the top-left square: 3\/4 in over your stitching toward the top edge, then 2 1\/8 in along the seam toward the bottom edge, then 4 in along the edge toward the top edge\.$/);
     expect(w.steps[4]!.instruction).toMatch(/^Tie off: pass 1 ends at /);
     expect(w.steps[5]!.passCounter).toBe('Pass 2 of 2');
     expect(w.steps[7]!.instruction).toContain('That was the last pass');

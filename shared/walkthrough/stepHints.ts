@@ -20,9 +20,9 @@ export function stitchHints(shape: LineShape, direction: StrokeDirection): StepH
   switch (direction) {
     case 'left':
     case 'right':
-      return [{ kind: 'turn-block', text: 'Straight lines are easier to sew true when they run toward you: give the block a quarter turn so this line runs toward you.' }];
+      return [{ kind: 'turn-block', text: `Straight lines are easier to sew true when they run toward you: give the block a quarter turn so its ${direction} edge is nearest you, and this line runs toward you.` }];
     case 'away':
-      return [{ kind: 'turn-block', text: 'Straight lines are easier to sew true when they run toward you: give the block a half turn so this line runs toward you.' }];
+      return [{ kind: 'turn-block', text: 'Straight lines are easier to sew true when they run toward you: give the block a half turn so its top edge is nearest you, and this line runs toward you.' }];
     case 'toward':
     case 'curved':
       return [];

@@ -8,17 +8,20 @@ import { describePlace, findPatchVisits, type BlockPlaces } from './locate.ts';
 import { findMainPatch } from './groupSteps.ts';
 import { formatRulerLength } from './rulerLength.ts';
 
-/** Direction words for stitching, from the quilter's seat. */
+/**
+ * Direction words relative to the block, never to the quilter's seat: the tip may ask her to turn the block, and
+ * "toward the top edge" stays true after a turn where "away from you" would not (stepConsistency.ts checks this).
+ */
 export function directionWords(direction: StrokeDirection): string {
   switch (direction) {
     case 'away':
-      return 'away from you';
+      return 'toward the top edge';
     case 'toward':
-      return 'toward you';
+      return 'toward the bottom edge';
     case 'left':
-      return 'to the left';
+      return 'toward the left edge';
     case 'right':
-      return 'to the right';
+      return 'toward the right edge';
     case 'curved':
       return 'curving';
     default:
@@ -45,7 +48,7 @@ export function stitchInstruction(places: BlockPlaces, points: Polyline, shape: 
   const end = describePlace(places, points[points.length - 1]!);
   switch (shape.kind) {
     case 'straight':
-      return `Stitch a straight line ${length} long, ${directionWords(direction)}, ${where}. End at ${end}.`;
+      return `Stitch a straight line ${length} long ${where}, ${directionWords(direction)} of the block. End at ${end}.`;
     case 'straight-lines':
       return `Stitch ${length} of straight lines ${where}, pivoting at ${shape.turns} ${shape.turns === 1 ? 'corner' : 'corners'} with the needle down. End at ${end}.`;
     case 'curves':

@@ -19,7 +19,8 @@ describe('pagePolicy', () => {
     const p = pagePolicy([H1]);
     expect(p).toContain(`script-src 'self' ${H1};`);
     expect(p).not.toMatch(/script-src[^;]*unsafe/);
-    for (const d of ["frame-ancestors 'none'", "object-src 'none'", "base-uri 'none'", "form-action 'self'"]) expect(p).toContain(d);
+    for (const d of ["frame-ancestors 'none'", "object-src 'none'", "base-uri 'none'", "form-action 'self'", "worker-src 'self';"]) expect(p).toContain(d);
+    expect(p).not.toMatch(/worker-src[^;]*(blob:|data:|\*)/);
   });
 });
 

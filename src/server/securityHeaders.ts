@@ -15,6 +15,9 @@ const PAGE_DIRECTIVES = [
   "img-src 'self' data: blob:",
   "font-src 'self'",
   "connect-src 'self'",
+  // The lesson's offline worker (public/lesson-sw.js) is our own file; workers from anywhere else, blob: or data:
+  // never run. Said outright rather than left to fall back to script-src, whose hashes mean nothing for a worker.
+  "worker-src 'self'",
   "object-src 'none'",
   "base-uri 'none'",
   "form-action 'self'",

@@ -134,7 +134,8 @@ describe('teacher → student → teacher', () => {
 
     // Replay the rest without pausing between steps, at the fastest speed, to the last step.
     await s.getByLabel('Pause after each step').uncheck();
-    await s.getByLabel('Speed').selectOption('8');
+    await s.getByLabel('Stitches per minute').fill('3000');
+    await s.getByRole('radio', { name: '4×' }).click();
     await s.getByRole('button', { name: '▶ Play step' }).click();
     await s.waitForFunction((n) => document.querySelector('[data-testid=step-counter]')?.textContent?.startsWith(`Step ${n} of ${n}`), total, { timeout: 60_000 });
     expect(await s.getByTestId('step-instruction').textContent()).toMatch(/^Tie off: pass 1 ends at /);

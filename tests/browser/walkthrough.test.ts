@@ -42,10 +42,11 @@ describe('template walkthrough', () => {
     await screenshot(page, 'walkthrough-02-first-stitch');
 
     // Play animates the step and pauses at its end (the needle stops where the step ends).
-    await page.getByLabel('Speed').selectOption('8');
+    await page.getByLabel('Stitches per minute').fill('3000');
+    await page.getByRole('radio', { name: '4×' }).click();
     await page.getByRole('button', { name: '▶ Play step' }).click();
     await page.getByRole('button', { name: '❚❚ Pause' }).waitFor();
-    await page.getByRole('button', { name: '▶ Play step' }).waitFor({ timeout: 30_000 });
+    await page.getByRole('button', { name: '▶ Play next step' }).waitFor({ timeout: 30_000 });
     expect(await counter(page)).toMatch(/^Step 2 of /);
     await screenshot(page, 'walkthrough-03-step-played');
 

@@ -33,6 +33,7 @@ export function WalkthroughCanvas({ design, strokes, step, patch, needle }: Walk
   const { width, height } = useStageSize(box);
   const theme = useMemo(() => readCanvasTheme(), []);
   const [view, setView] = useState<Viewport | null>(null);
+  const [passLabels, setPassLabels] = useState(true);
   const fitted = useMemo(() => fitViewport(design.width, design.height, width, height, 24), [design.width, design.height, width, height]);
   useEffect(() => setView(null), [width, height]);
   const shown = view ?? fitted;
@@ -43,11 +44,15 @@ export function WalkthroughCanvas({ design, strokes, step, patch, needle }: Walk
           <EditorStage width={width} height={height} units={design.units} view={shown} onViewChange={setView} onPointer={() => undefined} onDoubleClick={() => setView(null)} cursor="default">
             <BlockLayer design={design} view={shown} stageWidth={width} stageHeight={height} theme={theme} showGrid />
             <SeamLayer seams={design.seams} view={shown} theme={theme} patch={patch} selected={NO_SELECTION} />
-            <RouteLayer strokes={strokes} view={shown} theme={theme} needle={needle} />
-            <StepHighlightLayer step={step} strokes={strokes} view={shown} theme={theme} />
+            <RouteLayer strokes={strokes} view={shown} theme={theme} needle={needle} passLabels={false} />
+            <StepHighlightLayer step={step} strokes={strokes} view={shown} theme={theme} width={width} height={height} passLabels={passLabels} />
           </EditorStage>
         )}
       </div>
+      <label className="absolute bottom-2 left-2 flex min-h-12 items-center gap-2 rounded border border-muslin-300 bg-white/90 px-3 text-base">
+        <input type="checkbox" className="h-5 w-5" checked={passLabels} onChange={(e) => setPassLabels(e.target.checked)} />
+        Pass numbers
+      </label>
       {view && (
         <button type="button" onClick={() => setView(null)} className="absolute right-2 top-2 min-h-12 min-w-12 rounded border border-denim-600 bg-white px-3 font-semibold text-denim-700 shadow">
           Fit

@@ -11,9 +11,13 @@ if (root && dataEl) {
   const parsed = lessonDataSchema.safeParse(JSON.parse(dataEl.textContent || 'null'));
   if (parsed.success) {
     const progressUrl = root.dataset['canSave'] === 'true' ? (root.dataset['progressUrl'] ?? null) : null;
+    const studentId = progressUrl ? (root.dataset['studentId'] ?? null) : null;
     const units = root.dataset['viewerUnits'];
     const viewerUnits = units === 'in' || units === 'cm' ? units : undefined;
     root.replaceChildren();
-    createRoot(root).render(<LessonWalkthrough data={parsed.data} progressUrl={progressUrl} viewerUnits={viewerUnits} />);
+    // The island shows the student's place itself, from the same state as the step card (the page's line is for
+    // readers without JavaScript and would go stale as the student moves on).
+    document.querySelector('[data-progress]')?.remove();
+    createRoot(root).render(<LessonWalkthrough data={parsed.data} progressUrl={progressUrl} studentId={studentId} viewerUnits={viewerUnits} />);
   }
 }

@@ -3,7 +3,8 @@ import { designSchema } from '@shared/design/design.schema.ts';
 import { buildWalkthrough } from '@shared/walkthrough/buildWalkthrough.ts';
 import type { RouteStrokeInput } from '@shared/walkthrough/walkthrough.types.ts';
 import { buildPlayback } from '../route/routePlayback.ts';
-import { buildStepSpans, findStepAt } from './stepTimeline.ts';
+import { findStepAt } from '@shared/walkthrough/stepPlayback.ts';
+import { buildStepSpans } from './stepTimeline.ts';
 
 const design = designSchema.parse({ version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [[[0, 0], [3, 4]]] });
 // Lengths chosen from Pythagorean triples (3-4-5, 6-8-10) so every span end is an exact number.
@@ -20,17 +21,15 @@ describe('step spans on the playback', () => {
 
   it('lays the steps end to end along the route', () => {
     expect(w.steps.map((s) => s.kind)).toEqual(['start', 'stitch', 'travel', 'tie-off', 'start', 'stitch', 'tie-off']);
-    expect(spans).toEqual([
-      { start: 0, end: 0 }, { start: 0, end: 5 }, { start: 5, end: 9 }, { start: 9, end: 9 },
-      { start: 9, end: 9 }, { start: 9, end: 19 }, { start: 19, end: 19 },
-    ]);
+    expect(spans.map(({ start, end }) => [start, end])).toEqual([[0, 0], [0, 5], [5, 9], [9, 9], [9, 9], [9, 19], [19, 19]]);
+    expect(spans.map((s) => s.moving)).toEqual([false, true, true, false, false, true, false]);
   });
 
   it('finds the step under a scrubbed needle', () => {
-    expect(findStepAt(w.steps, spans, 0, playback.total)).toBe(0);
-    expect(findStepAt(w.steps, spans, 2.5, playback.total)).toBe(1);
-    expect(findStepAt(w.steps, spans, 5, playback.total)).toBe(2);
-    expect(findStepAt(w.steps, spans, 9, playback.total)).toBe(5);
-    expect(findStepAt(w.steps, spans, 19, playback.total)).toBe(6);
+    expect(findStepAt(spans, 0)).toBe(0);
+    expect(findStepAt(spans, 2.5)).toBe(1);
+    expect(findStepAt(spans, 5)).toBe(2);
+    expect(findStepAt(spans, 9)).toBe(5);
+    expect(findStepAt(spans, 19)).toBe(6);
   });
 });

@@ -12,6 +12,7 @@ describe('walkthrough keys', () => {
     expect(findWalkthroughAction(key('Home'), false)).toBe('first-step');
     expect(findWalkthroughAction(key('End'), false)).toBe('last-step');
     expect(findWalkthroughAction(key('r'), false)).toBe('replay-step');
+    expect(findWalkthroughAction(key('e'), false)).toBe('step-end');
     expect(findWalkthroughAction(key('+'), false)).toBe('faster');
     expect(findWalkthroughAction(key('-'), false)).toBe('slower');
     const listed = new Set(WALKTHROUGH_KEYS.map((k) => k.action));

@@ -1,5 +1,5 @@
 /** What the walkthrough keyboard can do (desktop); every key is listed on screen. */
-export type WalkthroughAction = 'play-pause' | 'next-step' | 'previous-step' | 'first-step' | 'last-step' | 'faster' | 'slower' | 'replay-step';
+export type WalkthroughAction = 'play-pause' | 'next-step' | 'previous-step' | 'first-step' | 'last-step' | 'faster' | 'slower' | 'replay-step' | 'step-end';
 
 export interface WalkthroughKey {
   readonly action: WalkthroughAction;
@@ -9,10 +9,11 @@ export interface WalkthroughKey {
 }
 
 export const WALKTHROUGH_KEYS: readonly WalkthroughKey[] = [
-  { action: 'play-pause', keys: 'Space', label: 'Play or pause this step' },
+  { action: 'play-pause', keys: 'Space', label: 'Play or pause this step (after a step ends: play the next)' },
   { action: 'next-step', keys: '→ or N', label: 'Next step' },
   { action: 'previous-step', keys: '← or P', label: 'Previous step' },
   { action: 'replay-step', keys: 'R', label: 'Replay this step from its start' },
+  { action: 'step-end', keys: 'E', label: 'Jump to the end of this step' },
   { action: 'first-step', keys: 'Home', label: 'First step' },
   { action: 'last-step', keys: 'End', label: 'Last step' },
   { action: 'faster', keys: '+', label: 'Faster' },
@@ -40,6 +41,9 @@ export function findWalkthroughAction(e: { key: string; ctrlKey: boolean; altKey
     case 'r':
     case 'R':
       return 'replay-step';
+    case 'e':
+    case 'E':
+      return 'step-end';
     case 'Home':
       return 'first-step';
     case 'End':

@@ -46,6 +46,8 @@ export const progressSchema = z
     stepIndex: z.number().int().min(0).max(100_000),
     totalSteps: z.number().int().min(0).max(100_000),
     finished: z.boolean().default(false),
+    /** When the student made this move (device clock); re-sent and late saves older than the stored one are ignored. */
+    at: isoInstant.optional(),
   })
   .strict()
   .refine((p) => p.stepIndex <= p.totalSteps, { path: ['stepIndex'], message: 'The step is past the last step.' });

@@ -183,8 +183,8 @@ export function bodyEndpoints(victim: () => TestAccount): BodyEndpoint[] {
       method: 'PUT',
       path: (w) => `/api/lessons/${w.lessonId}/progress`,
       valid: () => ({ stepIndex: 0, totalSteps: 3, finished: false }),
-      fields: { stepIndex: { kind: 'int', min: 0, max: 100_000 }, totalSteps: { kind: 'int', min: 0, max: 100_000 }, finished: { kind: 'bool' } },
-      optional: ['finished'],
+      fields: { stepIndex: { kind: 'int', min: 0, max: 100_000 }, totalSteps: { kind: 'int', min: 0, max: 100_000 }, finished: { kind: 'bool' }, at: { kind: 'datetime' } },
+      optional: ['finished', 'at'],
     },
     { label: 'new design', actor: 'quilter', method: 'POST', path: () => '/api/designs', valid: () => ({ title: 'Valid design', notes: '', design: block() }), fields: { title: { kind: 'title', max: 200 }, notes: { kind: 'text', max: 10_000 }, design: { kind: 'design' } }, optional: ['notes'], limit: DESIGN_LIMIT },
     {

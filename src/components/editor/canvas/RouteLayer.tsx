@@ -15,6 +15,8 @@ export interface RouteLayerProps {
   readonly needle: NeedlePosition | null;
   /** Only this pass at full strength (a walkthrough step); null shows every pass alike. */
   readonly focusPass?: number | null;
+  /** Draw "Pass n" at each pass start (default); the walkthrough places its own labels around its markers. */
+  readonly passLabels?: boolean;
 }
 
 /** How each stroke kind is drawn: the shared visual language (stitching solid, each travel kind its own dash). */
@@ -30,7 +32,7 @@ const MAX_PASS_LABELS = 60;
  * A route on the canvas: strokes styled by kind, direction arrows, pass numbers at each pass start and the needle.
  * Reusable: the workbench's route preview and the student walkthrough both draw routes with it. View only.
  */
-export function RouteLayer({ strokes, view, theme, needle, focusPass = null }: RouteLayerProps) {
+export function RouteLayer({ strokes, view, theme, needle, focusPass = null, passLabels = true }: RouteLayerProps) {
   const px = 1 / view.scale;
   const arrowSpacing = 90 * px;
   const arrows = useMemo(() => strokes.flatMap((s, i) => arrowMarks(s.points, arrowSpacing).map((a) => ({ ...a, kind: s.kind, key: i }))), [strokes, arrowSpacing]);
@@ -97,7 +99,7 @@ export function RouteLayer({ strokes, view, theme, needle, focusPass = null }: R
             />
           );
         })}
-        {labels.length <= MAX_PASS_LABELS && labels.map((l) => (
+        {passLabels && labels.length <= MAX_PASS_LABELS && labels.map((l) => (
           <Label key={l.pass} x={l.point[0]} y={l.point[1]} opacity={focusPass === null || focusPass === l.pass ? 1 : 0.3}>
             <Tag fill={theme.paper} stroke={theme.stitch} strokeWidth={1} strokeScaleEnabled={false} cornerRadius={3 * px} pointerDirection="down" pointerWidth={6 * px} pointerHeight={5 * px} />
             <Text text={`Pass ${l.pass}`} fontSize={12 * px} padding={3 * px} fill={theme.stitch} fontStyle="bold" />

@@ -158,7 +158,7 @@ describe('stored script injection through template titles', () => {
     await screenshot(page, 'security-lesson-student');
     await visitInert(page, '/dashboard');
     await visitInert(page, '/designs');
-    await page.getByText(`${templates[0]!.title} (template v1)`, { exact: true }).first().waitFor();
+    await page.getByRole('link', { name: `${templates[0]!.title} (template v1)`, exact: true }).waitFor(); // the visible one (phones get cards, wider screens the table)
     await visitInert(page, `/designs/${copyId}`);
     // The workbench island hydrated under the policy and konva drew its canvas.
     await page.waitForSelector('[data-testid="block-canvas"] canvas');

@@ -7,12 +7,14 @@ import { formatSize } from '@shared/units/units.ts';
 import type { RouteCheckView } from '../route/routeCheckView.ts';
 import type { NeedlePosition, RouteStroke } from '../route/routePlayback.ts';
 import { BlockLayer } from './canvas/BlockLayer.tsx';
+import { LineLegend } from '../route/LineLegend.tsx';
+import { legendEntries } from '../route/legendEntries.ts';
 import { EditorStage } from './canvas/EditorStage.tsx';
 import { OverlayLayer } from './canvas/OverlayLayer.tsx';
 import { QuiltingLineLayer } from './canvas/QuiltingLineLayer.tsx';
 import { RouteLayer } from './canvas/RouteLayer.tsx';
 import { RulerLayer } from './canvas/RulerLayer.tsx';
-import { SeamLayer } from './canvas/SeamLayer.tsx';
+import { SeamLines } from './canvas/SeamLines.tsx';
 import type { CanvasTheme } from './canvasTheme.ts';
 import { findLinePieces } from './linePieces.ts';
 import type { ToolController } from './useToolController.ts';
@@ -51,7 +53,19 @@ export function BlockCanvas(p: BlockCanvasProps) {
   const selectedLines = useMemo(() => new Set(selected?.target === 'lines' ? selected.indices : []), [selected]);
   const selectedSeams = useMemo(() => new Set(selected?.target === 'seams' ? selected.indices : []), [selected]);
   const pieces = useMemo(() => findLinePieces(design), [design]);
+  const legend = legendEntries({
+    seams: design.seams.length > 0,
+    lines: design.lines.length > 0,
+    lineGroups: pieces && pieces.length > 0 ? Math.max(...pieces) + 1 : 0,
+    looseEnds: (p.check?.oddPointPositions.length ?? 0) > 0,
+    start: design.start !== undefined,
+    finish: design.end !== undefined,
+    widestGap: p.check?.gap != null,
+    routeKinds: p.strokes ? [...new Set(p.strokes.map((s) => s.kind))] : [],
+    needle: p.needle !== null,
+  });
   return (
+    <>
     <div
       ref={p.boxRef}
       className="relative h-[62vh] min-h-[22rem] overflow-hidden rounded border border-muslin-300 bg-muslin-50"
@@ -62,8 +76,9 @@ export function BlockCanvas(p: BlockCanvasProps) {
     >
       {size.width > 0 && (
         <EditorStage width={size.width} height={size.height} units={design.units} view={vp.view} onViewChange={vp.setView} onPointer={ctl.onPointer} onDoubleClick={ctl.onDoubleClick} cursor={ctl.cursor}>
-          <BlockLayer design={design} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} showGrid={p.showGrid} />
-          <SeamLayer seams={design.seams} view={vp.view} theme={theme} patch={p.patch} selected={selectedSeams} />
+          <BlockLayer design={design} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} showGrid={p.showGrid}>
+            <SeamLines seams={design.seams} view={vp.view} theme={theme} patch={p.patch} selected={selectedSeams} />
+          </BlockLayer>
           <QuiltingLineLayer lines={design.lines} view={vp.view} theme={theme} selected={selectedLines} pieceOfLine={pieces} oddPoints={p.check?.oddPointPositions ?? NO_POINTS} start={design.start} end={design.end} ownOrder={p.showOwnOrder ? ctl.ownOrder : NO_ORDER} dimmed={p.strokes !== null} stageWidth={size.width} stageHeight={size.height} />
           {p.strokes && <RouteLayer strokes={p.strokes} view={vp.view} theme={theme} needle={p.needle} />}
           <OverlayLayer view={vp.view} theme={theme} preview={p.preview} snapped={ctl.snapped?.point ?? null} guides={p.guides} gap={p.check?.gap ?? null} />
@@ -71,5 +86,7 @@ export function BlockCanvas(p: BlockCanvasProps) {
         </EditorStage>
       )}
     </div>
+    <LineLegend entries={legend} />
+    </>
   );
 }

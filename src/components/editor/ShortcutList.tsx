@@ -1,17 +1,35 @@
+import { useEffect, useRef } from 'react';
 import { SHORTCUTS } from './shortcuts.ts';
 
 export interface ShortcutListProps {
   readonly onClose: () => void;
 }
 
-/** The visible list of keyboard shortcuts, grouped. */
+/**
+ * The keyboard shortcuts, grouped, as a modal overlay over the workbench: a native <dialog> opened with
+ * showModal(), so the canvas does not move, focus stays inside, and Esc closes it (the browser's own behaviour).
+ */
 export function ShortcutList({ onClose }: ShortcutListProps) {
   const groups = ['Tools', 'Edit', 'View', 'Route'] as const;
+  const dialog = useRef<HTMLDialogElement>(null);
+  useEffect(() => {
+    const el = dialog.current;
+    if (el && !el.open) el.showModal();
+    return () => el?.close();
+  }, []);
   return (
-    <section aria-label="Keyboard shortcuts" className="rounded border border-muslin-300 bg-white p-4 shadow">
+    <dialog
+      ref={dialog}
+      aria-labelledby="shortcut-heading"
+      onClose={onClose}
+      onClick={(e) => {
+        if (e.target === e.currentTarget) onClose(); // a click on the backdrop
+      }}
+      className="m-auto max-h-[85vh] w-[min(40rem,92vw)] overflow-y-auto rounded border border-muslin-300 bg-white p-4 shadow-lg backdrop:bg-indigo-ink/40"
+    >
       <div className="flex items-center justify-between">
-        <h2 className="text-lg font-semibold">Keyboard shortcuts</h2>
-        <button type="button" onClick={onClose} className="underline">Close</button>
+        <h2 id="shortcut-heading" className="text-lg font-semibold">Keyboard shortcuts</h2>
+        <button type="button" onClick={onClose} className="min-h-11 px-2 underline">Close</button>
       </div>
       <div className="mt-2 grid gap-4 sm:grid-cols-2">
         {groups.map((g) => (
@@ -28,6 +46,6 @@ export function ShortcutList({ onClose }: ShortcutListProps) {
           </div>
         ))}
       </div>
-    </section>
+    </dialog>
   );
 }

@@ -107,7 +107,8 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
 
   function onKeyDown(e: KeyboardEvent<HTMLDivElement>) {
     const el = e.target as HTMLElement;
-    if (el.closest('input, select, textarea, [contenteditable="true"]')) return;
+    // Typing in a field, or anything inside an open dialog (Esc there closes the dialog), is not a shortcut.
+    if (el.closest('input, select, textarea, [contenteditable="true"], dialog')) return;
     const action = matchShortcut(e);
     if (!action) return;
     // Backspace first takes back the last corner of a line being drawn; only then does it remove the pick.

@@ -6,7 +6,7 @@ import { readCanvasTheme } from '../editor/canvasTheme.ts';
 import { BlockLayer } from '../editor/canvas/BlockLayer.tsx';
 import { EditorStage } from '../editor/canvas/EditorStage.tsx';
 import { RouteLayer } from '../editor/canvas/RouteLayer.tsx';
-import { SeamLayer } from '../editor/canvas/SeamLayer.tsx';
+import { SeamLines } from '../editor/canvas/SeamLines.tsx';
 import { useStageSize } from '../editor/useStageSize.ts';
 import { fitViewport, type Viewport } from '../editor/viewport.ts';
 import type { NeedlePosition, RouteStroke } from '../route/routePlayback.ts';
@@ -24,7 +24,7 @@ const NO_SELECTION: ReadonlySet<number> = new Set();
 
 /**
  * The replay canvas, built from the workbench's layers: the block and binding band (BlockLayer), the seams with the
- * current step's patch tinted (SeamLayer), the route with what is sewn so far solid and what is to come faded
+ * current step's patch tinted (SeamLines, in the block's layer), the route with what is sewn so far solid and what is to come faded
  * (RouteLayer with the needle), and the current step on top (StepHighlightLayer). Wheel, pinch and touch zoom and
  * pan through EditorStage; "Fit" brings the whole block back.
  */
@@ -42,8 +42,9 @@ export function WalkthroughCanvas({ design, strokes, step, patch, needle }: Walk
       <div ref={box} className="h-full w-full overflow-hidden rounded border border-muslin-300 bg-muslin-50" data-testid="walkthrough-canvas">
         {width > 0 && height > 0 && (
           <EditorStage width={width} height={height} units={design.units} view={shown} onViewChange={setView} onPointer={() => undefined} onDoubleClick={() => setView(null)} cursor="default">
-            <BlockLayer design={design} view={shown} stageWidth={width} stageHeight={height} theme={theme} showGrid />
-            <SeamLayer seams={design.seams} view={shown} theme={theme} patch={patch} selected={NO_SELECTION} />
+            <BlockLayer design={design} view={shown} stageWidth={width} stageHeight={height} theme={theme} showGrid>
+              <SeamLines seams={design.seams} view={shown} theme={theme} patch={patch} selected={NO_SELECTION} />
+            </BlockLayer>
             <RouteLayer strokes={strokes} view={shown} theme={theme} needle={needle} passLabels={false} />
             <StepHighlightLayer step={step} strokes={strokes} view={shown} theme={theme} width={width} height={height} passLabels={passLabels} />
           </EditorStage>

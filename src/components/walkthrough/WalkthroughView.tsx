@@ -1,3 +1,5 @@
+import { LineLegend } from '../route/LineLegend.tsx';
+import { legendEntries } from '../route/legendEntries.ts';
 import { useEffect, useMemo } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
 import { buildWalkthrough } from '@shared/walkthrough/buildWalkthrough.ts';
@@ -92,6 +94,10 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
         </div>
         <div className="flex flex-col gap-4">
           <StepCard step={step} />
+          <details className="rounded border border-muslin-200 bg-white p-3 print:hidden">
+            <summary className="min-h-11 cursor-pointer font-semibold">What the lines and marks mean</summary>
+            <LineLegend entries={legendEntries({ seams: design.seams.length > 0, lines: false, lineGroups: 0, looseEnds: false, start: false, finish: false, widestGap: false, routeKinds: [...new Set(route.map((s) => s.kind))], needle: true })} />
+          </details>
           <div className="flex flex-col gap-2 print:hidden">
             {last && progress.state !== 'off' && (
               <button

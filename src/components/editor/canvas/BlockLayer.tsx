@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Group, Layer, Rect, Shape } from 'react-konva';
 import type { Design } from '@shared/design/design.schema.ts';
 import { bindingBandOf } from '@shared/design/design.schema.ts';
@@ -13,13 +14,15 @@ export interface BlockLayerProps {
   readonly stageHeight: number;
   readonly theme: CanvasTheme;
   readonly showGrid: boolean;
+  /** Drawn over the block in the same Konva layer (the seams), so the stage needs one layer fewer. */
+  readonly children?: ReactNode;
 }
 
 /**
  * The block's fabric, its binding band and the marking grid (whole units, plus halves when there is room).
  * Drawn in design units inside a group carrying the viewport; line widths stay in screen pixels.
  */
-export function BlockLayer({ design, view, stageWidth, stageHeight, theme, showGrid }: BlockLayerProps) {
+export function BlockLayer({ design, view, stageWidth, stageHeight, theme, showGrid, children }: BlockLayerProps) {
   const band = bindingBandOf(design);
   return (
     <Layer listening={false}>
@@ -54,6 +57,7 @@ export function BlockLayer({ design, view, stageWidth, stageHeight, theme, showG
         )}
         <Rect x={0} y={0} width={design.width} height={design.height} stroke={theme.line} strokeWidth={1.5} strokeScaleEnabled={false} />
       </Group>
+      {children}
     </Layer>
   );
 }

@@ -39,13 +39,9 @@ export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
     [asBitmap, groups, theme, oddPoints],
   );
   return (
-    <>
-    {asBitmap && (
-      <Layer listening={false} opacity={dimmed ? 0.35 : 1}>
-        <LineBitmap groups={bitmapGroups} view={view} stageWidth={stageWidth} stageHeight={stageHeight} />
-      </Layer>
-    )}
+    // One Konva layer for the bitmap (dense designs) and the vector marks over it.
     <Layer listening={false} opacity={dimmed ? 0.35 : 1}>
+      {asBitmap && <LineBitmap groups={bitmapGroups} view={view} stageWidth={stageWidth} stageHeight={stageHeight} />}
       <Group x={view.x} y={view.y} scaleX={view.scale} scaleY={view.scale}>
         {!asBitmap && groups.map(([piece, group]) => (
           <Shape
@@ -101,7 +97,6 @@ export function QuiltingLineLayer(props: QuiltingLineLayerProps) {
         })}
       </Group>
     </Layer>
-    </>
   );
 }
 

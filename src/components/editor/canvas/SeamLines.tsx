@@ -1,4 +1,4 @@
-import { Group, Layer, Line, Shape } from 'react-konva';
+import { Group, Line, Shape } from 'react-konva';
 import type { Polyline } from '@shared/geometry/point.ts';
 import type { Patch } from '@shared/layouts/patch.ts';
 import { LINE_STYLES } from '@shared/style/lineStyles.ts';
@@ -6,7 +6,7 @@ import type { CanvasTheme } from '../canvasTheme.ts';
 import type { Viewport } from '../viewport.ts';
 import { tracePolylines } from './drawPolylines.ts';
 
-export interface SeamLayerProps {
+export interface SeamLinesProps {
   readonly seams: readonly Polyline[];
   readonly view: Viewport;
   readonly theme: CanvasTheme;
@@ -16,10 +16,9 @@ export interface SeamLayerProps {
   readonly selected: ReadonlySet<number>;
 }
 
-/** The seam lines of the pieced layout (where stitch-in-the-ditch travel runs): thin and solid, never dashed like travel. View only. */
-export function SeamLayer({ seams, view, theme, patch, selected }: SeamLayerProps) {
+/** The seam lines of the pieced layout (where stitch-in-the-ditch travel runs): thin and solid, never dashed like travel. View only; drawn in the block's layer (BlockLayer's children), which keeps the stage within Konva's recommended 3–5 layers. */
+export function SeamLines({ seams, view, theme, patch, selected }: SeamLinesProps) {
   return (
-    <Layer listening={false}>
       <Group x={view.x} y={view.y} scaleX={view.scale} scaleY={view.scale}>
         {patch && <Line points={patch.polygon.flat()} closed fill={theme.selected} opacity={0.25} stroke={theme.selected} strokeWidth={2} strokeScaleEnabled={false} />}
         <Shape
@@ -46,6 +45,5 @@ export function SeamLayer({ seams, view, theme, patch, selected }: SeamLayerProp
           />
         )}
       </Group>
-    </Layer>
   );
 }

@@ -73,7 +73,8 @@ export async function buildWorld(): Promise<World> {
   );
   const cls = await expectStatus(teacher.client.post('/api/classes', { title: 'Tuesday quilt-along', description: 'Monthly blocks', startsOn: '2027-01-05' }), 201);
   const other = await expectStatus(otherTeacher.client.post('/api/classes', { title: 'Secret winter class', startsOn: '2027-02-01' }), 201);
-  const lesson = (title: string, at: string) => ({ title, releaseAt: at, notes: '**Start** at the *left* edge.', templateVersionId: published.version.id });
+  // confirmed: the released lesson is in the past and both open before the class's start date (teachingDates.ts).
+  const lesson = (title: string, at: string) => ({ title, releaseAt: at, notes: '**Start** at the *left* edge.', templateVersionId: published.version.id, confirmed: true });
   const released = await expectStatus(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, lesson('Lesson 1: the first line', iso(-DAY))), 201);
   const future = await expectStatus(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, lesson('Lesson 2: not yet', iso(30 * DAY))), 201);
   await expectStatus(student.client.post('/api/classes/join', { code: cls.class.joinCode }), 200);

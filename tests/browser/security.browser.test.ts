@@ -51,6 +51,7 @@ beforeAll(async () => {
       releaseAt: new Date(Date.now() - 60_000).toISOString(),
       notes: `Notes ${PAYLOADS[3]} [link](javascript:window.__xss=7) <img src=x onerror=window.__xss=8>`,
       templateVersionId: templates[0]!.versionId,
+      confirmed: true,
     }),
     201,
   );

@@ -54,7 +54,7 @@ describe('dates that do not exist', () => {
     for (const releaseAt of ['2027-02-30T09:00:00Z', '0000-06-01T09:00:00Z', '2027-01-01T09:00:00']) {
       expectField(await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Odd day', releaseAt, templateVersionId: w.versionId }), 'releaseAt');
     }
-    expect((await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Real day', releaseAt: iso(3 * DAY), templateVersionId: w.versionId })).status).toBe(201);
+    expect((await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Real day', releaseAt: iso(3 * DAY), templateVersionId: w.versionId, confirmed: true })).status).toBe(201);
   });
 });
 

@@ -77,8 +77,9 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
     setRowError(null);
     const outcome = await sendJson<{ account: Row }>('PATCH', `/api/admin/accounts/${row.id}`, { role });
     if (!outcome.ok) {
-      setError(outcome.error.message);
-      setRowError({ id: row.id, message: outcome.error.message });
+      // A refusal about this account (the last admin) is shown beside it; anything else above the table.
+      if (outcome.error.code === 'last_admin') setRowError({ id: row.id, message: outcome.error.message });
+      else setError(outcome.error.message);
       await load(searched, page);
       return;
     }

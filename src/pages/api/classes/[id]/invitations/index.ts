@@ -43,7 +43,7 @@ export const POST = (async ({ locals, params, request, url }) => {
     // Nothing is sent: the teacher fixes the list and sends it again, so nobody gets two invitations.
     const named = bad.map((e) => (e === '' ? 'an empty line' : `“${e}”`)).join(', ');
     const message = `${bad.length === 1 ? 'This is' : 'These are'} not ${bad.length === 1 ? 'an e-mail address' : 'e-mail addresses'}: ${named}. Nothing was sent; fix ${bad.length === 1 ? 'it' : 'them'} and send again.`;
-    return problem(400, 'invalid_input', message, { emails: message });
+    return problem(400, 'invalid_input', message, { emails: `${bad.length === 1 ? 'Not an e-mail address' : 'Not e-mail addresses'}: ${named}.` });
   }
   const teacher = await findAccountRowById(db, access.cls.teacher_id);
   if (!teacher) throw new Error(`pages/api/classes/invitations: class ${access.cls.id} has no teacher row`);

@@ -89,12 +89,11 @@ describe('dates', () => {
     expect(past.body.error.message).toMatch(/in the past: students can open the lesson as soon as you save/);
     expect(past.body.error.fields).toHaveProperty('releaseAt');
 
-    // The world's class starts on 2027-01-05; a release on 2026-12-20 comes before it.
-    const early = await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, body('2026-12-20T09:00:00Z'));
-    if (Date.now() < Date.parse('2026-12-20T09:00:00Z')) {
-      expect(early.status).toBe(409);
-      expect(early.body.error.message).toBe('This lesson opens on 2026-12-20, before the class starts on 2027-01-05. Keep it?');
-    }
+    // The world's class starts 31 days from today; a release in 5 days comes before it.
+    const startsOn = (await expectStatus(w.teacher.client.get(`/api/classes/${w.classId}`), 200)).class.startsOn;
+    const early = await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, body(iso(5 * DAY)));
+    expect(early.status).toBe(409);
+    expect(early.body.error.message).toBe(`This lesson opens on ${iso(5 * DAY).slice(0, 10)}, before the class starts on ${startsOn}. Keep it?`);
     const yes = await expectStatus(w.teacher.client.post(`/api/classes/${w.classId}/lessons`, body(iso(-3 * DAY), true)), 201);
     expect(yes.lesson.released).toBe(true);
 

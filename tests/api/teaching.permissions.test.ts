@@ -5,7 +5,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb } from '../helpers/db.ts';
-import { buildWorld, iso, DAY, sendBytes, type World } from './teachingWorld.ts';
+import { buildWorld, daysAhead, iso, DAY, sendBytes, type World } from './teachingWorld.ts';
 
 type Actor = 'anonymous' | 'student' | 'otherStudent' | 'teacher' | 'otherTeacher' | 'admin';
 const ACTORS: Actor[] = ['anonymous', 'student', 'otherStudent', 'teacher', 'otherTeacher', 'admin'];
@@ -35,7 +35,7 @@ const s = (...codes: number[]): Record<Actor, number> => Object.fromEntries(ACTO
 
 const rows: Row[] = [
   { name: 'GET /api/classes', call: (c) => c.get('/api/classes'), expect: s(401, 200, 200, 200, 200, 200) },
-  { name: 'POST /api/classes', call: (c) => c.post('/api/classes', { title: 'New class', startsOn: '2027-03-01' }), expect: s(401, 404, 404, 201, 201, 201) },
+  { name: 'POST /api/classes', call: (c) => c.post('/api/classes', { title: 'New class', startsOn: daysAhead(86) }), expect: s(401, 404, 404, 201, 201, 201) },
   { name: 'GET /api/classes/:id', call: (c) => c.get(`/api/classes/${w.classId}`), expect: s(401, 200, 404, 200, 404, 200) },
   { name: 'PATCH /api/classes/:id', call: (c) => c.patch(`/api/classes/${w.classId}`, { description: 'Monthly blocks, updated' }), expect: s(401, 404, 404, 200, 404, 200) },
   {
@@ -46,7 +46,7 @@ const rows: Row[] = [
   {
     name: 'DELETE /api/classes/:id (a fresh class with a student, for each visitor)',
     call: async (c) => {
-      const fresh = await w.teacher.client.post('/api/classes', { title: 'Matrix class', startsOn: '2027-04-01' });
+      const fresh = await w.teacher.client.post('/api/classes', { title: 'Matrix class', startsOn: daysAhead(117) });
       await w.student.client.post('/api/classes/join', { code: fresh.body.class.joinCode });
       return c.delete(`/api/classes/${fresh.body.class.id}`);
     },
@@ -121,7 +121,7 @@ describe('teaching permission matrix', () => {
     expect((await anonymous.delete(`/api/lessons/${lessonId}`)).status).toBe(401);
     expect((await w.teacher.client.delete(`/api/lessons/${lessonId}`)).status).toBe(204);
 
-    const cls = await w.teacher.client.post('/api/classes', { title: 'Short-lived', startsOn: '2027-04-01' });
+    const cls = await w.teacher.client.post('/api/classes', { title: 'Short-lived', startsOn: daysAhead(117) });
     for (const a of ['student', 'otherStudent', 'otherTeacher'] as const) expect((await w[a].client.delete(`/api/classes/${cls.body.class.id}`)).status).toBe(404);
     expect((await w.admin.client.delete(`/api/classes/${cls.body.class.id}`)).status).toBe(204);
 

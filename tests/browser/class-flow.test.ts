@@ -7,6 +7,7 @@ import sharp from 'sharp';
 import type { Locator } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEFAULT_PASSWORD, createAccount, uniqueEmail, type TestAccount } from '../helpers/accounts.ts';
+import { daysAhead } from '../api/teachingWorld.ts';
 import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
 import { closeTestDb } from '../helpers/db.ts';
 import { linksIn, waitForMail } from '../helpers/mail.ts';
@@ -72,7 +73,7 @@ describe('teacher → student → teacher', () => {
     await t.waitForURL('**/classes/new');
     await t.getByLabel('Title').fill(classTitle);
     await t.getByLabel('Description').fill('One block a month, quilted along a planned route.');
-    await t.getByLabel('Start date').fill('2027-01-05');
+    await t.getByLabel('Start date').fill(daysAhead(31));
     await t.getByRole('button', { name: 'Create class' }).click();
     await t.waitForURL(/\/classes\/[0-9a-f-]{36}$/);
     const classUrl = t.url();

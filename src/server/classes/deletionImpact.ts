@@ -23,6 +23,6 @@ export function describeLessonDeletion(c: LessonDeletionCounts, released: boolea
       ? 'No students are enrolled, so nobody loses access.'
       : released
         ? `${count(c.students, 'student loses', 'students lose')} access to this lesson.`
-        : `It is not released yet, so the ${count(c.students, 'student', 'students')} in the class have not seen it.`;
+        : 'It is not released yet, so no student has seen it.';
   return `${who}${progressAndPhotos(c.studentsWithProgress, c.photos)} This cannot be undone.`;
 }

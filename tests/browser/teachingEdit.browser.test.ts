@@ -156,4 +156,24 @@ describe('a teacher edits and deletes a lesson', () => {
     await page.waitForURL((u) => u.pathname === '/classes');
     expect((await expectStatus(w.student.client.get('/api/classes'), 200)).enrolled).toEqual([]);
   });
+
+  it('a new class starting last week is asked about, then created', async () => {
+    const page = browser.page;
+    await signInAs(w.teacher);
+    for (const size of SIZES) {
+      await page.setViewportSize(size);
+      await page.goto('/classes/new');
+      await expectNoSidewaysScroll();
+      await screenshot(page, `teaching-new-class-${size.name}`);
+    }
+    await page.setViewportSize({ width: 1440, height: 900 });
+    const lastWeek = new Date(Date.now() - 7 * 24 * 60 * 60 * 1000).toISOString().slice(0, 10);
+    await page.getByLabel('Title').fill('Catch-up circle');
+    await page.getByLabel('Start date').fill(lastWeek);
+    await page.getByRole('button', { name: 'Create class' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Check the date' });
+    expect(await dialog.locator('[data-confirm-message]').textContent()).toBe(`The start date ${lastWeek} is in the past. Keep it?`);
+    await dialog.getByRole('button', { name: 'Yes, keep this date' }).click();
+    await page.getByRole('heading', { level: 1, name: 'Catch-up circle' }).waitFor();
+  });
 });

@@ -13,6 +13,8 @@ export const ERROR_CODES = [
   'forbidden_origin',
   'method_not_allowed',
   'conflict',
+  'needs_confirmation',
+  'wrong_account',
   'invalid_credentials',
   'invalid_token',
   'rate_limited',

@@ -68,4 +68,30 @@ describe('admin accounts', () => {
       if (otherIds.length) await db.updateTable('account').set({ role: 'admin' }).where('id', 'in', otherIds).execute();
     }
   });
+
+  it('two admins demoting each other at the same moment: one wins, one is refused, an admin remains (the server decides under a lock)', async () => {
+    const db = testDb();
+    const others = (await db.selectFrom('account').select('id').where('role', '=', 'admin').execute()).map((o) => o.id);
+    try {
+      if (others.length) await db.updateTable('account').set({ role: 'teacher' }).where('id', 'in', others).execute();
+      for (let round = 0; round < 5; round += 1) {
+        const [a, b] = await Promise.all([createAccount({ role: 'admin' }), createAccount({ role: 'admin' })]);
+        const [ra, rb] = await Promise.all([a.client.patch(`/api/admin/accounts/${b.id}`, { role: 'quilter' }), b.client.patch(`/api/admin/accounts/${a.id}`, { role: 'quilter' })]);
+        // The loser is refused as the last admin (409), or, when the winner's change landed before the loser's
+        // request was even read, as no longer an admin (404: roles take effect on the next request).
+        const refused = ra.status === 200 ? rb : ra;
+        expect([ra.status, rb.status]).toContain(200);
+        expect([404, 409]).toContain(refused.status);
+        if (refused.status === 409) {
+          expect(refused.body.error.code).toBe('last_admin');
+          expect(refused.body.error.message).toMatch(/^This is the only admin account, and there must always be one admin so that someone can change roles\./);
+        }
+        const left = await db.selectFrom('account').select('id').where('role', '=', 'admin').execute();
+        expect(left).toHaveLength(1);
+        await db.updateTable('account').set({ role: 'quilter' }).where('id', 'in', [a.id, b.id]).execute();
+      }
+    } finally {
+      if (others.length) await db.updateTable('account').set({ role: 'admin' }).where('id', 'in', others).execute();
+    }
+  });
 });

@@ -108,7 +108,7 @@ describe('invitations', () => {
 describe('lesson release e-mails', () => {
   it('go out once per student when a lesson opens, however often the sweep runs', async () => {
     const lesson = await expectStatus(
-      w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Lesson 3: the release test', releaseAt: iso(DAY), templateVersionId: w.versionId }),
+      w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Lesson 3: the release test', releaseAt: iso(DAY), templateVersionId: w.versionId, confirmed: true }),
       201,
     );
     await expectStatus(w.admin.client.post('/api/lessons/release-sweep'), 200);
@@ -116,7 +116,7 @@ describe('lesson release e-mails', () => {
     const rows = () => testDb().selectFrom('email_message').select(['id', 'status']).where('dedupe_key', '=', key).execute();
     expect(await rows()).toHaveLength(0);
 
-    await expectStatus(w.teacher.client.patch(`/api/lessons/${lesson.lesson.id}`, { releaseAt: iso(-60_000) }), 200);
+    await expectStatus(w.teacher.client.patch(`/api/lessons/${lesson.lesson.id}`, { releaseAt: iso(-60_000), confirmed: true }), 200);
     await expectStatus(w.admin.client.post('/api/lessons/release-sweep'), 200);
     const mail = await waitForMail(w.student.email, { subject: 'Lesson 3: the release test' });
     expect(mail.text).toContain(`/classes/${w.classId}/lessons/${lesson.lesson.id}`);

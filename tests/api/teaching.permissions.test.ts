@@ -5,7 +5,7 @@ import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { TestClient } from '../helpers/client.ts';
 import { closeTestDb } from '../helpers/db.ts';
-import { buildWorld, iso, DAY, sendBytes, type World } from './teachingWorld.ts';
+import { buildWorld, daysAhead, iso, DAY, sendBytes, type World } from './teachingWorld.ts';
 
 type Actor = 'anonymous' | 'student' | 'otherStudent' | 'teacher' | 'otherTeacher' | 'admin';
 const ACTORS: Actor[] = ['anonymous', 'student', 'otherStudent', 'teacher', 'otherTeacher', 'admin'];
@@ -35,13 +35,27 @@ const s = (...codes: number[]): Record<Actor, number> => Object.fromEntries(ACTO
 
 const rows: Row[] = [
   { name: 'GET /api/classes', call: (c) => c.get('/api/classes'), expect: s(401, 200, 200, 200, 200, 200) },
-  { name: 'POST /api/classes', call: (c) => c.post('/api/classes', { title: 'New class', startsOn: '2027-03-01' }), expect: s(401, 404, 404, 201, 201, 201) },
+  { name: 'POST /api/classes', call: (c) => c.post('/api/classes', { title: 'New class', startsOn: daysAhead(86) }), expect: s(401, 404, 404, 201, 201, 201) },
   { name: 'GET /api/classes/:id', call: (c) => c.get(`/api/classes/${w.classId}`), expect: s(401, 200, 404, 200, 404, 200) },
   { name: 'PATCH /api/classes/:id', call: (c) => c.patch(`/api/classes/${w.classId}`, { description: 'Monthly blocks, updated' }), expect: s(401, 404, 404, 200, 404, 200) },
+  {
+    name: 'PATCH /api/classes/:id (start moved into the past, not yet confirmed)',
+    call: (c) => c.patch(`/api/classes/${w.classId}`, { startsOn: new Date(Date.now() - 10 * DAY).toISOString().slice(0, 10) }),
+    expect: s(401, 404, 404, 409, 404, 409),
+  },
+  {
+    name: 'DELETE /api/classes/:id (a fresh class with a student, for each visitor)',
+    call: async (c) => {
+      const fresh = await w.teacher.client.post('/api/classes', { title: 'Matrix class', startsOn: daysAhead(117) });
+      await w.student.client.post('/api/classes/join', { code: fresh.body.class.joinCode });
+      return c.delete(`/api/classes/${fresh.body.class.id}`);
+    },
+    expect: s(401, 404, 404, 204, 404, 204),
+  },
   { name: 'GET /api/classes/:id/lessons', call: (c) => c.get(`/api/classes/${w.classId}/lessons`), expect: s(401, 200, 404, 200, 404, 200) },
   {
     name: 'POST /api/classes/:id/lessons',
-    call: (c) => c.post(`/api/classes/${w.classId}/lessons`, { title: 'Extra', releaseAt: iso(60 * DAY), templateVersionId: w.versionId }),
+    call: (c) => c.post(`/api/classes/${w.classId}/lessons`, { title: 'Extra', releaseAt: iso(60 * DAY), templateVersionId: w.versionId, confirmed: true }),
     expect: s(401, 404, 404, 201, 404, 201),
   },
   { name: 'POST /api/classes/:id/join-code', call: (c) => c.post(`/api/classes/${w.classId}/join-code`), expect: s(401, 404, 404, 200, 404, 200) },
@@ -53,6 +67,19 @@ const rows: Row[] = [
   { name: 'GET /api/lessons/:released', call: (c) => c.get(`/api/lessons/${w.releasedLessonId}`), expect: s(401, 200, 404, 200, 404, 200) },
   { name: 'GET /api/lessons/:future', call: (c) => c.get(`/api/lessons/${w.futureLessonId}`), expect: s(401, 404, 404, 200, 404, 200) },
   { name: 'PATCH /api/lessons/:id', call: (c) => c.patch(`/api/lessons/${w.releasedLessonId}`, { notes: 'Start at the *left* edge.' }), expect: s(401, 404, 404, 200, 404, 200) },
+  {
+    name: 'PATCH /api/lessons/:id (release moved into the past, not yet confirmed)',
+    call: (c) => c.patch(`/api/lessons/${w.futureLessonId}`, { releaseAt: iso(-DAY) }),
+    expect: s(401, 404, 404, 409, 404, 409),
+  },
+  {
+    name: 'DELETE /api/lessons/:id (a fresh lesson for each visitor)',
+    call: async (c) => {
+      const fresh = await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Matrix lesson', releaseAt: iso(40 * DAY), templateVersionId: w.versionId, confirmed: true });
+      return c.delete(`/api/lessons/${fresh.body.lesson.id}`);
+    },
+    expect: s(401, 404, 404, 204, 404, 204),
+  },
   { name: 'GET /api/lessons/:id/progress', call: (c) => c.get(`/api/lessons/${w.releasedLessonId}/progress`), expect: s(401, 200, 404, 404, 404, 404) },
   { name: 'PUT /api/lessons/:id/progress', call: (c) => c.put(`/api/lessons/${w.releasedLessonId}/progress`, { stepIndex: 2, totalSteps: 5 }), expect: s(401, 200, 404, 404, 404, 404) },
   { name: 'PUT /api/lessons/:future/progress', call: (c) => c.put(`/api/lessons/${w.futureLessonId}/progress`, { stepIndex: 0, totalSteps: 5 }), expect: s(401, 404, 404, 404, 404, 404) },
@@ -88,13 +115,13 @@ describe('teaching permission matrix', () => {
   }
 
   it('destructive endpoints: only the teacher or an admin deletes a lesson or class; others get 404', async () => {
-    const extra = await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'To delete', releaseAt: iso(-DAY), templateVersionId: w.versionId });
+    const extra = await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'To delete', releaseAt: iso(-DAY), templateVersionId: w.versionId, confirmed: true });
     const lessonId = extra.body.lesson.id;
     for (const a of ['student', 'otherStudent', 'otherTeacher'] as const) expect((await w[a].client.delete(`/api/lessons/${lessonId}`)).status).toBe(404);
     expect((await anonymous.delete(`/api/lessons/${lessonId}`)).status).toBe(401);
     expect((await w.teacher.client.delete(`/api/lessons/${lessonId}`)).status).toBe(204);
 
-    const cls = await w.teacher.client.post('/api/classes', { title: 'Short-lived', startsOn: '2027-04-01' });
+    const cls = await w.teacher.client.post('/api/classes', { title: 'Short-lived', startsOn: daysAhead(117) });
     for (const a of ['student', 'otherStudent', 'otherTeacher'] as const) expect((await w[a].client.delete(`/api/classes/${cls.body.class.id}`)).status).toBe(404);
     expect((await w.admin.client.delete(`/api/classes/${cls.body.class.id}`)).status).toBe(204);
 

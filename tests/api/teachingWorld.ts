@@ -42,6 +42,9 @@ export async function saveRoute(designId: string, designVersion: number, lineY: 
 
 export const DAY = 24 * 60 * 60 * 1000;
 export const iso = (offsetMs: number) => new Date(Date.now() + offsetMs).toISOString();
+/** A class start date `days` from today ("YYYY-MM-DD"): fixed dates would turn into past dates, which the API asks
+ *  about (409) and, a year on, refuses (src/server/classes/teachingDates.ts). */
+export const daysAhead = (days: number) => iso(days * DAY).slice(0, 10);
 
 export interface World {
   teacher: TestAccount;
@@ -71,9 +74,10 @@ export async function buildWorld(): Promise<World> {
     teacher.client.post('/api/templates', { designId, title: 'Heron ribbon block', description: 'One line across', difficulty: 'beginner', motifs: ['straight lines'], visibility: 'class' }),
     201,
   );
-  const cls = await expectStatus(teacher.client.post('/api/classes', { title: 'Tuesday quilt-along', description: 'Monthly blocks', startsOn: '2027-01-05' }), 201);
-  const other = await expectStatus(otherTeacher.client.post('/api/classes', { title: 'Secret winter class', startsOn: '2027-02-01' }), 201);
-  const lesson = (title: string, at: string) => ({ title, releaseAt: at, notes: '**Start** at the *left* edge.', templateVersionId: published.version.id });
+  const cls = await expectStatus(teacher.client.post('/api/classes', { title: 'Tuesday quilt-along', description: 'Monthly blocks', startsOn: daysAhead(31) }), 201);
+  const other = await expectStatus(otherTeacher.client.post('/api/classes', { title: 'Secret winter class', startsOn: daysAhead(58) }), 201);
+  // confirmed: the released lesson is in the past and both open before the class's start date (teachingDates.ts).
+  const lesson = (title: string, at: string) => ({ title, releaseAt: at, notes: '**Start** at the *left* edge.', templateVersionId: published.version.id, confirmed: true });
   const released = await expectStatus(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, lesson('Lesson 1: the first line', iso(-DAY))), 201);
   const future = await expectStatus(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, lesson('Lesson 2: not yet', iso(30 * DAY))), 201);
   await expectStatus(student.client.post('/api/classes/join', { code: cls.class.joinCode }), 200);

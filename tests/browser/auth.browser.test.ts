@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { DEFAULT_PASSWORD, createAccount, uniqueEmail } from '../helpers/accounts.ts';
 import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
-import { closeTestDb } from '../helpers/db.ts';
+import { closeTestDb, testDb } from '../helpers/db.ts';
 import { finishSignUpFromMail } from '../helpers/signUpFlow.ts';
 
 let browser: TestBrowser;
@@ -83,8 +83,32 @@ describe('account flow in the browser', () => {
     await page.getByRole('searchbox', { name: 'Search by name or e-mail' }).fill(member.displayName);
     await page.getByRole('button', { name: 'Search' }).click();
     await page.getByRole('combobox', { name: `Role of ${member.displayName}` }).selectOption('teacher');
+    // Nothing changes until the admin says yes to a question in plain words.
+    const question = page.getByRole('group', { name: /^Make Marlowe Stitch/ });
+    expect(await question.textContent()).toContain(`Make ${member.displayName} a teacher? A teacher also publishes templates and runs classes.`);
+    expect((await testDb().selectFrom('account').select('role').where('id', '=', member.id).executeTakeFirstOrThrow()).role).toBe('quilter');
+    await screenshot(page, '06-admin-accounts-question');
+    await question.getByRole('button', { name: `Yes, make ${member.displayName} a teacher` }).click();
     await page.getByRole('status').filter({ hasText: 'is now a teacher' }).waitFor();
     await screenshot(page, '06-admin-accounts');
+
+    // The only admin cannot step down: the refusal says why, beside the account. (Other admins are made teachers
+    // for the moment and restored after, as in tests/api/admin.test.ts.)
+    const db = testDb();
+    const others = (await db.selectFrom('account').select('id').where('role', '=', 'admin').where('id', '!=', admin.id).execute()).map((o) => o.id);
+    try {
+      if (others.length) await db.updateTable('account').set({ role: 'teacher' }).where('id', 'in', others).execute();
+      await page.getByRole('searchbox', { name: 'Search by name or e-mail' }).fill(admin.email);
+      await page.getByRole('button', { name: 'Search' }).click();
+      await page.getByRole('combobox', { name: 'Role of Juniper Admin' }).selectOption('teacher');
+      await page.getByRole('button', { name: 'Yes, make Juniper Admin a teacher' }).click();
+      const why = 'This is the only admin account, and there must always be one admin so that someone can change roles. Make someone else an admin first.';
+      await page.locator(`#role-error-${admin.id}`).filter({ hasText: why }).waitFor();
+      expect(await page.getByRole('combobox', { name: 'Role of Juniper Admin' }).inputValue()).toBe('admin');
+      await screenshot(page, '06-admin-accounts-last-admin');
+    } finally {
+      if (others.length) await db.updateTable('account').set({ role: 'admin' }).where('id', 'in', others).execute();
+    }
   });
 
   it('shows the home page at phone and desktop widths, with a skip link first in the Tab order', async () => {

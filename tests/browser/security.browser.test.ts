@@ -10,6 +10,7 @@ import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../
 import { closeTestDb } from '../helpers/db.ts';
 import { testEnv } from '../helpers/env.ts';
 import { block } from '../api/designFixtures.ts';
+import { daysAhead } from '../api/teachingWorld.ts';
 
 const PAYLOADS = [
   '$& onload=window.__xss=1 x',
@@ -43,7 +44,7 @@ beforeAll(async () => {
     const t = await ok(teacher.client.post('/api/templates', { designId: d.design.id, title, description: `About ${title}`, difficulty: 'beginner', visibility: 'public' }), 201);
     templates.push({ id: t.template.id, title: t.version.title, versionId: t.version.id });
   }
-  const cls = await ok(teacher.client.post('/api/classes', { title: `Class ${PAYLOADS[0]}`, startsOn: '2027-05-04' }), 201);
+  const cls = await ok(teacher.client.post('/api/classes', { title: `Class ${PAYLOADS[0]}`, startsOn: daysAhead(150) }), 201);
   classId = cls.class.id;
   const lesson = await ok(
     teacher.client.post(`/api/classes/${classId}/lessons`, {
@@ -51,6 +52,7 @@ beforeAll(async () => {
       releaseAt: new Date(Date.now() - 60_000).toISOString(),
       notes: `Notes ${PAYLOADS[3]} [link](javascript:window.__xss=7) <img src=x onerror=window.__xss=8>`,
       templateVersionId: templates[0]!.versionId,
+      confirmed: true,
     }),
     201,
   );

@@ -1,5 +1,5 @@
 import { formatDate } from '@shared/format/dates.ts';
-import { useEffect, useState, type FormEvent } from 'react';
+import { useEffect, useRef, useState, type FormEvent } from 'react';
 import { FormAlert } from '../ui/FormAlert.tsx';
 import { buttonClass } from '../ui/SubmitButton.tsx';
 import { sendJson } from '../ui/submitJson.ts';
@@ -23,6 +23,20 @@ interface Page {
 const ROLES: Role[] = ['quilter', 'teacher', 'admin'];
 const PAGE_SIZE = 20;
 
+/** What a role may do, for the question before a change. */
+const ROLE_MEANS: Record<Role, string> = {
+  quilter: 'draws designs and joins classes',
+  teacher: 'also publishes templates and runs classes',
+  admin: 'also changes roles and manages every class',
+};
+const article = (role: Role) => (role === 'admin' ? 'an' : 'a');
+
+/** The question before a role change, in plain words (what the person gains or loses). */
+export function roleChangeQuestion(name: string, from: Role, to: Role): string {
+  const keeps = from === 'teacher' && to === 'quilter' ? ' Their classes and templates stay; admins can manage the classes.' : '';
+  return `Make ${name} ${article(to)} ${to}? ${article(to) === 'an' ? 'An' : 'A'} ${to} ${ROLE_MEANS[to]}.${keeps}`;
+}
+
 /** Admin table: search accounts (GET /api/admin/accounts) and change roles (PATCH /api/admin/accounts/:id). */
 export default function AdminAccounts({ currentAccountId }: { currentAccountId: string }) {
   const [query, setQuery] = useState('');
@@ -31,6 +45,14 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
   const [data, setData] = useState<Page | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
+  /** A role change waiting for the admin's yes. */
+  const [pending, setPending] = useState<{ row: Row; role: Role } | null>(null);
+  /** A refusal shown beside the account it is about (e.g. the last admin). */
+  const [rowError, setRowError] = useState<{ id: string; message: string } | null>(null);
+  const confirmRef = useRef<HTMLButtonElement>(null);
+  useEffect(() => {
+    if (pending) confirmRef.current?.focus();
+  }, [pending]);
 
   async function load(q: string, p: number) {
     const params = new URLSearchParams({ q, page: String(p), pageSize: String(PAGE_SIZE) });
@@ -51,10 +73,14 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
   }
 
   async function changeRole(row: Row, role: Role) {
+    setPending(null);
     setNotice(null);
+    setRowError(null);
     const outcome = await sendJson<{ account: Row }>('PATCH', `/api/admin/accounts/${row.id}`, { role });
     if (!outcome.ok) {
-      setError(outcome.error.message);
+      // A refusal about this account (the last admin) is shown beside it; anything else above the table.
+      if (outcome.error.code === 'last_admin') setRowError({ id: row.id, message: outcome.error.message });
+      else setError(outcome.error.message);
       await load(searched, page);
       return;
     }
@@ -86,6 +112,21 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
       </form>
       <FormAlert tone="error" message={error} />
       <FormAlert tone="success" message={notice} />
+      {pending && (
+        <div role="group" aria-labelledby="role-question" className="flex flex-col gap-3 rounded-lg border border-denim-500 bg-white p-4">
+          <p id="role-question" className="font-semibold">
+            {roleChangeQuestion(pending.row.displayName, pending.row.role, pending.role)}
+          </p>
+          <div className="flex flex-wrap gap-3">
+            <button type="button" ref={confirmRef} className={buttonClass.primary} onClick={() => void changeRole(pending.row, pending.role)}>
+              Yes, make {pending.row.displayName} {article(pending.role)} {pending.role}
+            </button>
+            <button type="button" className={buttonClass.quiet} onClick={() => setPending(null)}>
+              Cancel
+            </button>
+          </div>
+        </div>
+      )}
       <div className="overflow-x-auto rounded-lg border border-muslin-200 bg-white">
         <table className="w-full min-w-[36rem] text-left">
           <caption className="sr-only">Accounts{data ? `, ${data.total} found` : ''}</caption>
@@ -109,8 +150,13 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
                 <td className="px-3 py-2">
                   <select
                     aria-label={`Role of ${row.displayName}`}
-                    value={row.role}
-                    onChange={(e) => void changeRole(row, e.target.value as Role)}
+                    aria-describedby={rowError?.id === row.id ? `role-error-${row.id}` : undefined}
+                    value={pending?.row.id === row.id ? pending.role : row.role}
+                    onChange={(e) => {
+                      setRowError(null);
+                      const role = e.target.value as Role;
+                      setPending(role === row.role ? null : { row, role });
+                    }}
                     className="rounded-md border border-muslin-300 bg-white px-2 py-1"
                   >
                     {ROLES.map((r) => (
@@ -119,6 +165,11 @@ export default function AdminAccounts({ currentAccountId }: { currentAccountId: 
                       </option>
                     ))}
                   </select>
+                  {rowError?.id === row.id && (
+                    <p id={`role-error-${row.id}`} className="mt-1 text-sm font-semibold text-madder-600">
+                      {rowError.message}
+                    </p>
+                  )}
                 </td>
               </tr>
             ))}

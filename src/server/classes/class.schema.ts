@@ -12,12 +12,15 @@ const classFields = {
   priceCents: z.number().int().min(0).max(10_000_000).nullable(),
   currency: z.string().regex(/^[A-Z]{3}$/, 'A three-letter currency code, e.g. USD.').nullable(),
 };
+/** The teacher's yes to a date the server asked about (teachingDates.ts: in the past, or before the class starts). */
+const confirmed = z.boolean().default(false);
 export const createClassSchema = z
-  .object({ ...classFields, description: classFields.description.default(''), priceCents: classFields.priceCents.default(null), currency: classFields.currency.default(null) })
+  .object({ ...classFields, description: classFields.description.default(''), priceCents: classFields.priceCents.default(null), currency: classFields.currency.default(null), confirmed })
   .strict();
 // Written out, not createClassSchema.partial(): zod would fill the defaults and overwrite fields left out.
 export const updateClassSchema = z
   .object(Object.fromEntries(Object.entries(classFields).map(([k, v]) => [k, v.optional()])) as { [K in keyof typeof classFields]: z.ZodOptional<(typeof classFields)[K]> })
+  .extend({ confirmed })
   .strict();
 
 export const NOTES_MAX = 20_000;
@@ -27,17 +30,23 @@ const lessonFields = {
   notes: z.string().max(NOTES_MAX, `At most ${NOTES_MAX} characters.`),
   templateVersionId: z.uuid('Choose a template version.'),
 };
-export const createLessonSchema = z.object({ ...lessonFields, notes: lessonFields.notes.default('') }).strict();
+export const createLessonSchema = z.object({ ...lessonFields, notes: lessonFields.notes.default(''), confirmed }).strict();
 export const updateLessonSchema = z
   .object(Object.fromEntries(Object.entries(lessonFields).map(([k, v]) => [k, v.optional()])) as { [K in keyof typeof lessonFields]: z.ZodOptional<(typeof lessonFields)[K]> })
+  .extend({ confirmed })
   .strict();
 
 export const INVITATIONS_PER_REQUEST = 50;
+/** Addresses are checked one by one after this (`badAddresses`), so the answer can name every one that is wrong. */
 export const inviteSchema = z
   .object({
-    emails: z.array(z.email('Not an e-mail address.').max(254)).min(1, 'Add at least one e-mail address.').max(INVITATIONS_PER_REQUEST, `At most ${INVITATIONS_PER_REQUEST} at once.`),
+    emails: z.array(z.string().trim().max(254, 'At most 254 characters.')).min(1, 'Add at least one e-mail address.').max(INVITATIONS_PER_REQUEST, `At most ${INVITATIONS_PER_REQUEST} at once.`),
   })
   .strict();
+
+const emailAddress = z.email();
+/** The entries that are not e-mail addresses, in the order typed (empty → all good). */
+export const badAddresses = (emails: readonly string[]): string[] => emails.filter((e) => !emailAddress.safeParse(e).success);
 
 export const joinSchema = z.object({ code: z.string().trim().min(4).max(32) }).strict();
 

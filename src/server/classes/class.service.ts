@@ -6,14 +6,15 @@ import { err, ok, type Result } from '@shared/result.ts';
 import type { SessionUser } from '../auth/session.ts';
 import type { createClassSchema, createLessonSchema, updateClassSchema, updateLessonSchema } from './class.schema.ts';
 import { findVersionAccess } from '../templates/template.repository.ts';
-import { enrollStudent, findClassByJoinCode, insertClass, insertLesson, updateClassRow, updateLessonRow } from './class.repository.ts';
+import { enrollStudent, findClassByJoinCode, findClassRow, insertClass, insertLesson, updateClassRow, updateLessonRow } from './class.repository.ts';
 import { generateJoinCode, normalizeJoinCode } from './joinCode.ts';
+import { checkClassStart, checkLessonRelease, type DateProblem } from './teachingDates.ts';
 
 const UNIQUE_VIOLATION = '23505';
 const isUniqueViolation = (e: unknown) => typeof e === 'object' && e !== null && (e as { code?: unknown }).code === UNIQUE_VIOLATION;
 
 /** Creates a class with a fresh join code (a collision, ~1 in 10^11, just draws again). */
-export async function createClass(db: Kysely<Database>, teacherId: string, input: z.output<typeof createClassSchema>): Promise<string> {
+export async function createClass(db: Kysely<Database>, teacherId: string, input: Omit<z.output<typeof createClassSchema>, 'confirmed'>): Promise<string> {
   for (let attempt = 0; ; attempt += 1) {
     try {
       return await insertClass(db, {
@@ -57,7 +58,7 @@ export async function canUseTemplateVersion(db: Kysely<Database>, teacherId: str
   return row.visibility === 'public' || row.owner_id === teacherId || row.owner_id === user.id || user.role === 'admin';
 }
 
-export async function createLesson(db: Kysely<Database>, classId: string, input: z.output<typeof createLessonSchema>): Promise<string> {
+export async function createLesson(db: Kysely<Database>, classId: string, input: Omit<z.output<typeof createLessonSchema>, 'confirmed'>): Promise<string> {
   return insertLesson(db, { classId, title: input.title, releaseAt: new Date(input.releaseAt), notesMd: input.notes, templateVersionId: input.templateVersionId });
 }
 
@@ -68,6 +69,26 @@ export async function updateLesson(db: Kysely<Database>, lessonId: string, input
     ...(input.notes !== undefined && { notesMd: input.notes }),
     ...(input.templateVersionId !== undefined && { templateVersionId: input.templateVersionId }),
   });
+}
+
+/** The start date of a new class, or a changed one (`currentStartsOn`: the stored date; the same date asks nothing). */
+export function checkClassDates(input: { startsOn?: string | undefined; confirmed: boolean }, currentStartsOn?: string, now = new Date()): Result<void, DateProblem> {
+  if (input.startsOn === undefined || input.startsOn === currentStartsOn) return ok(undefined);
+  return checkClassStart(input.startsOn, now, input.confirmed);
+}
+
+/** The release of a new lesson, or a changed one (`currentReleaseAt`: the stored instant), against its class's start. */
+export async function checkLessonDates(
+  db: Kysely<Database>,
+  classId: string,
+  input: { releaseAt?: string | undefined; confirmed: boolean },
+  currentReleaseAt?: Date,
+  now = new Date(),
+): Promise<Result<void, DateProblem>> {
+  if (input.releaseAt === undefined || Date.parse(input.releaseAt) === currentReleaseAt?.getTime()) return ok(undefined);
+  const cls = await findClassRow(db, classId);
+  if (!cls) throw new Error(`server/classes/class.service: class ${classId} vanished while its lesson was checked`);
+  return checkLessonRelease(input.releaseAt, cls.starts_on_text, now, input.confirmed);
 }
 
 export type JoinError = { kind: 'unknown-code' } | { kind: 'own-class' };

@@ -65,16 +65,21 @@ export async function inspectInvitation(db: Kysely<Database>, token: string, now
   return ok({ invitationId: row.id, classId: row.class_id, classTitle: row.title, teacherId: row.teacher_id, teacherName: row.display_name, email: row.email, expiresAt: row.expires_at });
 }
 
-export type AcceptProblem = InvitationProblem | { kind: 'own-class' };
+export type AcceptProblem = InvitationProblem | { kind: 'own-class' } | { kind: 'other-account'; invited: string; signedInAs: string };
+
+/** True when the signed-in account is the one the invitation went to (addresses compare without case, as accounts do). */
+export const isInvitedAccount = (invitedEmail: string, user: Pick<SessionUser, 'email'>): boolean => invitedEmail.trim().toLowerCase() === user.email.trim().toLowerCase();
 
 /**
  * Uses the invitation for the signed-in account: marks it used (once — a conditional UPDATE, so two tabs cannot
- * both use it) and enrols the account. The link is the credential: any signed-in account may accept it.
+ * both use it) and enrols the account. The invitation is bound to its address: only the account with that e-mail
+ * may accept it (anyone else who got hold of the link is told to sign in as the invited address).
  */
 export async function acceptInvitation(db: Kysely<Database>, user: SessionUser, token: string, now = new Date()): Promise<Result<{ classId: string }, AcceptProblem>> {
   const open = await inspectInvitation(db, token, now);
   if (!open.ok) return open;
   if (open.value.teacherId === user.id) return err({ kind: 'own-class' });
+  if (!isInvitedAccount(open.value.email, user)) return err({ kind: 'other-account', invited: open.value.email, signedInAs: user.email });
   return inTransaction(db, async (trx) => {
     if (!(await markInvitationUsed(trx, open.value.invitationId, user.id, now))) return err({ kind: 'used' as const, usedAt: now });
     await enrollStudent(trx, open.value.classId, user.id, 'invitation');

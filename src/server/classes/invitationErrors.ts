@@ -16,12 +16,15 @@ export function invitationMessage(p: AcceptProblem): string {
       return 'Your teacher withdrew this invitation. Ask them for a new one if you still want to join.';
     case 'own-class':
       return 'You teach this class, so you cannot join it as a student.';
+    case 'other-account':
+      return `This invitation was sent to ${p.invited}, but you are signed in as ${p.signedInAs}. Sign out, then sign in (or create an account) as ${p.invited} to join.`;
     default:
       return assertNever(p);
   }
 }
 
 export function invitationProblemResponse(p: AcceptProblem): Response {
+  if (p.kind === 'other-account') return problem(409, 'wrong_account', invitationMessage(p));
   const status = p.kind === 'forged' || p.kind === 'own-class' ? 400 : 410;
   return problem(status, p.kind === 'own-class' ? 'invalid_input' : 'invalid_token', invitationMessage(p));
 }

@@ -1,16 +1,22 @@
 // Queries behind the teacher's roster (roster.ts): the class's students with their finished lessons and photos,
 // and each student's most recent progress row.
-import type { Kysely, Transaction } from 'kysely';
+import { sql, type Kysely, type Transaction } from 'kysely';
 import type { Database } from '@db/schema.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
 
-export async function countLessons(db: Db, classId: string): Promise<number> {
-  const row = await db.selectFrom('lesson').select((eb) => eb.fn.countAll<number>().as('n')).where('class_id', '=', classId).executeTakeFirstOrThrow();
+/** Lessons students can open now (the database clock decides, as for access: release_at <= now()). */
+export async function countReleasedLessons(db: Db, classId: string): Promise<number> {
+  const row = await db
+    .selectFrom('lesson')
+    .select((eb) => eb.fn.countAll<number>().as('n'))
+    .where('class_id', '=', classId)
+    .where('release_at', '<=', sql<Date>`now()`)
+    .executeTakeFirstOrThrow();
   return Number(row.n);
 }
 
-/** Enrolled students by name, with how many of the class's lessons each finished and how many photos each uploaded. */
+/** Enrolled students by name, with how many of the class's released lessons each finished and how many photos each uploaded. */
 export async function listEnrolledStudents(db: Db, classId: string) {
   return db
     .selectFrom('enrollment as e')
@@ -24,6 +30,7 @@ export async function listEnrolledStudents(db: Db, classId: string) {
         .whereRef('p.student_id', '=', 'a.id')
         .where('l.class_id', '=', classId)
         .where('p.finished_at', 'is not', null)
+        .where('l.release_at', '<=', sql<Date>`now()`)
         .as('finished'),
       eb
         .selectFrom('lesson_photo as ph')

@@ -1,8 +1,8 @@
-// The teacher's roster: per enrolled student, lessons finished, where they are now (the lesson they touched
+// The teacher's roster: per enrolled student, released lessons finished (of those released), where they are now (the lesson they touched
 // last, its step and total), when they were last active, and how many photos they uploaded. Plus CSV export.
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
-import { countLessons, listEnrolledStudents, listLatestProgress } from './roster.repository.ts';
+import { countReleasedLessons, listEnrolledStudents, listLatestProgress } from './roster.repository.ts';
 
 export interface RosterEntry {
   studentId: string;
@@ -10,6 +10,7 @@ export interface RosterEntry {
   email: string;
   joinedAt: string;
   joinedVia: 'invitation' | 'join-code';
+  /** Released lessons finished, out of `lessonCount` released lessons (a lesson not out yet counts in neither). */
   lessonsFinished: number;
   lessonCount: number;
   current: { lessonId: string; lessonTitle: string; stepIndex: number; totalSteps: number; finished: boolean } | null;
@@ -18,7 +19,7 @@ export interface RosterEntry {
 }
 
 export async function readRoster(db: Kysely<Database>, classId: string): Promise<RosterEntry[]> {
-  const lessonCount = await countLessons(db, classId);
+  const lessonCount = await countReleasedLessons(db, classId);
   const rows = await listEnrolledStudents(db, classId);
   const latest = await listLatestProgress(db, classId);
   const byStudent = new Map(latest.map((p) => [p.student_id, p]));

@@ -12,7 +12,7 @@ import { createAccount, type TestAccount } from '../../helpers/accounts.ts';
 import { TestClient, type ApiResponse } from '../../helpers/client.ts';
 import { linksIn, waitForMail } from '../../helpers/mail.ts';
 import { block } from '../designFixtures.ts';
-import { sendBytes } from '../teachingWorld.ts';
+import { daysAhead, sendBytes } from '../teachingWorld.ts';
 
 export type Actor = 'anonymous' | 'quilter' | 'teacher' | 'admin' | 'otherQuilter' | 'otherTeacher';
 export const ACTORS: readonly Actor[] = ['anonymous', 'quilter', 'teacher', 'admin', 'otherQuilter', 'otherTeacher'];
@@ -77,10 +77,10 @@ export async function buildSecurityWorld(): Promise<SecurityWorld> {
   const publicTemplate = await publish('public', 'Kestrel open block');
   const unlisted = await publish('unlisted', 'Kestrel link block');
 
-  const cls = await expectOk(teacher.client.post('/api/classes', { title: 'Kestrel Tuesday circle', startsOn: '2027-03-02' }), 201);
-  const otherClass = (await expectOk(otherTeacher.client.post('/api/classes', { title: 'Kestrel rival class', startsOn: '2027-03-03' }), 201)).class;
+  const cls = await expectOk(teacher.client.post('/api/classes', { title: 'Kestrel Tuesday circle', startsOn: daysAhead(87) }), 201);
+  const otherClass = (await expectOk(otherTeacher.client.post('/api/classes', { title: 'Kestrel rival class', startsOn: daysAhead(88) }), 201)).class;
   const lesson = await expectOk(
-    teacher.client.post(`/api/classes/${cls.class.id}/lessons`, { title: 'Kestrel lesson one', releaseAt: new Date(Date.now() - 3_600_000).toISOString(), templateVersionId: classTemplate.version.id }),
+    teacher.client.post(`/api/classes/${cls.class.id}/lessons`, { title: 'Kestrel lesson one', releaseAt: new Date(Date.now() - 3_600_000).toISOString(), templateVersionId: classTemplate.version.id, confirmed: true }),
     201,
   );
   await expectOk(quilter.client.post('/api/classes/join', { code: cls.class.joinCode }), 200);
@@ -120,9 +120,9 @@ export async function buildSecurityWorld(): Promise<SecurityWorld> {
     png,
     fresh: {
       design: async (owner = quilter) => (await expectOk(owner.client.post('/api/designs', { title: 'Fresh design', design: block() }), 201)).design.id,
-      classId: async () => (await expectOk(teacher.client.post('/api/classes', { title: 'Fresh class', startsOn: '2027-04-01' }), 201)).class.id,
+      classId: async () => (await expectOk(teacher.client.post('/api/classes', { title: 'Fresh class', startsOn: daysAhead(117) }), 201)).class.id,
       lessonId: async () =>
-        (await expectOk(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, { title: 'Fresh lesson', releaseAt: new Date(Date.now() + 86_400_000).toISOString(), templateVersionId: classTemplate.version.id }), 201))
+        (await expectOk(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, { title: 'Fresh lesson', releaseAt: new Date(Date.now() + 86_400_000).toISOString(), templateVersionId: classTemplate.version.id, confirmed: true }), 201))
           .lesson.id,
       invitationId: async () => {
         const sent = await expectOk(teacher.client.post(`/api/classes/${cls.class.id}/invitations`, { emails: [`fresh-${randomUUID()}@guild.test`] }), 201);

@@ -47,14 +47,14 @@ describe('dates that do not exist', () => {
       expectField(await w.teacher.client.post('/api/classes', { title: 'Leap class', startsOn }), 'startsOn');
       expectField(await w.teacher.client.patch(`/api/classes/${w.classId}`, { startsOn }), 'startsOn');
     }
-    expect((await w.teacher.client.post('/api/classes', { title: 'Leap class', startsOn: '2028-02-29' })).status).toBe(201);
+    expect((await w.teacher.client.post('/api/classes', { title: 'Leap class', startsOn: '2028-02-29', confirmed: true })).status).toBe(201);
   });
 
   it('a lesson released on a day that does not exist, or in year 0, is refused naming releaseAt', async () => {
     for (const releaseAt of ['2027-02-30T09:00:00Z', '0000-06-01T09:00:00Z', '2027-01-01T09:00:00']) {
       expectField(await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Odd day', releaseAt, templateVersionId: w.versionId }), 'releaseAt');
     }
-    expect((await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Real day', releaseAt: iso(3 * DAY), templateVersionId: w.versionId })).status).toBe(201);
+    expect((await w.teacher.client.post(`/api/classes/${w.classId}/lessons`, { title: 'Real day', releaseAt: iso(3 * DAY), templateVersionId: w.versionId, confirmed: true })).status).toBe(201);
   });
 });
 

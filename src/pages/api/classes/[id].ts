@@ -1,5 +1,6 @@
 // /api/classes/:id — GET: the class and its lessons (students: released lessons only, no join code);
-// PATCH: change title, description, start date or price (teacher, admin); DELETE: remove the class (teacher, admin).
+// PATCH: change title, description, start date or price (teacher, admin; a changed start date is checked as on
+// POST /api/classes); DELETE: remove the class with its lessons, enrolments, progress and photos (teacher, admin).
 import type { APIRoute } from 'astro';
 import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
@@ -8,7 +9,8 @@ import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
 import { deleteClass, findClassRow, listLessons } from '@server/classes/class.repository.ts';
 import { toClassJson, toLessonJson } from '@server/classes/classJson.ts';
 import { updateClassSchema } from '@server/classes/class.schema.ts';
-import { updateClass } from '@server/classes/class.service.ts';
+import { checkClassDates, updateClass } from '@server/classes/class.service.ts';
+import { dateProblemResponse } from '@server/classes/teachingDates.ts';
 import { deletePhotoObjectsOf } from '@server/photos/photoCleanup.ts';
 
 const notFound = () => problem(404, 'not_found', 'Not found.');
@@ -32,6 +34,10 @@ export const PATCH = (async ({ locals, params, request }) => {
   if (!access || !isManager(access.standing)) return notFound();
   const body = await readJson(request, updateClassSchema);
   if (!body.ok) return body.error;
+  const before = await findClassRow(db, access.cls.id);
+  if (!before) return notFound();
+  const dates = checkClassDates(body.value, before.starts_on_text);
+  if (!dates.ok) return dateProblemResponse(dates.error);
   await updateClass(db, access.cls.id, body.value);
   const row = await findClassRow(db, access.cls.id);
   if (!row) return notFound();

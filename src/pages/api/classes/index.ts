@@ -1,11 +1,13 @@
 // /api/classes — GET: my classes { teaching, enrolled } (teaching: only while the account is a teacher); POST: a
-// teacher creates a class → 201 { class }.
+// teacher creates a class → 201 { class }. A start date in the past answers 409 `needs_confirmation` until the body
+// says confirmed: true; one more than a year ago or five years ahead is refused (teachingDates.ts).
 import type { APIRoute } from 'astro';
 import { db } from '@server/db.ts';
 import { json, readJson } from '@server/http.ts';
 import { hasRole, requireRole, requireUser } from '@server/auth/guards.ts';
 import { createClassSchema } from '@server/classes/class.schema.ts';
-import { createClass } from '@server/classes/class.service.ts';
+import { checkClassDates, createClass } from '@server/classes/class.service.ts';
+import { dateProblemResponse } from '@server/classes/teachingDates.ts';
 import { findClassRow, listClassesFor } from '@server/classes/class.repository.ts';
 import { toClassJson } from '@server/classes/classJson.ts';
 
@@ -22,6 +24,8 @@ export const POST = (async ({ locals, request }) => {
   if (!signedIn.ok) return signedIn.error;
   const body = await readJson(request, createClassSchema);
   if (!body.ok) return body.error;
+  const dates = checkClassDates(body.value);
+  if (!dates.ok) return dateProblemResponse(dates.error);
   const id = await createClass(db, signedIn.value.user.id, body.value);
   const row = await findClassRow(db, id);
   if (!row) throw new Error('api/classes: the class just created is missing');

@@ -1,6 +1,7 @@
 // /api/lessons/:id — GET: the lesson with everything the walkthrough needs (the template version's design,
 // route strokes and figures, and the signed-in student's progress); students only once it is released.
-// PATCH { title?, releaseAt?, notes?, templateVersionId? } and DELETE: the class's teacher and admins.
+// PATCH { title?, releaseAt?, notes?, templateVersionId?, confirmed? } (a changed release is checked as on POST
+// /api/classes/:id/lessons) and DELETE (its progress and photos go with it): the class's teacher and admins.
 import type { APIRoute } from 'astro';
 import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
@@ -9,7 +10,8 @@ import { findLessonAccess, isManager } from '@server/classes/classAccess.ts';
 import { deleteLesson, findLessonRow } from '@server/classes/class.repository.ts';
 import { toLessonJson } from '@server/classes/classJson.ts';
 import { updateLessonSchema } from '@server/classes/class.schema.ts';
-import { canUseTemplateVersion, updateLesson } from '@server/classes/class.service.ts';
+import { canUseTemplateVersion, checkLessonDates, updateLesson } from '@server/classes/class.service.ts';
+import { dateProblemResponse } from '@server/classes/teachingDates.ts';
 import { readProgress } from '@server/classes/progress.ts';
 import { findVersionById } from '@server/templates/template.repository.ts';
 import { toVersionJson } from '@server/templates/templateJson.ts';
@@ -47,6 +49,10 @@ export const PATCH = (async ({ locals, params, request }) => {
   if (versionId !== undefined && !(await canUseTemplateVersion(db, access.cls.teacher_id, signedIn.value.user, versionId))) {
     return problem(400, 'invalid_input', 'Choose a version of one of your templates or of a public template.', { templateVersionId: 'No such template version.' });
   }
+  const before = await findLessonRow(db, access.lessonId);
+  if (!before) return notFound();
+  const dates = await checkLessonDates(db, access.cls.id, body.value, before.release_at);
+  if (!dates.ok) return dateProblemResponse(dates.error);
   await updateLesson(db, access.lessonId, body.value);
   const row = await findLessonRow(db, access.lessonId);
   if (!row) return notFound();

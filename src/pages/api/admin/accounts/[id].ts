@@ -17,7 +17,8 @@ export const PATCH = (async ({ locals, request, params }) => {
   const result = await setRole(db, id.data, body.value.role);
   if (!result.ok) {
     if (result.error.kind === 'not-found') return problem(404, 'not_found', 'No such account.');
-    return problem(409, 'last_admin', 'This is the last admin account. Make someone else an admin first.', { role: 'The last admin cannot be demoted.' });
+    const why = 'This is the only admin account, and there must always be one admin so that someone can change roles. Make someone else an admin first.';
+    return problem(409, 'last_admin', why, { role: why });
   }
   return json({ account: toAccountJson(result.value) });
 }) satisfies APIRoute;

@@ -1,5 +1,6 @@
 // /api/classes/:id/lessons — GET: the lessons (students: released only); POST: add a dated lesson (teacher, admin)
-// { title, releaseAt, notes (Markdown), templateVersionId } → 201 { lesson }.
+// { title, releaseAt, notes (Markdown), templateVersionId, confirmed? } → 201 { lesson }. A release in the past or
+// before the class starts answers 409 `needs_confirmation` until confirmed: true (teachingDates.ts).
 import type { APIRoute } from 'astro';
 import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
@@ -8,7 +9,8 @@ import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
 import { findLessonRow, listLessons } from '@server/classes/class.repository.ts';
 import { toLessonJson } from '@server/classes/classJson.ts';
 import { createLessonSchema } from '@server/classes/class.schema.ts';
-import { canUseTemplateVersion, createLesson } from '@server/classes/class.service.ts';
+import { canUseTemplateVersion, checkLessonDates, createLesson } from '@server/classes/class.service.ts';
+import { dateProblemResponse } from '@server/classes/teachingDates.ts';
 
 export const GET = (async ({ locals, params }) => {
   const signedIn = requireUser(locals);
@@ -30,6 +32,8 @@ export const POST = (async ({ locals, params, request }) => {
   if (!(await canUseTemplateVersion(db, access.cls.teacher_id, signedIn.value.user, body.value.templateVersionId))) {
     return problem(400, 'invalid_input', 'Choose a version of one of your templates or of a public template.', { templateVersionId: 'No such template version.' });
   }
+  const dates = await checkLessonDates(db, access.cls.id, body.value);
+  if (!dates.ok) return dateProblemResponse(dates.error);
   const id = await createLesson(db, access.cls.id, body.value);
   const row = await findLessonRow(db, id);
   if (!row) throw new Error('api/classes/[id]/lessons: the lesson just created is missing');

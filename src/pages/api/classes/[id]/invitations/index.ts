@@ -6,7 +6,7 @@ import { db } from '@server/db.ts';
 import { json, problem, readJson } from '@server/http.ts';
 import { requireUser } from '@server/auth/guards.ts';
 import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
-import { inviteSchema } from '@server/classes/class.schema.ts';
+import { badAddresses, inviteSchema } from '@server/classes/class.schema.ts';
 import { inviteByEmail } from '@server/classes/invitation.service.ts';
 import { listClassInvitations } from '@server/classes/invitation.repository.ts';
 import { findAccountRowById } from '@server/accounts/account.repository.ts';
@@ -38,6 +38,13 @@ export const POST = (async ({ locals, params, request, url }) => {
   if (!access || !isManager(access.standing)) return problem(404, 'not_found', 'Not found.');
   const body = await readJson(request, inviteSchema);
   if (!body.ok) return body.error;
+  const bad = badAddresses(body.value.emails);
+  if (bad.length > 0) {
+    // Nothing is sent: the teacher fixes the list and sends it again, so nobody gets two invitations.
+    const named = bad.map((e) => (e === '' ? 'an empty line' : `“${e}”`)).join(', ');
+    const message = `${bad.length === 1 ? 'This is' : 'These are'} not ${bad.length === 1 ? 'an e-mail address' : 'e-mail addresses'}: ${named}. Nothing was sent; fix ${bad.length === 1 ? 'it' : 'them'} and send again.`;
+    return problem(400, 'invalid_input', message, { emails: `${bad.length === 1 ? 'Not an e-mail address' : 'Not e-mail addresses'}: ${named}.` });
+  }
   const teacher = await findAccountRowById(db, access.cls.teacher_id);
   if (!teacher) throw new Error(`pages/api/classes/invitations: class ${access.cls.id} has no teacher row`);
   const sent = await inviteByEmail(db, access.cls, teacher.display_name, body.value.emails, PUBLIC_ORIGIN ?? url.origin);

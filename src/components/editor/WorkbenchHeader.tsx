@@ -19,9 +19,10 @@ export function WorkbenchHeader({ designId, title, onTitle, sizeText, status, on
   return (
     <header className="flex flex-wrap items-center gap-3">
       <a href="/designs" className="text-denim-600 underline">My designs</a>
-      <label className="flex items-center gap-2">
+      <label className="flex min-w-0 max-w-full items-center gap-2">
         <span className="sr-only">Design title</span>
-        <input value={title} onChange={(e) => onTitle(e.target.value)} className="rounded border border-transparent bg-transparent px-1 text-2xl font-bold hover:border-muslin-300 focus:border-denim-500" maxLength={200} />
+        {/* As wide as the title (size in characters), never wider than the row: long titles are not cut at 20 characters. */}
+        <input value={title} onChange={(e) => onTitle(e.target.value)} size={Math.min(Math.max(title.length + 1, 8), 70)} className="min-w-0 max-w-full rounded border border-transparent bg-transparent px-1 text-2xl font-bold hover:border-muslin-300 focus:border-denim-500" maxLength={200} />
       </label>
       <span className="text-denim-700">{sizeText}</span>
       <SaveIndicator status={status} onSaveNow={onSaveNow} onResolve={onResolve} />

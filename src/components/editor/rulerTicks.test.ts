@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { buildRulerTicks } from './rulerTicks.ts';
+import fc from 'fast-check';
+import { buildRulerTicks, MIN_LABEL_GAP_PX } from './rulerTicks.ts';
 
 describe('ruler ticks', () => {
   it('at true size an inch ruler shows every 1/8 in, ranked like a printed quilting ruler', () => {
@@ -28,5 +29,20 @@ describe('ruler ticks', () => {
     // 1 px/in: every 5th inch is 5 px apart, the first step that is not too dense.
     const ticks = buildRulerTicks(0, 50, 1, 'in');
     expect(ticks.map((t) => t.at)).toEqual([0, 5, 10, 15, 20, 25, 30, 35, 40, 45, 50]);
+  });
+
+  it('numbers whole units only as often as they fit: a 30 cm block on a phone (7 px/cm) every 5 cm', () => {
+    const labels = buildRulerTicks(0, 30, 7, 'cm').filter((t) => t.label !== undefined).map((t) => t.label);
+    expect(labels).toEqual(['0', '5', '10', '15', '20', '25', '30']);
+  });
+
+  it('never puts two numbers closer than MIN_LABEL_GAP_PX, at any zoom (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 0.5, max: 400, noNaN: true }), fc.constantFrom('in' as const, 'cm' as const), (scale, units) => {
+        const at = buildRulerTicks(-10, 200, scale, units).filter((t) => t.label !== undefined).map((t) => t.at);
+        for (let i = 1; i < at.length; i++) expect((at[i]! - at[i - 1]!) * scale).toBeGreaterThanOrEqual(MIN_LABEL_GAP_PX - 1e-9);
+      }),
+      { numRuns: 300 },
+    );
   });
 });

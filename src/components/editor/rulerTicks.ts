@@ -20,6 +20,9 @@ export const RULER_STEPS: Readonly<Record<Units, readonly number[]>> = {
 /** Marks closer than this on screen (CSS px) are left out, finest first. */
 export const MIN_TICK_GAP_PX = 5;
 
+/** Numbers closer than this (CSS px; room for "-30" in the 10 px ruler font) would run into each other. */
+export const MIN_LABEL_GAP_PX = 22;
+
 /**
  * The ruler marks between `from` and `to` (design units) at `scale` px per unit. Each position gets the
  * coarsest rank that contains it; ranks whose spacing would be under MIN_TICK_GAP_PX are dropped.
@@ -31,6 +34,8 @@ export function buildRulerTicks(from: number, to: number, scale: number, units: 
   const steps = RULER_STEPS[units].filter((s) => s * scale >= MIN_TICK_GAP_PX);
   const wholeEvery = steps.length > 0 ? 1 : coarseWholeStep(scale);
   const finest = steps.length > 0 ? steps[steps.length - 1]! : wholeEvery;
+  // Numbers only every k-th whole unit when whole units are closer than a number is wide (a phone-sized canvas).
+  const labelEvery = [1, 2, 5, 10, 20, 50, 100].find((k) => k * scale >= MIN_LABEL_GAP_PX && k % wholeEvery === 0) ?? 100;
   const first = Math.ceil(from / finest - 1e-9);
   const last = Math.floor(to / finest + 1e-9);
   const ticks: Tick[] = [];
@@ -38,10 +43,15 @@ export function buildRulerTicks(from: number, to: number, scale: number, units: 
   for (let i = first; i <= last && ticks.length < cap; i++) {
     const at = i * finest + 0; // + 0 turns -0 into 0
     const rank = steps.length > 0 ? rankOf(at, steps) : 0;
-    const whole = rank === 0;
-    ticks.push(whole ? { at, rank, label: formatWhole(at) } : { at, rank });
+    const labelled = rank === 0 && isMultiple(at, labelEvery);
+    ticks.push(labelled ? { at, rank, label: formatWhole(at) } : { at, rank });
   }
   return ticks;
+}
+
+function isMultiple(at: number, k: number): boolean {
+  const q = at / k;
+  return Math.abs(q - Math.round(q)) < 1e-9;
 }
 
 function rankOf(at: number, steps: readonly number[]): number {

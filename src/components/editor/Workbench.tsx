@@ -20,6 +20,7 @@ import type { DesignDocument } from './useDesignDocument.ts';
 import { useEditHistory } from './useEditHistory.ts';
 import { usePatchMotif } from './usePatchMotif.ts';
 import { useStageSize } from './useStageSize.ts';
+import { toolHint } from './toolHints.ts';
 import { useToolController } from './useToolController.ts';
 import { useViewportControl } from './useViewportControl.ts';
 import { zoomOf } from './viewport.ts';
@@ -50,12 +51,11 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
   const [snapOn, setSnapOn] = useState(true);
   const [showGrid, setShowGrid] = useState(true);
   const [guides, setGuides] = useState<readonly Guide[]>([]);
-  const [endsMode, setEndsMode] = useState<'start' | 'end'>('start');
   const [showKeys, setShowKeys] = useState(false);
   const [announce, setAnnounce] = useState('');
   const motif = usePatchMotif(design);
 
-  const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, endsMode, dispatch: history.dispatch, onPickPatch: motif.pickPatchAt });
+  const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, dispatch: history.dispatch, onPickPatch: motif.pickPatchAt });
   const check = useRouteCheck(designId, design, doc.savedCheck, doc.status.kind);
   const [shownJoin, setShownJoin] = useState<JoinProposal | null>(null);
   const joinPreview = useMemo(() => (shownJoin ? joinLines(shownJoin) : null), [shownJoin]);
@@ -128,7 +128,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
       <div className="grid gap-3 lg:grid-cols-[11rem_minmax(0,1fr)_20rem]">
         <aside className="flex flex-col gap-3">
           <Toolbar tool={tool} onTool={chooseTool} />
-          {tool === 'ends' && <EndsPanel mode={endsMode} onMode={setEndsMode} dispatch={history.dispatch} />}
+          {tool === 'ends' && ctl.progress.kind === 'ends' && <EndsPanel next={ctl.progress.next} onNext={ctl.chooseEndsStep} dispatch={history.dispatch} />}
         </aside>
         <div className="flex min-w-0 flex-col gap-2">
           <CanvasBar history={history} selection={ctl.selection} edits={edits} hasGuides={guides.length > 0} onClearGuides={() => setGuides([])} snapOn={snapOn} onSnap={setSnapOn} showGrid={showGrid} onGrid={setShowGrid} viewport={vp} zoomPct={Math.round(zoomOf(vp.view, design.units) * 100)} />
@@ -149,6 +149,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
             preview={motifShown ?? joinPreview ?? ctl.preview}
             guides={guides}
           />
+          <p className="text-sm text-indigo-ink" data-testid="tool-hint" aria-live="polite">{toolHint(tool, ctl.progress)}</p>
           <p className="text-xs text-denim-700">
             Wheel or two fingers: move · Ctrl+wheel or pinch: zoom · {snapOn ? 'Snapping to grid, seam ends, crossings, midpoints and guides' : 'Snapping off'} · Press <kbd>?</kbd> for all keys.
           </p>

@@ -2,6 +2,7 @@
 // saved; click, click still works and Esc drops a line half drawn; the smooth-curve tool shows the curve bending to
 // the pointer while points are placed (the overlay's pixels on the curve, off the straight chords, change when Esc
 // drops it); the start-and-end tool takes two clicks, its hint naming the step. Screenshots: drawtools-*.
+import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitBlockViewport, toScreen } from '@components/editor/viewport.ts';
@@ -111,7 +112,8 @@ describe('drawing tools with feedback', () => {
     await page.mouse.click(...(await at(page, 2, 2)));
     expect(await hint(page)).toMatch(/^Step 2 of 2: click where the needle finishes/);
     await page.mouse.move(...(await at(page, 7, 9)));
-    await screenshot(page, 'drawtools-ends-step-2');
+    // The viewport only: a full-page shot resizes the window, and the canvas refits while it is taken.
+    await page.screenshot({ path: path.join(testEnv.outputDir, 'screenshots', 'drawtools-ends-step-2.png') });
     await page.mouse.click(...(await at(page, 8, 10)));
     expect(await hint(page)).toMatch(/^Step 1 of 2/);
     const savedEnds = async () => (await quilter.client.get<{ design: { design: { start?: number[]; end?: number[] } } }>(`/api/designs/${id}`)).body.design.design;

@@ -142,6 +142,14 @@ export function plainIssueMessage(issue: RawIssue): string {
   }
 }
 
+/**
+ * A schema's own message that still names the field: `namedMessage('must be a date like 2027-01-15.')` on a field
+ * `startsOn` reads "Start date must be a date like 2027-01-15.". For checks whose advice the table cannot give.
+ */
+export function namedMessage(rest: string): { readonly error: (issue: RawIssue) => string } {
+  return { error: (issue) => `${fieldWords(issue.path ?? [])} ${rest}` };
+}
+
 /** zod's error map: every issue without a message of its own gets the plain sentence. */
 export const plainIssue: z.core.$ZodErrorMap = (issue) => plainIssueMessage(issue);
 

@@ -1,7 +1,8 @@
 // Drawing feedback on the workbench in chromium (issue 14 item 3): a ruler line drawn by press-drag-release is
 // saved; click, click still works and Esc drops a line half drawn; the smooth-curve tool shows the curve bending to
 // the pointer while points are placed (the overlay's pixels on the curve, off the straight chords, change when Esc
-// drops it); the start-and-end tool takes two clicks, its hint naming the step. Screenshots: drawtools-*.
+// drops it); the start-and-end tool takes two clicks, its hint naming the step; a line dragged past the edge is
+// clipped to the block with a note. Screenshots: drawtools-*.
 import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -118,6 +119,17 @@ describe('drawing tools with feedback', () => {
     expect(await hint(page)).toMatch(/^Step 1 of 2/);
     const savedEnds = async () => (await quilter.client.get<{ design: { design: { start?: number[]; end?: number[] } } }>(`/api/designs/${id}`)).body.design.design;
     await expect.poll(savedEnds, { timeout: 20_000 }).toMatchObject({ start: [2, 2], end: [8, 10] });
+
+    // A ruler line dragged past the edge is clipped to the block, and the footer says so (shared/editor/blockGuard.ts).
+    await page.getByRole('button', { name: /Ruler line/ }).click();
+    await page.mouse.move(...(await at(page, 6, 6)));
+    await page.mouse.down();
+    await page.mouse.move(...(await at(page, 13.5, 6)), { steps: 6 });
+    await page.mouse.up();
+    await lineCount(page, 3);
+    expect(await hint(page)).toMatch(/The part outside the block was left off/);
+    await screenshot(page, 'drawtools-clipped-at-edge');
+    await expect.poll(savedLines, { timeout: 20_000 }).toContainEqual([[6, 6], [12, 6]]);
 
     for (const [w, h] of [[820, 1180], [390, 844]] as const) {
       await page.setViewportSize({ width: w, height: h });

@@ -12,6 +12,10 @@ import { SESSION_COOKIE, deleteSessionCookie, setSessionCookie, validateSessionT
 import '@server/classes/releaseSchedule.ts';
 // … and the sweep that removes photo objects an interrupted upload left behind.
 import '@server/photos/orphanSchedule.ts';
+import { installPlainMessages } from '@shared/forms/plainMessages.ts';
+
+// Validation messages in plain words naming the field (shared/forms/plainMessages.ts), for every parse on the server.
+installPlainMessages();
 
 const isApi = (url: URL) => url.pathname === '/api' || url.pathname.startsWith('/api/');
 

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isLineInsideBlock } from './blockBounds.ts';
 
 /**
  * The stored design format (version 1). Everything from outside (request bodies, jsonb read back,
@@ -23,7 +24,7 @@ export const CM_PER_INCH = 2.54;
 
 const coordinate = z.number().finite();
 export const pointSchema = z.tuple([coordinate, coordinate]).readonly();
-export const polylineSchema = z.array(pointSchema).min(2, 'a line needs at least 2 points').readonly();
+export const polylineSchema = z.array(pointSchema).min(2, 'A line needs at least 2 points.').readonly();
 
 /** Thread-budget settings; every field has a default (see threadBudget.ts for their sources). */
 export const threadSettingsSchema = z
@@ -64,26 +65,55 @@ export const designSchema = z
   .strict()
   .superRefine((design, ctx) => {
     const maxSide = DESIGN_LIMITS.maxSide[design.units];
-    if (design.width > maxSide) ctx.addIssue({ code: 'custom', path: ['width'], message: `width is over ${maxSide} ${design.units}` });
-    if (design.height > maxSide) ctx.addIssue({ code: 'custom', path: ['height'], message: `height is over ${maxSide} ${design.units}` });
+    if (design.width > maxSide) ctx.addIssue({ code: 'custom', path: ['width'], message: `Width can be at most ${maxSide} ${design.units}.` });
+    if (design.height > maxSide) ctx.addIssue({ code: 'custom', path: ['height'], message: `Height can be at most ${maxSide} ${design.units}.` });
     const slack = DESIGN_LIMITS.outsideSlack * Math.max(design.width, design.height);
     let points = 0;
     const groups = [['seams', design.seams], ['lines', design.lines], ['route', design.route ?? []]] as const;
     for (const [name, group] of groups) {
       if (group.length > DESIGN_LIMITS.maxLines) {
-        ctx.addIssue({ code: 'custom', path: [name], message: `more than ${DESIGN_LIMITS.maxLines} lines` });
+        ctx.addIssue({ code: 'custom', path: [name], message: `${LINE_WORDS[name]}s: at most ${DESIGN_LIMITS.maxLines.toLocaleString('en-GB')} in one design.` });
       }
       group.forEach((line, i) => {
         points += line.length;
         const far = line.findIndex(([x, y]) => x < -slack || y < -slack || x > design.width + slack || y > design.height + slack);
-        if (far >= 0) ctx.addIssue({ code: 'custom', path: [name, i, far], message: 'point lies far outside the block' });
-        if (!hasTwoDistinctPoints(line)) ctx.addIssue({ code: 'custom', path: [name, i], message: 'a line needs 2 distinct points' });
+        if (far >= 0) ctx.addIssue({ code: 'custom', path: [name, i, far], message: `${LINE_WORDS[name]} ${i + 1} has a point far outside the block.` });
+        if (!hasTwoDistinctPoints(line)) ctx.addIssue({ code: 'custom', path: [name, i], message: `${LINE_WORDS[name]} ${i + 1} needs two different points.` });
       });
     }
     if (points > DESIGN_LIMITS.maxPoints) {
-      ctx.addIssue({ code: 'custom', path: [], message: `design has ${points} points; the cap is ${DESIGN_LIMITS.maxPoints}` });
+      ctx.addIssue({ code: 'custom', path: [], message: `The drawing has ${points.toLocaleString('en-GB')} points; a design may have at most ${DESIGN_LIMITS.maxPoints.toLocaleString('en-GB')}.` });
     }
   });
+
+/** Each line list in words, for messages. */
+const LINE_WORDS = { seams: 'Seam line', lines: 'Quilting line', route: 'Stitching order stroke' } as const;
+
+/**
+ * Largest batting spacing limit accepted, per design unit. From memory, not a cited source: batting packages state
+ * spacings from about 2 in to about 10 in between quilting lines; 12 in (30.5 cm) leaves room above the widest we
+ * recall and refuses typing slips such as 99,999 in.
+ */
+export const BATTING_SPACING_MAX = { in: 12, cm: 30.5 } as const;
+
+/**
+ * What the server takes in a new or saved design and the workbench lets through (stored designs are read with the
+ * laxer `designSchema`, so an older drawing still opens): the batting spacing limit within BATTING_SPACING_MAX and
+ * every quilting line and stitching-order stroke inside the block (shared/design/blockBounds.ts).
+ */
+export const designInputSchema = designSchema.superRefine((design, ctx) => {
+  const battingMax = BATTING_SPACING_MAX[design.units];
+  if ((design.thread?.battingSpacing ?? 0) > battingMax) {
+    ctx.addIssue({ code: 'custom', path: ['thread', 'battingSpacing'], message: `Batting spacing limit can be at most ${battingMax} ${design.units}; check the spacing printed on your batting's package.` });
+  }
+  for (const name of ['lines', 'route'] as const) {
+    (design[name] ?? []).forEach((line, i) => {
+      if (!isLineInsideBlock(line, design)) {
+        ctx.addIssue({ code: 'custom', path: [name, i], message: `${LINE_WORDS[name]} ${i + 1} runs outside the block; quilting lines stay inside the ${design.width} × ${design.height} ${design.units} block.` });
+      }
+    });
+  }
+});
 
 /** A validated design as the engine uses it (defaults applied). */
 export type Design = z.infer<typeof designSchema>;

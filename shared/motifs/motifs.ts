@@ -1,3 +1,4 @@
+import { plainIssue } from '../forms/plainMessages.ts';
 import { z } from 'zod';
 import { signedArea, type Polygon } from '../layouts/patch.ts';
 import { assertNever } from '../assertNever.ts';
@@ -44,7 +45,7 @@ export type MotifError =
  * around it without a stop.
  */
 export function generateMotif(polygon: Polygon, params: unknown): Result<MotifLines, MotifError> {
-  const parsed = motifParamsSchema.safeParse(params);
+  const parsed = motifParamsSchema.safeParse(params, { error: plainIssue });
   if (!parsed.success) {
     return err({ kind: 'invalid-params', issues: parsed.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })) });
   }

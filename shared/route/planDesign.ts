@@ -1,3 +1,4 @@
+import { clipLinesToBlock } from '../design/blockBounds.ts';
 import { bindingBandOf, type Design } from '../design/design.schema.ts';
 import type { DesignProblem } from '../graph/designProblem.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
@@ -34,7 +35,8 @@ export interface DesignPlanOptions {
  * (stitching plus travel is all sewn).
  */
 export function planDesign(design: Design, options: DesignPlanOptions = {}): Result<DesignPlan, DesignProblem> {
-  const built = buildPlanarGraph(design);
+  // Lines outside the block are never sewn: an older drawing or a draft with some is planned as clipped to it.
+  const built = buildPlanarGraph(clipLinesToBlock(design));
   if (!built.ok) return built;
   const graph = built.value;
   const settings = options.settings ?? DEFAULT_PLAN_SETTINGS;

@@ -1,6 +1,7 @@
 // The API's one response shape: JSON bodies, and errors as { error: { code, message, fields? } }.
 // `code` comes from a closed union so clients (and tests) can branch on it; `fields` maps an input
 // path ("email", "items.0.name") to a message a person can act on.
+import { fieldWords, plainIssue } from '@shared/forms/plainMessages.ts';
 import type { z } from 'zod';
 import type { ErrorCode, ProblemBody } from '@shared/contract/errors.ts';
 import { err, ok, type Result } from '@shared/result.ts';
@@ -64,24 +65,31 @@ export async function readJson<S extends z.ZodType>(
   }
   const unstorable = findUnstorableText(data);
   if (unstorable !== null) return err(problem(400, 'invalid_input', 'Some text cannot be stored.', { [unstorable]: UNSTORABLE_MESSAGE }));
-  const parsed = schema.safeParse(data);
+  const parsed = schema.safeParse(data, { error: plainIssue });
   if (!parsed.success) return err(invalidInput(parsed.error));
   return ok(parsed.data);
 }
 
-/** 400 for a zod failure: one message per field path (the first issue wins). */
-export function invalidInput(error: z.ZodError, message = 'Some fields need attention.'): Response {
+/**
+ * 400 for a zod failure: one message per field path (the first issue wins), worded by shared/forms/plainMessages.ts.
+ * Without a message of the caller's, the answer's message is the first field's, so a client that shows only the
+ * message (a save) still names the field.
+ */
+export function invalidInput(error: z.ZodError, message?: string): Response {
   // No prototype: a field named "__proto__" by the client must become a key, not the object's prototype.
   const fields: Record<string, string> = Object.create(null);
   for (const issue of error.issues) {
     const at = issue.path.map(String);
     if (issue.code === 'unrecognized_keys') {
-      for (const k of issue.keys) fields[[...at, k].join('.')] ??= 'This field is not accepted here.';
+      for (const k of issue.keys) fields[[...at, k].join('.')] ??= `${fieldWords([k])}: not accepted here.`;
       continue;
     }
     fields[at.length ? at.join('.') : 'body'] ??= issue.message;
   }
-  return problem(400, 'invalid_input', message, fields);
+  const messages = Object.values(fields);
+  const others = messages.length - 1;
+  const summary = others <= 0 ? (messages[0] ?? 'Some fields need attention.') : `${messages[0]} ${others === 1 ? 'One other field needs' : `${others} other fields need`} attention too.`;
+  return problem(400, 'invalid_input', message ?? summary, fields);
 }
 
 /** "64 KB", "5 MB": binary units (1 MB = 1024 × 1024 bytes), as a person reads them. */

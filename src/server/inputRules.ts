@@ -2,6 +2,7 @@
 // that fit `integer`, calendar dates that exist, instants within four-digit years. Without them a request such as
 // startsOn 2027-02-30 or version 99999999999 passed validation and failed in the database (a 500).
 import { z } from 'zod';
+import { namedMessage } from '@shared/forms/plainMessages.ts';
 
 /** Largest value of a PostgreSQL `integer` (int4): 2^31 − 1 (PostgreSQL manual, "Numeric Types"). */
 export const PG_INT_MAX = 2_147_483_647;
@@ -9,10 +10,10 @@ export const PG_INT_MAX = 2_147_483_647;
 /** A whole number an `integer` column holds, from `min`. */
 export const pgInt = (min = 1) =>
   z
-    .number({ error: 'Use a whole number.' })
-    .int('Use a whole number.')
-    .min(min, `Use ${min} or more.`)
-    .max(PG_INT_MAX, `Use at most ${PG_INT_MAX}.`);
+    .number(namedMessage('must be a whole number.'))
+    .int(namedMessage('must be a whole number.'))
+    .min(min)
+    .max(PG_INT_MAX);
 
 /** Days in a month of the Gregorian calendar: 30 days hath September…; February 29 in years divisible by 4,
  *  except centuries not divisible by 400 (the Gregorian leap-year rule). */
@@ -32,15 +33,15 @@ export function isCalendarDate(s: string): boolean {
 }
 
 export const calendarDate = z
-  .string({ error: 'Use a date like 2027-01-15.' })
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use a date like 2027-01-15.')
-  .refine(isCalendarDate, `Not a real date (for example, February has no 30th), or a year outside ${YEARS.min}–${YEARS.max}.`);
+  .string(namedMessage('must be a date like 2027-01-15.'))
+  .regex(/^\d{4}-\d{2}-\d{2}$/, namedMessage('must be a date like 2027-01-15.'))
+  .refine(isCalendarDate, namedMessage(`must be a real day (February has no 30th) in a year from ${YEARS.min} to ${YEARS.max}.`));
 
 /** An ISO 8601 date and time with a zone (Z or ±hh:mm), a real day, in years 1900–9999. */
 export const isoInstant = z
-  .string({ error: 'Use an ISO date and time, e.g. 2027-01-15T09:00:00Z.' })
-  .pipe(z.iso.datetime({ offset: true, message: 'Use an ISO date and time, e.g. 2027-01-15T09:00:00Z.' }))
-  .refine((s) => isCalendarDate(s.slice(0, 10)), `Use a year between ${YEARS.min} and ${YEARS.max}.`);
+  .string(namedMessage('must be a date and time, e.g. 2027-01-15T09:00:00Z.'))
+  .pipe(z.iso.datetime({ offset: true, ...namedMessage('must be a date and time, e.g. 2027-01-15T09:00:00Z.') }))
+  .refine((s) => isCalendarDate(s.slice(0, 10)), namedMessage(`must be in a year from ${YEARS.min} to ${YEARS.max}.`));
 
 /** A version number from a path segment or query string ("3"); null when it is not one a version can have. */
 export function parseVersionText(raw: string | null | undefined): number | null {

@@ -201,14 +201,14 @@ describe('size caps and malformed geometry', () => {
     const zigzag = Array.from({ length: 200_001 }, (_, i) => (i % 2 ? [1, 1] : [2, 2]));
     const points = await ann.client.post('/api/designs', { title: 'too many points', design: block({ seams: [], lines: [zigzag] }) });
     expect(points.status).toBe(400);
-    expect(points.body.error.fields.design).toMatch(/200001 points; the cap is 200000/);
+    expect(points.body.error.fields.design).toMatch(/200,001 points; a design may have at most 200,000/);
     const manyLines = Array.from({ length: 20_001 }, () => [[1, 1], [2, 2]]);
     const lines = await ann.client.post('/api/designs', { title: 'too many lines', design: block({ lines: manyLines }) });
     expect(lines.status).toBe(400);
-    expect(lines.body.error.fields['design.lines']).toMatch(/more than 20000 lines/);
+    expect(lines.body.error.fields['design.lines']).toMatch(/at most 20,000/);
     const wide = await ann.client.post('/api/designs', { title: 'wide', design: block({ width: 130 }) });
     expect(wide.status).toBe(400);
-    expect(wide.body.error.fields['design.width']).toMatch(/over 120 in/);
+    expect(wide.body.error.fields['design.width']).toMatch(/at most 120 in/);
   });
 
   // JSON has no NaN or Infinity: JSON.stringify turns them into null, and a client may send them as strings;
@@ -219,7 +219,7 @@ describe('size caps and malformed geometry', () => {
     ['1e400 (parses to Infinity)', JSON.stringify(block()).replace('[[0,3],[12,3]]', '[[0,3],[1e400,3]]'), 'design.lines.0.1.0', /./],
     ['a point far outside the block', JSON.stringify(block({ lines: [[[0, 3], [500, 3]]] })), 'design.lines.0.1', /far outside/],
     ['a 1-point line', JSON.stringify(block({ lines: [[[3, 3]]] })), 'design.lines.0', /at least 2 points/],
-    ['a line of one repeated point', JSON.stringify(block({ seams: [[[3, 3], [3, 3]]] })), 'design.seams.0', /2 distinct points/],
+    ['a line of one repeated point', JSON.stringify(block({ seams: [[[3, 3], [3, 3]]] })), 'design.seams.0', /two different points/],
   ];
   for (const [name, designJson, path, message] of malformed) {
     it(`answers 400 for ${name}, naming ${path}`, async () => {

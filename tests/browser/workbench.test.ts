@@ -145,7 +145,7 @@ describe('block workbench', () => {
     await page.waitForFunction(() => /(over|within) the batting’s 2 in limit/.test(document.querySelector('section[aria-label="Route check"] [data-figure="gap"]')?.textContent ?? ''), undefined, { timeout: 20_000 });
     await page.getByLabel('Stitches per inch (SPI)').fill('2');
     await page.getByLabel('Stitches per inch (SPI)').press('Enter');
-    await page.getByText(/^Not accepted/).waitFor();
+    await page.getByText('Stitches per inch must be at least 4.').waitFor();
 
     // A motif placed into the bottom-right square: live preview, then one undo step adds all its lines.
     await page.getByRole('button', { name: /Motif in a patch/ }).click();

@@ -5,7 +5,7 @@ import { PIECED_LAYOUTS, type PiecedLayoutId } from '@shared/layouts/piecedLayou
 import { apiRequest } from './apiClient.ts';
 import { createdDesignId } from './designsApi.ts';
 import { LayoutPreview } from './LayoutPreview.tsx';
-import { buildNewDesign, formErrors, newDesignFormSchema } from './newDesign.ts';
+import { buildNewDesign, readNewDesignForm } from './newDesign.ts';
 
 export interface NewDesignFormProps {
   /** The account's unit preference: sizes are offered and stored in it. */
@@ -27,14 +27,14 @@ export function NewDesignForm({ units }: NewDesignFormProps) {
   async function submit(e: FormEvent) {
     e.preventDefault();
     const custom = size === 'custom';
-    const parsed = newDesignFormSchema.safeParse({ title, units, width: custom ? customW : size, height: custom ? customH : size, layout });
-    if (!parsed.success) {
-      setErrors(formErrors(parsed.error));
+    const parsed = readNewDesignForm({ title, units, width: custom ? customW : size, height: custom ? customH : size, layout });
+    if (!parsed.ok) {
+      setErrors(parsed.errors);
       return;
     }
     setErrors({});
     setBusy(true);
-    const res = await apiRequest('POST', '/api/designs', { title: parsed.data.title, notes: '', design: buildNewDesign(parsed.data) });
+    const res = await apiRequest('POST', '/api/designs', { title: parsed.form.title, notes: '', design: buildNewDesign(parsed.form) });
     setBusy(false);
     if (!res.ok) {
       setErrors({ form: res.error.message });

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { buildNewDesign, formErrors, newDesignFormSchema } from './newDesign.ts';
+import { buildNewDesign, newDesignFormSchema, readNewDesignForm } from './newDesign.ts';
 
 describe('new design from the form', () => {
   it('a 12 in nine-patch starts with its four inner seams at 4 and 8 in', () => {
@@ -13,8 +13,15 @@ describe('new design from the form', () => {
   });
 
   it('refuses an empty title and a block larger than the size cap, naming the field', () => {
-    const r = newDesignFormSchema.safeParse({ title: ' ', units: 'cm', width: 400, height: 30, layout: 'blank' });
-    expect(r.success).toBe(false);
-    if (!r.success) expect(Object.keys(formErrors(r.error)).sort()).toEqual(['title', 'width']);
+    const r = readNewDesignForm({ title: ' ', units: 'cm', width: 400, height: 30, layout: 'blank' });
+    if (r.ok) throw new Error('expected refusal');
+    expect(Object.keys(r.errors).sort()).toEqual(['title', 'width']);
+    expect(r.errors['width']).toMatch(/^Width can be at most 305 cm/);
+  });
+
+  it('words the checks without a message of their own from the shared table', () => {
+    const r = readNewDesignForm({ title: 'Heron', units: 'yd', width: 'twelve', height: -1, layout: 'nine-patch' });
+    if (r.ok) throw new Error('expected refusal');
+    expect(r.errors).toEqual({ units: 'Units must be one of: in, cm.', width: 'Width must be a number.', height: 'The height must be more than 0.' });
   });
 });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DESIGN_LIMITS, DESIGN_VERSION, designSchema, unitsSchema, type Design } from '@shared/design/design.schema.ts';
+import { fieldMessages, plainIssue } from '@shared/forms/plainMessages.ts';
 import { buildPiecedLayout, PIECED_LAYOUTS, type PiecedLayoutId } from '@shared/layouts/piecedLayouts.ts';
 
 const layoutIds = PIECED_LAYOUTS.map((l) => l.id) as [PiecedLayoutId, ...PiecedLayoutId[]];
@@ -16,7 +17,7 @@ export const newDesignFormSchema = z
   .superRefine((form, ctx) => {
     const max = DESIGN_LIMITS.maxSide[form.units];
     for (const side of ['width', 'height'] as const) {
-      if (form[side] > max) ctx.addIssue({ code: 'custom', path: [side], message: `Blocks up to ${max} ${form.units} on a side.` });
+      if (form[side] > max) ctx.addIssue({ code: 'custom', path: [side], message: `${side === 'width' ? 'Width' : 'Height'} can be at most ${max} ${form.units}: blocks up to ${max} ${form.units} on a side.` });
     }
   });
 export type NewDesignForm = z.infer<typeof newDesignFormSchema>;
@@ -35,9 +36,8 @@ export function buildNewDesign(form: NewDesignForm): Design {
   });
 }
 
-/** The first message for each form field, for showing beside it. */
-export function formErrors(error: z.ZodError): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const issue of error.issues) out[String(issue.path[0] ?? 'form')] ??= issue.message;
-  return out;
+/** Reads the form; messages come from the shared table (shared/forms/plainMessages.ts), one per field. */
+export function readNewDesignForm(input: unknown): { readonly ok: true; readonly form: NewDesignForm } | { readonly ok: false; readonly errors: Record<string, string> } {
+  const parsed = newDesignFormSchema.safeParse(input, { error: plainIssue });
+  return parsed.success ? { ok: true, form: parsed.data } : { ok: false, errors: fieldMessages(parsed.error) };
 }

@@ -81,7 +81,7 @@ export function BlockCanvas(p: BlockCanvasProps) {
           </BlockLayer>
           <QuiltingLineLayer lines={design.lines} view={vp.view} theme={theme} selected={selectedLines} pieceOfLine={pieces} oddPoints={p.check?.oddPointPositions ?? NO_POINTS} start={design.start} end={design.end} ownOrder={p.showOwnOrder ? ctl.ownOrder : NO_ORDER} dimmed={p.strokes !== null} stageWidth={size.width} stageHeight={size.height} />
           {p.strokes && <RouteLayer strokes={p.strokes} view={vp.view} theme={theme} needle={p.needle} />}
-          <OverlayLayer view={vp.view} theme={theme} preview={p.preview} snapped={ctl.snapped?.point ?? null} guides={p.guides} gap={p.check?.gap ?? null} />
+          <OverlayLayer view={vp.view} theme={theme} preview={p.preview} snapped={ctl.snapped?.point ?? null} guides={p.guides} gap={p.check?.gap ?? null} pointerTag={ctl.pointerTag} />
           <RulerLayer units={design.units} view={vp.view} stageWidth={size.width} stageHeight={size.height} theme={theme} />
         </EditorStage>
       )}

@@ -1,18 +1,23 @@
 import type { DesignCommand } from '@shared/design/commands.ts';
+import type { EndsStep } from '@shared/editor/endsTool.ts';
 
 export interface EndsPanelProps {
-  readonly mode: 'start' | 'end';
-  readonly onMode: (mode: 'start' | 'end') => void;
+  /** The end the next click on the block sets (the tool moves on by itself after each click). */
+  readonly next: EndsStep;
+  readonly onNext: (next: EndsStep) => void;
   readonly dispatch: (cmd: DesignCommand) => void;
 }
 
-/** The start/end tool's choice of which end a click places, and clearing both (one undo step). */
-export function EndsPanel({ mode, onMode, dispatch }: EndsPanelProps) {
+/**
+ * The start-and-end tool's side column: shows which step the next click is on (start first, then finish) and
+ * lets the quilter jump to the other step, e.g. to move only the finish; "Clear both" is one undo step.
+ */
+export function EndsPanel({ next, onNext, dispatch }: EndsPanelProps) {
   return (
     <fieldset className="rounded border border-muslin-300 bg-white p-2 text-sm">
-      <legend>Place</legend>
-      <label className="mr-3"><input type="radio" name="ends" checked={mode === 'start'} onChange={() => onMode('start')} /> Start</label>
-      <label><input type="radio" name="ends" checked={mode === 'end'} onChange={() => onMode('end')} /> End</label>
+      <legend>Next click sets</legend>
+      <label className="mr-3"><input type="radio" name="ends" checked={next === 'start'} onChange={() => onNext('start')} /> 1. Start</label>
+      <label><input type="radio" name="ends" checked={next === 'end'} onChange={() => onNext('end')} /> 2. Finish</label>
       <button type="button" className="mt-1 block underline" onClick={() => dispatch({ kind: 'batch', commands: [{ kind: 'setStart', point: null }, { kind: 'setEnd', point: null }] })}>Clear both</button>
     </fieldset>
   );

@@ -1,5 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState, type KeyboardEvent } from 'react';
+import type { DesignCommand } from '@shared/design/commands.ts';
 import type { Design, Units } from '@shared/design/design.schema.ts';
+import { guardBlockEdit } from '@shared/editor/blockGuard.ts';
 import type { Guide } from '@shared/editor/guides.ts';
 import { joinLines, type JoinProposal } from '@shared/joins/findJoins.ts';
 import { formatSize } from '@shared/units/units.ts';
@@ -20,6 +22,7 @@ import type { DesignDocument } from './useDesignDocument.ts';
 import { useEditHistory } from './useEditHistory.ts';
 import { usePatchMotif } from './usePatchMotif.ts';
 import { useStageSize } from './useStageSize.ts';
+import { toolHint } from './toolHints.ts';
 import { useToolController } from './useToolController.ts';
 import { useViewportControl } from './useViewportControl.ts';
 import { zoomOf } from './viewport.ts';
@@ -50,12 +53,19 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
   const [snapOn, setSnapOn] = useState(true);
   const [showGrid, setShowGrid] = useState(true);
   const [guides, setGuides] = useState<readonly Guide[]>([]);
-  const [endsMode, setEndsMode] = useState<'start' | 'end'>('start');
   const [showKeys, setShowKeys] = useState(false);
   const [announce, setAnnounce] = useState('');
   const motif = usePatchMotif(design);
 
-  const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, endsMode, dispatch: history.dispatch, onPickPatch: motif.pickPatchAt });
+  const [notice, setNotice] = useState<string | null>(null);
+  // Every edit passes the block check first (quilting lines stay inside the block, as the server requires).
+  const { dispatch: historyDispatch } = history;
+  const dispatch = useCallback((cmd: DesignCommand) => {
+    const guarded = guardBlockEdit(design, cmd);
+    setNotice(guarded.notice);
+    if (guarded.command) historyDispatch(guarded.command);
+  }, [design, historyDispatch]);
+  const ctl = useToolController({ tool, design, scale: vp.view.scale, snapOn, guides, dispatch, onPickPatch: motif.pickPatchAt });
   const check = useRouteCheck(designId, design, doc.savedCheck, doc.status.kind);
   const [shownJoin, setShownJoin] = useState<JoinProposal | null>(null);
   const joinPreview = useMemo(() => (shownJoin ? joinLines(shownJoin) : null), [shownJoin]);
@@ -68,6 +78,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
   const { clearOwnOrder } = ctl;
   const chooseTool = useCallback((t: ToolId) => {
     setTool(t);
+    setNotice(null);
     if (t === 'order') clearOwnOrder();
     setAnnounce(`${TOOLS.find((x) => x.id === t)?.label ?? t} tool`);
   }, [clearOwnOrder]);
@@ -76,7 +87,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
     design,
     selection: ctl.selection,
     setSelection: ctl.setSelection,
-    dispatch: history.dispatch,
+    dispatch,
     addGuideLine: (g) => setGuides((gs) => [...gs, g]),
     announce: setAnnounce,
   });
@@ -129,7 +140,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
       <div className="grid gap-3 lg:grid-cols-[11rem_minmax(0,1fr)_20rem]">
         <aside className="flex flex-col gap-3">
           <Toolbar tool={tool} onTool={chooseTool} />
-          {tool === 'ends' && <EndsPanel mode={endsMode} onMode={setEndsMode} dispatch={history.dispatch} />}
+          {tool === 'ends' && ctl.progress.kind === 'ends' && <EndsPanel next={ctl.progress.next} onNext={ctl.chooseEndsStep} dispatch={dispatch} />}
         </aside>
         <div className="flex min-w-0 flex-col gap-2">
           <CanvasBar history={history} selection={ctl.selection} edits={edits} hasGuides={guides.length > 0} onClearGuides={() => setGuides([])} snapOn={snapOn} onSnap={setSnapOn} showGrid={showGrid} onGrid={setShowGrid} viewport={vp} zoomPct={Math.round(zoomOf(vp.view, design.units) * 100)} />
@@ -150,6 +161,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
             preview={motifShown ?? joinPreview ?? ctl.preview}
             guides={guides}
           />
+          <p className="text-sm text-indigo-ink" data-testid="tool-hint" aria-live="polite">{notice ?? toolHint(tool, ctl.progress)}</p>
           <p className="text-xs text-denim-700">
             Wheel or two fingers: move · Ctrl+wheel or pinch: zoom · {snapOn ? 'Snapping to grid, seam ends, crossings, midpoints and guides' : 'Snapping off'} · Press <kbd>?</kbd> for all keys.
           </p>
@@ -160,7 +172,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
           doc={doc}
           viewerUnits={viewerUnits}
           unitPair={unitPair}
-          dispatch={history.dispatch}
+          dispatch={dispatch}
           motif={tool === 'motif' ? motif : null}
           check={check}
           shownJoin={shownJoin}
@@ -169,7 +181,7 @@ export function Workbench({ designId, doc, design, viewerUnits }: WorkbenchProps
           player={player}
           onClearOwn={() => {
             ctl.clearOwnOrder();
-            history.dispatch({ kind: 'setRoute', route: null });
+            dispatch({ kind: 'setRoute', route: null });
           }}
         />
       </div>

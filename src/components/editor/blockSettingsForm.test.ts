@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { applyCommand } from '@shared/design/commands.ts';
 import type { Design } from '@shared/design/design.schema.ts';
-import { defaultOf, settingCommand } from './blockSettingsForm.ts';
+import { FIELD_WORDS } from '@shared/forms/plainMessages.ts';
+import { BLOCK_SETTING_FIELDS, defaultOf, settingCommand } from './blockSettingsForm.ts';
 
 const block: Design = { version: 1, units: 'in', width: 12, height: 12, seams: [], lines: [], edgeTravel: true, thread: { spi: 12 } };
 
@@ -23,6 +24,20 @@ describe('settingCommand', () => {
     expect(settingCommand(block, 'spi', '2').ok).toBe(false); // schema: SPI 4–30
     expect(settingCommand(block, 'bindingBand', '-1').ok).toBe(false);
     expect(settingCommand(block, 'tieOffTail', 'abc').ok).toBe(false);
+  });
+
+  it('words each refusal in plain words naming the field, from the shared table (no zod wording)', () => {
+    expect(settingCommand(block, 'spi', '2')).toEqual({ ok: false, message: 'Stitches per inch must be at least 4.' });
+    expect(settingCommand(block, 'bindingBand', '-1')).toEqual({ ok: false, message: 'Binding band width must be more than 0.' });
+    expect(settingCommand(block, 'tieOffTail', 'abc')).toEqual({ ok: false, message: 'Tie-off tail must be a number; leave it empty for the default.' });
+    // 12 in: BATTING_SPACING_MAX (from memory, see design.schema.ts).
+    const batting = settingCommand(block, 'battingSpacing', '99999');
+    expect(batting).toEqual({ ok: false, message: expect.stringMatching(/^Batting spacing limit can be at most 12 in/) });
+    expect(settingCommand(block, 'battingSpacing', '10').ok).toBe(true);
+  });
+
+  it('labels the fields with the same words the message table uses', () => {
+    for (const f of BLOCK_SETTING_FIELDS) expect(FIELD_WORDS[f.key], f.key).toBe(f.label);
   });
 
   it('binding band goes through setBindingBand and undoes to the default', () => {

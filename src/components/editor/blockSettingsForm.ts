@@ -1,5 +1,6 @@
 import { applyCommand, type DesignCommand } from '@shared/design/commands.ts';
-import { bindingBandOf, designSchema, type Design, type ThreadSettings } from '@shared/design/design.schema.ts';
+import { bindingBandOf, designInputSchema, type Design, type ThreadSettings } from '@shared/design/design.schema.ts';
+import { fieldWords, plainIssue } from '@shared/forms/plainMessages.ts';
 import { THREAD_DEFAULTS } from '@shared/route/threadBudget.ts';
 
 /** A number the quilter may set for the block; `thread` keys live in `design.thread`, `bindingBand` on the design. */
@@ -47,13 +48,14 @@ export type SettingInput = { readonly ok: true; readonly command: DesignCommand 
 export function settingCommand(design: Design, key: BlockSettingKey, text: string): SettingInput {
   const trimmed = text.trim();
   const value = trimmed === '' ? null : Number(trimmed);
-  if (value !== null && !Number.isFinite(value)) return { ok: false, message: 'Enter a number, or leave it empty for the default.' };
+  if (value !== null && !Number.isFinite(value)) return { ok: false, message: `${fieldWords([key])} must be a number; leave it empty for the default.` };
   if (value === ownValueOf(key, design)) return { ok: true, command: null };
   const command = key === 'bindingBand' ? { kind: 'setBindingBand' as const, value } : threadCommand(design.thread ?? {}, key, value);
-  const checked = designSchema.safeParse(applyCommand(design, command).design);
+  const checked = designInputSchema.safeParse(applyCommand(design, command).design, { error: plainIssue });
   if (checked.success) return { ok: true, command };
-  const issue = checked.error.issues[0];
-  return { ok: false, message: issue ? `Not accepted: ${issue.message.toLowerCase()}.` : 'Not accepted.' };
+  // The message about this field first (an older drawing may fail other input rules too).
+  const issue = checked.error.issues.find((i) => i.path[i.path.length - 1] === key) ?? checked.error.issues[0];
+  return { ok: false, message: issue?.message ?? 'This value is not accepted.' };
 }
 
 function threadCommand(thread: ThreadSettings, key: keyof ThreadSettings, value: number | null): DesignCommand {

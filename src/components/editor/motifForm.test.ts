@@ -1,8 +1,17 @@
 import { describe, expect, it } from 'vitest';
 import { generateMotif, MOTIFS, motifParamsSchema } from '@shared/motifs/motifs.ts';
+import { FIELD_WORDS } from '@shared/forms/plainMessages.ts';
 import { buildMotifParams, defaultMotifValues, MOTIF_FIELDS } from './motifForm.ts';
 
 describe('motif panel values', () => {
+  it('labels every field with the message table’s words, and a bad value is refused naming it plainly', () => {
+    for (const { kind } of MOTIFS) for (const f of MOTIF_FIELDS[kind]) expect(FIELD_WORDS[f.key], `${kind}.${f.key}`).toBe(f.label);
+    const square: [number, number][] = [[0, 0], [4, 0], [4, 4], [0, 4]];
+    const r = generateMotif(square, { kind: 'straight-lines', spacing: -1, angle: 0 });
+    if (r.ok || r.error.kind !== 'invalid-params') throw new Error('expected a refusal');
+    expect(r.error.issues.map((i) => i.message)).toEqual(['Spacing must be more than 0.']);
+  });
+
   it('every motif’s default values pass the generator’s own schema, in inches and in cm', () => {
     for (const { kind } of MOTIFS) {
       for (const units of ['in', 'cm'] as const) {

@@ -36,7 +36,7 @@ export function usePatchMotif(design: Design): PatchMotif {
     if (!patch) return null;
     const r = generateMotif(patch.polygon, buildMotifParams(kind, values));
     if (r.ok) return { ok: true, lines: r.value.lines };
-    return { ok: false, message: r.error.kind === 'invalid-params' ? r.error.issues.map((i) => `${i.path}: ${i.message}`).join('; ') : 'This motif does not fit this patch shape.' };
+    return { ok: false, message: r.error.kind === 'invalid-params' ? r.error.issues.map((i) => i.message).join(' ') : 'This motif does not fit this patch shape.' };
   }, [patch, kind, values]);
 
   const pickPatchAt = useCallback((p: Point) => {

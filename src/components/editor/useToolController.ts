@@ -2,7 +2,8 @@ import { useCallback, useMemo, useRef, useState } from 'react';
 import type { DesignCommand, LineTarget } from '@shared/design/commands.ts';
 import type { Design } from '@shared/design/design.schema.ts';
 import type { Point, Polyline } from '@shared/geometry/point.ts';
-import { createDrawTool, stepDrawTool, type DrawMode, type DrawToolState } from '@shared/editor/drawTools.ts';
+import { createDrawTool, isDrawing, stepDrawTool, type DrawMode, type DrawToolState } from '@shared/editor/drawTools.ts';
+import { chooseEndsStep, createEndsTool, stepEndsTool, type EndsStep, type EndsToolState } from '@shared/editor/endsTool.ts';
 import { projectOntoGuide, type Guide } from '@shared/editor/guides.ts';
 import { collectSnapTargets, snapPoint, type SnapKind } from '@shared/editor/snap.ts';
 import { orientOwnRoute, pickLine } from '@shared/editor/pickLine.ts';
@@ -10,9 +11,14 @@ import { createSelectTool, stepSelectTool, type Selection, type SelectToolState 
 import type { ToolEvent } from '@shared/editor/tool.types.ts';
 import type { CanvasPointer } from './canvas/EditorStage.tsx';
 import type { ToolId } from './Toolbar.tsx';
+import type { ToolProgress } from './toolHints.ts';
 import { SNAP_RADIUS_PX, snapGridPitch } from './tools/snapSettings.ts';
 
 export type { Selection };
+
+const NO_LINES: readonly Polyline[] = [];
+/** How far (CSS px) a press may move and still be a click, and two clicks still a double-click. */
+const CLICK_SLOP_PX = 4;
 
 export interface ToolController {
   readonly preview: readonly Polyline[];
@@ -20,6 +26,12 @@ export interface ToolController {
   readonly selection: Selection | null;
   readonly ownOrder: readonly number[];
   readonly cursor: string;
+  /** Where the tool is in its gesture, for the hint under the canvas. */
+  readonly progress: ToolProgress;
+  /** A word shown beside the pointer (the start-and-end tool names the end the next click sets), or null. */
+  readonly pointerTag: { readonly point: Point; readonly text: string } | null;
+  /** The start-and-end tool's step chosen in the side column. */
+  chooseEndsStep(next: EndsStep): void;
   onPointer(e: CanvasPointer): void;
   onDoubleClick(point: Point): void;
   /** Enter / Escape / Backspace for the tool in use; true when the tool used the key. */
@@ -34,8 +46,6 @@ export interface ToolOptions {
   readonly scale: number;
   readonly snapOn: boolean;
   readonly guides: readonly Guide[];
-  /** Which end the start/end tool places. */
-  readonly endsMode: 'start' | 'end';
   readonly dispatch: (cmd: DesignCommand) => void;
   /** Motif tool: a click picks the patch under the point. */
   readonly onPickPatch: (p: Point) => void;
@@ -45,11 +55,12 @@ function drawModeOf(tool: ToolId, scale: number): DrawMode | null {
   switch (tool) {
     case 'ruler':
     case 'seam':
-      return { kind: 'ruler' };
+      // A press released within the slop is a click (then a second click ends the line), not a drag.
+      return { kind: 'ruler', clickSlop: CLICK_SLOP_PX / scale };
     case 'polyline':
-      return { kind: 'polyline' };
+      return { kind: 'polyline', clickSlop: CLICK_SLOP_PX / scale };
     case 'curve':
-      return { kind: 'curve', samplesPerSpan: 16 };
+      return { kind: 'curve', samplesPerSpan: 16, clickSlop: CLICK_SLOP_PX / scale };
     case 'freehand':
       // Simplify to 1.5 screen px: wobble of the hand, not of the design.
       return { kind: 'freehand', tolerance: 1.5 / scale, smoothingPasses: 2 };
@@ -64,16 +75,22 @@ function drawModeOf(tool: ToolId, scale: number): DrawMode | null {
  * start/end and stitching-order tools (one command per click) are handled here. Every finished gesture is exactly one command.
  */
 export function useToolController(o: ToolOptions): ToolController {
-  const { tool, design, scale, snapOn, guides, endsMode, dispatch, onPickPatch } = o;
-  const [preview, setPreview] = useState<readonly Polyline[]>([]);
+  const { tool, design, scale, snapOn, guides, dispatch, onPickPatch } = o;
+  // The preview remembers the tool that drew it, so a line left half-drawn vanishes when the tool changes.
+  const [previewOf, setPreviewOf] = useState<{ readonly tool: ToolId; readonly lines: readonly Polyline[] }>({ tool, lines: [] });
+  const setPreview = useCallback((lines: readonly Polyline[]) => setPreviewOf({ tool, lines }), [tool]);
   const [snapped, setSnapped] = useState<ToolController['snapped']>(null);
   const [selection, setSelectionState] = useState<Selection | null>(null);
   const [ownOrder, setOwnOrder] = useState<readonly number[]>([]);
   const draw = useRef<DrawToolState | null>(null);
   const select = useRef<SelectToolState>(createSelectTool());
+  const ends = useRef<EndsToolState | null>(null);
+  const [, setEndsShown] = useState<EndsToolState | null>(null);
   const targets = useMemo(() => (design && snapOn ? collectSnapTargets(design) : []), [design, snapOn]);
   const mode = drawModeOf(tool, scale);
   const lineTarget: LineTarget = tool === 'seam' ? 'seams' : 'lines';
+  if (tool !== 'ends') ends.current = null;
+  else if (!ends.current) ends.current = createEndsTool();
   if (mode === null) draw.current = null;
   else if (!draw.current || draw.current.mode.kind !== mode.kind || draw.current.target !== lineTarget) draw.current = createDrawTool(lineTarget, mode);
 
@@ -96,6 +113,14 @@ export function useToolController(o: ToolOptions): ToolController {
     draw.current = step.state;
     setPreview(step.preview ?? []);
     if (step.command) dispatch(step.command);
+  }, [dispatch, setPreview]);
+
+  const runEnds = useCallback((event: ToolEvent) => {
+    if (!ends.current) return;
+    const step = stepEndsTool(ends.current, event);
+    ends.current = step.state;
+    setEndsShown(step.state);
+    if (step.command) dispatch(step.command);
   }, [dispatch]);
 
   const runSelect = useCallback((event: ToolEvent) => {
@@ -105,7 +130,7 @@ export function useToolController(o: ToolOptions): ToolController {
     setSelectionState(step.state.selection);
     setPreview(step.preview ?? []);
     if (step.command) dispatch(step.command);
-  }, [design, scale, dispatch]);
+  }, [design, scale, dispatch, setPreview]);
 
   const setSelection = useCallback((next: Selection | null) => {
     select.current = { selection: next, drag: null };
@@ -134,7 +159,7 @@ export function useToolController(o: ToolOptions): ToolController {
         else runSelect({ kind: e.type === 'move' ? 'pointerMove' : 'pointerUp', point: s.point });
         return;
       case 'ends':
-        if (e.type === 'down') dispatch(endsMode === 'start' ? { kind: 'setStart', point: s.point } : { kind: 'setEnd', point: s.point });
+        runEnds({ kind: e.type === 'down' ? 'pointerDown' : e.type === 'move' ? 'pointerMove' : 'pointerUp', point: s.point });
         return;
       case 'order':
         if (e.type === 'down') {
@@ -151,11 +176,15 @@ export function useToolController(o: ToolOptions): ToolController {
       default:
         return;
     }
-  }, [design, snap, runDraw, runSelect, scale, tool, dispatch, endsMode, ownOrder, onPickPatch]);
+  }, [design, snap, runDraw, runEnds, runSelect, setPreview, scale, tool, dispatch, ownOrder, onPickPatch]);
 
   const onKey = useCallback((key: 'Enter' | 'Escape' | 'Backspace'): boolean => {
-    if (draw.current && draw.current.points.length > 0) {
+    if (draw.current && isDrawing(draw.current)) {
       runDraw({ kind: 'key', key });
+      return true;
+    }
+    if (key === 'Escape' && ends.current?.next === 'end') {
+      runEnds({ kind: 'key', key });
       return true;
     }
     if (key === 'Escape' && select.current.drag) {
@@ -163,19 +192,32 @@ export function useToolController(o: ToolOptions): ToolController {
       return true;
     }
     return false;
-  }, [runDraw, runSelect]);
+  }, [runDraw, runEnds, runSelect]);
 
   const onDoubleClick = useCallback((point: Point) => {
     if (draw.current) runDraw({ kind: 'doubleClick', point: snap(point).point });
   }, [runDraw, snap]);
 
+  const chooseEnds = useCallback((next: EndsStep) => {
+    if (!ends.current) return;
+    ends.current = chooseEndsStep(ends.current, next);
+    setEndsShown(ends.current);
+  }, []);
+
+  // Read from the refs during render: every step sets state, so the render after it sees the new step.
+  const endsNow = ends.current;
+  const progress: ToolProgress = endsNow ? { kind: 'ends', next: endsNow.next } : draw.current && isDrawing(draw.current) ? { kind: 'drawing' } : { kind: 'idle' };
+  const pointerTag = endsNow?.hover ? { point: endsNow.hover, text: endsNow.next === 'start' ? 'Start' : 'Finish' } : null;
   const cursor = tool === 'select' ? 'default' : tool === 'motif' || tool === 'order' ? 'pointer' : 'crosshair';
   return {
-    preview,
+    preview: previewOf.tool === tool ? previewOf.lines : NO_LINES,
     snapped,
     selection,
     ownOrder,
     cursor,
+    progress,
+    pointerTag,
+    chooseEndsStep: chooseEnds,
     onPointer,
     onDoubleClick,
     onKey,

@@ -2,11 +2,12 @@
 import { z } from 'zod';
 import { calendarDate, isoInstant } from '../inputRules.ts';
 
-const text = (max: number) => z.string().trim().min(1, 'Required.').max(max, `At most ${max} characters.`);
+// Lengths and ranges without a message of their own are worded by shared/forms/plainMessages.ts, naming the field.
+const text = (max: number) => z.string().trim().min(1).max(max);
 
 const classFields = {
   title: text(200),
-  description: z.string().trim().max(5000, 'At most 5000 characters.'),
+  description: z.string().trim().max(5000),
   startsOn: calendarDate,
   /** Price in the smallest currency unit (cents); kept for a later payments feature. Null = free. */
   priceCents: z.number().int().min(0).max(10_000_000).nullable(),
@@ -27,7 +28,7 @@ export const NOTES_MAX = 20_000;
 const lessonFields = {
   title: text(200),
   releaseAt: isoInstant,
-  notes: z.string().max(NOTES_MAX, `At most ${NOTES_MAX} characters.`),
+  notes: z.string().max(NOTES_MAX),
   templateVersionId: z.uuid('Choose a template version.'),
 };
 export const createLessonSchema = z.object({ ...lessonFields, notes: lessonFields.notes.default(''), confirmed }).strict();

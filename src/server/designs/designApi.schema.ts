@@ -1,7 +1,7 @@
 // Request shapes for /api/designs/… (zod). Designs themselves go through the shared designSchema, so the
 // server and the workbench refuse the same things (non-finite numbers, far-away points, 1-point lines, caps).
 import { z } from 'zod';
-import { DESIGN_LIMITS, designSchema } from '@shared/design/design.schema.ts';
+import { DESIGN_LIMITS, designInputSchema, designSchema } from '@shared/design/design.schema.ts';
 import { planSettingsSchema } from '@shared/route/planSettings.ts';
 import type { BodyLimit } from '../http.ts';
 import { pgInt } from '../inputRules.ts';
@@ -21,10 +21,12 @@ const title = z.string().trim().min(1, 'Give the design a title.').max(200, 'Kee
 const notes = z.string().max(10_000, 'Keep notes to 10,000 characters.');
 const version = pgInt(1);
 
-export const createDesignSchema = z.object({ title, notes: notes.default(''), design: designSchema }).strict();
+// New and saved drawings meet the input rules (batting spacing range, quilting lines inside the block); drafts sent
+// for a check or plan only need to be readable: the planner clips lines to the block itself.
+export const createDesignSchema = z.object({ title, notes: notes.default(''), design: designInputSchema }).strict();
 
 export const updateDesignSchema = z
-  .object({ baseVersion: version, title: title.optional(), notes: notes.optional(), design: designSchema.optional() })
+  .object({ baseVersion: version, title: title.optional(), notes: notes.optional(), design: designInputSchema.optional() })
   .strict()
   .refine((b) => b.title !== undefined || b.notes !== undefined || b.design !== undefined, { message: 'Send a title, notes or design to save.' });
 export type UpdateDesignInput = z.infer<typeof updateDesignSchema>;

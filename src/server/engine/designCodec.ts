@@ -7,6 +7,7 @@ import { designSchema, type Design } from '@shared/design/design.schema.ts';
 import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
 import { createDesignSchema, draftSchema, planRequestSchema, saveRouteSchema, updateDesignSchema } from '../designs/designApi.schema.ts';
 import { assertNever } from '@shared/assertNever.ts';
+import { plainIssue } from '@shared/forms/plainMessages.ts';
 import type { AcceptBodyAnswer, AcceptStoredAnswer, BodyShape, PlainIssue } from './engine.types.ts';
 
 export const BODY_SCHEMAS = {
@@ -58,7 +59,7 @@ export function acceptBody(text: string, shape: BodyShape): AcceptBodyAnswer {
   } catch {
     return { ok: false, reason: 'invalid-json' };
   }
-  const parsed = BODY_SCHEMAS[shape].safeParse(data);
+  const parsed = BODY_SCHEMAS[shape].safeParse(data, { error: plainIssue });
   if (!parsed.success) return { ok: false, reason: 'invalid', issues: plainIssues(parsed.error) };
   return acceptParsedBody(shape, parsed.data as Record<string, unknown>);
 }

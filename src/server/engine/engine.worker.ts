@@ -8,6 +8,10 @@ import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
 import type { WorkerReply } from './workerPool.ts';
 import type { EngineTask } from './engine.types.ts';
 import { runEngineTask, type EngineContext } from './engineTasks.ts';
+import { installPlainMessages } from '@shared/forms/plainMessages.ts';
+
+// The worker has its own module graph: its design checks need the plain messages too.
+installPlainMessages();
 
 const port = parentPort;
 if (!port) throw new Error('server/engine/engine.worker: must run as a worker thread');

@@ -14,8 +14,8 @@ export const publishTemplateSchema = z
   .object({
     /** The teacher's own design; its saved route and figures are copied into the published version. */
     designId: z.uuid('Choose one of your designs.'),
-    title: z.string().trim().min(1, 'Required.').max(200, 'At most 200 characters.'),
-    description: z.string().trim().max(5000, 'At most 5000 characters.').default(''),
+    title: z.string().trim().min(1).max(200),
+    description: z.string().trim().max(5000).default(''),
     difficulty: difficultySchema,
     motifs: z.array(motif).max(12, 'At most 12 motif tags.').default([]),
     visibility: visibilitySchema,
@@ -27,8 +27,8 @@ export const publishTemplateSchema = z
 export const newVersionSchema = z
   .object({
     designId: z.uuid('Choose one of your designs.').optional(),
-    title: z.string().trim().min(1, 'Required.').max(200, 'At most 200 characters.').optional(),
-    description: z.string().trim().max(5000, 'At most 5000 characters.').optional(),
+    title: z.string().trim().min(1).max(200).optional(),
+    description: z.string().trim().max(5000).optional(),
     difficulty: difficultySchema.optional(),
     motifs: z.array(motif).max(12, 'At most 12 motif tags.').optional(),
     visibility: visibilitySchema.optional(),

@@ -1,4 +1,4 @@
-import { Circle, Group, Layer, Line, Shape } from 'react-konva';
+import { Circle, Group, Label, Layer, Line, Shape, Tag, Text } from 'react-konva';
 import type { Point, Polyline } from '@shared/geometry/point.ts';
 import type { Guide } from '@shared/editor/guides.ts';
 import type { GapView } from '../../route/routeCheckView.ts';
@@ -15,10 +15,12 @@ export interface OverlayLayerProps {
   readonly guides: readonly Guide[];
   /** The widest gap from the gap check, drawn as its empty circle. */
   readonly gap: GapView | null;
+  /** A word beside the pointer (which end the start-and-end tool sets next), or null. */
+  readonly pointerTag: { readonly point: Point; readonly text: string } | null;
 }
 
 /** Ephemeral marks over the design: preview, snap point, marking guides and the widest gap. View only. */
-export function OverlayLayer({ view, theme, preview, snapped, guides, gap }: OverlayLayerProps) {
+export function OverlayLayer({ view, theme, preview, snapped, guides, gap, pointerTag }: OverlayLayerProps) {
   const px = 1 / view.scale;
   return (
     <Layer listening={false}>
@@ -40,6 +42,12 @@ export function OverlayLayer({ view, theme, preview, snapped, guides, gap }: Ove
             lineCap="round"
             lineJoin="round"
           />
+        )}
+        {pointerTag && (
+          <Label x={pointerTag.point[0] + 10 * px} y={pointerTag.point[1] + 10 * px} scaleX={px} scaleY={px}>
+            <Tag fill={theme.paper} stroke={theme.line} strokeWidth={1} cornerRadius={3} />
+            <Text text={pointerTag.text} fontSize={12} padding={3} fill={theme.line} />
+          </Label>
         )}
         {snapped && <Circle x={snapped[0]} y={snapped[1]} radius={5 * px} stroke={theme.preview} strokeWidth={1.5} strokeScaleEnabled={false} />}
       </Group>

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
-import { convertLength, formatArea, formatLength, formatSize, formatThread, inchFraction, parseInchInput } from './units.ts';
+import { convertLength, formatArea, formatLength, formatSize, formatThread, inchFraction, lengthInputText, parseInchInput, parseLengthInput } from './units.ts';
 
 // Conversion factors are exact by definition (international yard and pound agreement, 1959): 1 in = 2.54 cm,
 // 1 yd = 0.9144 m.
@@ -54,5 +54,29 @@ describe('units', () => {
       const v = whole + sixteenths / 16;
       return parseInchInput(inchFraction(v)) === v;
     }));
+  });
+});
+
+describe('length fields (issue 14: a quilter types 1/16 or 0.0625)', () => {
+  it('reads ruler fractions and decimals in inches, decimals with a point or comma in centimetres', () => {
+    expect(parseLengthInput('1/16', 'in')).toBe(0.0625);
+    expect(parseLengthInput('0.0625', 'in')).toBe(0.0625);
+    expect(parseLengthInput('2 1/4 in', 'in')).toBe(2.25);
+    expect(parseLengthInput('1,5', 'cm')).toBe(1.5);
+    expect(parseLengthInput('0.3 cm', 'cm')).toBe(0.3);
+    expect(parseLengthInput('1/2', 'cm')).toBeUndefined();
+    expect(parseLengthInput('abc', 'in')).toBeUndefined();
+  });
+
+  it('shows inches on a 1/16 mark as the fraction a ruler prints, anything else as a decimal', () => {
+    expect(lengthInputText(0.0625, 'in')).toBe('1/16');
+    expect(lengthInputText(2.25, 'in')).toBe('2 1/4');
+    expect(lengthInputText(3, 'in')).toBe('3');
+    expect(lengthInputText(0.3, 'in')).toBe('0.3');
+    expect(lengthInputText(0.32, 'cm')).toBe('0.32');
+  });
+
+  it('reads back what it shows (property over every 1/16 in mark up to 40 in)', () => {
+    for (let k = 1; k <= 640; k++) expect(parseLengthInput(lengthInputText(k / 16, 'in'), 'in')).toBe(k / 16);
   });
 });

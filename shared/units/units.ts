@@ -84,3 +84,19 @@ export interface UnitPair {
   readonly design: Units;
   readonly viewer: Units;
 }
+
+/**
+ * Reads a length typed into a field in `units`: inches as a ruler reads them ("1/16", "1 1/2", "0.0625" — see
+ * parseInchInput), centimetres as a decimal with a point or a comma ("1.5", "1,5"). Undefined when it is not one.
+ */
+export function parseLengthInput(text: string, units: Units): number | undefined {
+  if (units === 'in') return parseInchInput(text);
+  const t = text.trim().replace(/\s*cm\.?$/i, '').replace(',', '.');
+  return /^\d*\.?\d+$/.test(t) ? Number(t) : undefined;
+}
+
+/** A length as a field shows it: inches as a ruler fraction when it falls on a 1/16 mark ("1/16", "2 1/4"), else a decimal. */
+export function lengthInputText(value: number, units: Units): string {
+  if (units === 'in' && Math.abs(value * 16 - Math.round(value * 16)) < 1e-9) return inchFraction(value, 16);
+  return trimDecimals(value, units === 'in' ? 4 : 2);
+}

@@ -1,3 +1,4 @@
+import { parseLengthInput } from '@shared/units/units.ts';
 import { useId, useState, type FormEvent } from 'react';
 import type { Units } from '@shared/design/design.schema.ts';
 import { COMMON_BLOCK_SIZES } from '@shared/layouts/blockSizes.ts';
@@ -13,6 +14,9 @@ export interface NewDesignFormProps {
 }
 
 /** Title, finished size and starting layout; creates the design through the API and opens the workbench. */
+/** Typed sizes read as a ruler reads them ("12 1/2" in inches); anything else goes on for the form's message. */
+const lengthOrText = (text: string, units: Units) => parseLengthInput(text, units) ?? text;
+
 export function NewDesignForm({ units }: NewDesignFormProps) {
   const sizes = COMMON_BLOCK_SIZES[units];
   const [title, setTitle] = useState('');
@@ -27,7 +31,7 @@ export function NewDesignForm({ units }: NewDesignFormProps) {
   async function submit(e: FormEvent) {
     e.preventDefault();
     const custom = size === 'custom';
-    const parsed = readNewDesignForm({ title, units, width: custom ? customW : size, height: custom ? customH : size, layout });
+    const parsed = readNewDesignForm({ title, units, width: custom ? lengthOrText(customW, units) : size, height: custom ? lengthOrText(customH, units) : size, layout });
     if (!parsed.ok) {
       setErrors(parsed.errors);
       return;

@@ -1,7 +1,7 @@
 import { useEffect, useId, useState, type KeyboardEvent } from 'react';
 import type { DesignCommand } from '@shared/design/commands.ts';
 import type { Design } from '@shared/design/design.schema.ts';
-import { BLOCK_SETTING_FIELDS, defaultOf, ownValueOf, settingCommand, type BlockSettingField } from './blockSettingsForm.ts';
+import { BLOCK_SETTING_FIELDS, defaultOf, ownValueOf, settingCommand, settingText, type BlockSettingField } from './blockSettingsForm.ts';
 
 export interface BlockSettingsPanelProps {
   readonly design: Design;
@@ -33,16 +33,17 @@ export function BlockSettingsPanel({ design, dispatch, generation }: BlockSettin
 function SettingInput({ field, design, dispatch, generation }: { field: BlockSettingField; design: Design; dispatch: (cmd: DesignCommand) => void; generation: number }) {
   const id = useId();
   const own = ownValueOf(field.key, design);
-  const [text, setText] = useState(own === null ? '' : String(own));
+  const units = design.units;
+  const [text, setText] = useState(own === null ? '' : settingText(field.key, { units }, own));
   const [message, setMessage] = useState<string | null>(null);
   // Undo, redo and going back change the value from outside: show what the design now holds.
   useEffect(() => {
-    setText(own === null ? '' : String(own));
+    setText(own === null ? '' : settingText(field.key, { units }, own));
     setMessage(null);
-  }, [own, generation]);
+  }, [own, generation, field.key, units]);
   const d = defaultOf(field.key, design);
   const unit = field.unit === 'design' ? design.units : field.unit;
-  const hint = d.value === null ? 'No default: set it to compare gaps.' : `Default ${d.value} ${unit}${d.fromMemory ? ' (from memory)' : ''}`;
+  const hint = d.value === null ? 'No default: set it to compare gaps.' : `Default ${settingText(field.key, design, d.value)} ${unit}${d.fromMemory ? ' (from memory)' : ''}`;
 
   function commit() {
     const r = settingCommand(design, field.key, text);
@@ -65,7 +66,7 @@ function SettingInput({ field, design, dispatch, generation }: { field: BlockSet
         type="text"
         inputMode="decimal"
         value={text}
-        placeholder={d.value === null ? 'not set' : String(d.value)}
+        placeholder={d.value === null ? 'not set' : settingText(field.key, design, d.value)}
         onChange={(e) => setText(e.target.value)}
         onBlur={commit}
         onKeyDown={onKeyDown}

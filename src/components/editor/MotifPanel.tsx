@@ -1,6 +1,7 @@
-import { useId } from 'react';
+import { useId, useState } from 'react';
 import type { Units } from '@shared/design/design.schema.ts';
 import { MOTIFS, type MotifKind } from '@shared/motifs/motifs.ts';
+import { lengthInputText, parseLengthInput } from '@shared/units/units.ts';
 import { MOTIF_FIELDS } from './motifForm.ts';
 
 export interface MotifPanelProps {
@@ -32,18 +33,46 @@ export function MotifPanel({ units, kind, values, patchName, result, onKind, onV
         {MOTIF_FIELDS[kind].map((f) => (
           <label key={f.key} className="block">
             <span className="block">{f.label}{f.unit === 'length' ? ` (${units})` : f.unit === 'degrees' ? ' (°)' : ''}</span>
-            <input
-              type="number"
-              step={f.step}
-              value={values[f.key] ?? ''}
-              onChange={(e) => onValue(f.key, e.target.valueAsNumber)}
-              className="mt-0.5 w-full rounded border border-muslin-300 px-2 py-1"
-            />
+            {f.unit === 'length' ? (
+              <LengthInput units={units} value={values[f.key]} onValue={(v) => onValue(f.key, v)} />
+            ) : (
+              <input
+                type="number"
+                step={f.step}
+                value={values[f.key] ?? ''}
+                onChange={(e) => onValue(f.key, e.target.valueAsNumber)}
+                className="mt-0.5 w-full rounded border border-muslin-300 px-2 py-1"
+              />
+            )}
           </label>
         ))}
       </div>
       {result && (result.ok ? <p className="mt-2">{result.lines} line{result.lines === 1 ? '' : 's'} in the preview.</p> : <p className="mt-2 text-madder-600" role="alert">{result.message}</p>)}
       <button type="button" disabled={!result?.ok || result.lines === 0} onClick={onPlace} className="mt-2 rounded bg-denim-600 px-3 py-1.5 font-semibold text-white disabled:opacity-50">Place motif</button>
     </section>
+  );
+}
+
+/**
+ * A length typed as a quilter reads a ruler: "1/4", "1 1/2" or "0.25" in inches, decimals in centimetres. Shows the
+ * text as typed while it means the value the panel holds; when the value changes from outside, shows that value
+ * (on a 1/16 in mark as a fraction). Text that is not a length yet sends NaN, which the motif form refuses.
+ */
+function LengthInput({ units, value, onValue }: { units: Units; value: number | undefined; onValue: (v: number) => void }) {
+  const [text, setText] = useState(() => (value !== undefined && Number.isFinite(value) ? lengthInputText(value, units) : ''));
+  const parsed = parseLengthInput(text, units);
+  const inSync = parsed === value || (parsed === undefined && !(value !== undefined && Number.isFinite(value)));
+  const shown = inSync || value === undefined ? text : lengthInputText(value, units);
+  return (
+    <input
+      type="text"
+      inputMode="decimal"
+      value={shown}
+      onChange={(e) => {
+        setText(e.target.value);
+        onValue(parseLengthInput(e.target.value, units) ?? Number.NaN);
+      }}
+      className="mt-0.5 w-full rounded border border-muslin-300 px-2 py-1"
+    />
   );
 }

@@ -2,6 +2,8 @@ import { applyCommand, type DesignCommand } from '@shared/design/commands.ts';
 import { bindingBandOf, designInputSchema, type Design, type ThreadSettings } from '@shared/design/design.schema.ts';
 import { fieldWords, plainIssue } from '@shared/forms/plainMessages.ts';
 import { THREAD_DEFAULTS } from '@shared/route/threadBudget.ts';
+import { lengthInputText, parseLengthInput } from '@shared/units/units.ts';
+import type { Units } from '@shared/design/design.schema.ts';
 
 /** A number the quilter may set for the block; `thread` keys live in `design.thread`, `bindingBand` on the design. */
 export type BlockSettingKey = keyof ThreadSettings | 'bindingBand';
@@ -38,6 +40,19 @@ export function ownValueOf(key: BlockSettingKey, design: Design): number | null 
   return design.thread?.[key] ?? null;
 }
 
+/** The length unit a field is typed in (inch fields take ruler fractions), or null for counts and speeds. */
+export function lengthUnitsOf(key: BlockSettingKey, design: Pick<Design, 'units'>): Units | null {
+  const field = BLOCK_SETTING_FIELDS.find((f) => f.key === key);
+  if (!field) return null;
+  return field.unit === 'design' ? design.units : field.unit === 'in' ? 'in' : null;
+}
+
+/** A setting's value as its field shows it: "1/16" rather than 0.0625 in an inch field. */
+export function settingText(key: BlockSettingKey, design: Pick<Design, 'units'>, value: number): string {
+  const units = lengthUnitsOf(key, design);
+  return units ? lengthInputText(value, units) : String(value);
+}
+
 export type SettingInput = { readonly ok: true; readonly command: DesignCommand | null } | { readonly ok: false; readonly message: string };
 
 /**
@@ -47,8 +62,12 @@ export type SettingInput = { readonly ok: true; readonly command: DesignCommand 
  */
 export function settingCommand(design: Design, key: BlockSettingKey, text: string): SettingInput {
   const trimmed = text.trim();
-  const value = trimmed === '' ? null : Number(trimmed);
-  if (value !== null && !Number.isFinite(value)) return { ok: false, message: `${fieldWords([key])} must be a number; leave it empty for the default.` };
+  const units = lengthUnitsOf(key, design);
+  const value = trimmed === '' ? null : units ? (parseLengthInput(trimmed, units) ?? Number(trimmed)) : Number(trimmed);
+  if (value !== null && !Number.isFinite(value)) {
+    const example = units === 'in' ? ' (like 1/4 or 0.25)' : '';
+    return { ok: false, message: `${fieldWords([key])} must be a number${example}; leave it empty for the default.` };
+  }
   if (value === ownValueOf(key, design)) return { ok: true, command: null };
   const command = key === 'bindingBand' ? { kind: 'setBindingBand' as const, value } : threadCommand(design.thread ?? {}, key, value);
   const checked = designInputSchema.safeParse(applyCommand(design, command).design, { error: plainIssue });

@@ -38,7 +38,7 @@ describe('pages', () => {
   it('shows the signed-in header: Account, Sign out, and Admin only for admins', async () => {
     const q = await createAccount();
     const dash = await q.client.get('/dashboard');
-    expect(dash.text).toContain('My designs');
+    expect(dash.text).toContain('My latest designs');
     expect(dash.text).toContain('href="/designs"');
     expect(dash.text).toContain('action="/sign-out"');
     expect(dash.text).not.toContain('href="/admin/accounts"');

@@ -26,6 +26,7 @@ beforeAll(async () => {
   const cls = await teacher.client.post('/api/classes', { title: 'Offline sewing class', description: 'At the machine', startsOn: '2027-01-05' });
   const lesson = await teacher.client.post(`/api/classes/${cls.body.class.id}/lessons`, {
     title: 'Lesson 1: away from the router', releaseAt: new Date(Date.now() - 3_600_000).toISOString(), notes: 'Press the block first.', templateVersionId: versionId,
+    confirmed: true, // released an hour ago, before the class's start date: the teacher says yes to both questions
   });
   expect(lesson.status).toBe(201);
   expect((await student.client.post('/api/classes/join', { code: cls.body.class.joinCode })).status).toBe(200);

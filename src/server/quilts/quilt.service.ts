@@ -69,7 +69,7 @@ export async function updateQuilt(
   db: Kysely<Database>,
   ownerId: string,
   id: string,
-  input: { baseVersion: number; title?: string; quilt?: Quilt },
+  input: { baseVersion: number; title?: string | undefined; quilt?: Quilt | undefined },
 ): Promise<Result<QuiltRow, QuiltSaveFailure>> {
   if (input.quilt) {
     const bad = await badPlacements(db, ownerId, input.quilt);

@@ -61,3 +61,15 @@ export async function liveOwnedDesignIds(db: Db, ownerId: string, ids: readonly 
   const rows = await db.selectFrom('design').select('id').where('owner_id', '=', ownerId).where('deleted_at', 'is', null).where('id', 'in', [...ids]).execute();
   return new Set(rows.map((r) => r.id));
 }
+
+/** The owner's live designs among these ids, with their version and drawing as JSON text (ids must be uuids). */
+export async function liveOwnedDesignTexts(db: Db, ownerId: string, ids: readonly string[]): Promise<{ id: string; version: number; data_json: string }[]> {
+  if (ids.length === 0) return [];
+  return db
+    .selectFrom('design')
+    .select(['id', 'version', sql<string>`data::text`.as('data_json')])
+    .where('owner_id', '=', ownerId)
+    .where('deleted_at', 'is', null)
+    .where('id', 'in', [...ids])
+    .execute();
+}

@@ -1,6 +1,6 @@
 // Issue 15: a quilter makes a 2 × 2 quilt on /quilts, places one of their designs (the demo guild's drawings, built the
 // way the seed builds them) in the top-left cell, turns it a quarter, saves, reloads and finds it kept. The quilt
-// page and the list at the three widths, nothing wider than the viewport. Screenshots in test-output/screenshots.
+// page (with the route planned across the quilt) and the list at the three widths, nothing wider than the viewport. Screenshots in test-output/screenshots.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
 import { createAccount, type TestAccount } from '../helpers/accounts.ts';
@@ -55,6 +55,12 @@ describe('a quilt map', () => {
     await cell.waitFor();
     expect(await cell.locator('img').getAttribute('data-rotation')).toBe('90');
     expect(await page.getByTestId('finished-size').textContent()).toBe('32 × 32 in');
+
+    // The route across the saved quilt, planned in the engine's worker pool: one block placed, so one step.
+    await page.getByRole('button', { name: 'Plan the route across the quilt' }).click();
+    const route = page.getByTestId('quilt-route');
+    await route.waitFor({ timeout: 30_000 });
+    expect(await route.locator('li').allTextContents()).toEqual([expect.stringMatching(/^Row 1, column 1: start at the (top|bottom) (left|right) corner, end at the (top|bottom) (left|right)\.$/)]);
 
     for (const size of WIDTHS) {
       await page.setViewportSize(size);

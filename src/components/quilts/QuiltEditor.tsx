@@ -9,6 +9,7 @@ import { blockRect, bordersWidth, finishedSize } from '@shared/quilt/finishedSiz
 import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
+import { QuiltRoutePanel } from './QuiltRoutePanel.tsx';
 import { budgetOf, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
 
 export interface QuiltEditorProps {
@@ -194,8 +195,10 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
         {notice && <p role={notice.tone === 'warn' ? 'alert' : 'status'} className={notice.tone === 'warn' ? 'font-semibold text-madder-600' : 'text-denim-700'}>{notice.text}</p>}
       </aside>
 
+      <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} />
+
       <section className="lg:col-span-2" aria-labelledby="budget-heading">
-        <h2 id="budget-heading" className="text-xl font-bold">Quilt budget</h2>
+        <h2 id="budget-heading" className="text-xl font-bold">Quilt budget, block by block</h2>
         {budget ? (
           <>
             <p className="mt-1">Each block quilted on its own, from the blocks' planned routes.</p>

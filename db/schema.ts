@@ -20,6 +20,7 @@ export interface Database {
   design: DesignTable;
   design_version: DesignVersionTable;
   design_route: DesignRouteTable;
+  quilt: QuiltTable;
 }
 
 export type Role = 'quilter' | 'teacher' | 'admin';
@@ -247,3 +248,16 @@ export interface DesignRouteTable {
   updated_at: UpdatedAt;
 }
 export type DesignRouteRow = Selectable<DesignRouteTable>;
+
+/** A quilt map owned by one account (migration 2026_12_05_0930); `data` is checked by shared/quilt/quilt.schema.ts. */
+export interface QuiltTable {
+  id: Generated<string>;
+  owner_id: string;
+  title: string;
+  data: Jsonb;
+  version: ColumnType<number, number | undefined, number>;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+  deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+}
+export type QuiltRow = Selectable<QuiltTable>;

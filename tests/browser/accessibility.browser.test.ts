@@ -65,13 +65,22 @@ describe('accessibility (axe-core: no serious or critical finding; every control
     expect(found).toEqual({});
   });
 
-  it('the quilter: dashboard, designs, new design, a workbench, account, classes, a class and its lesson', async () => {
+  it('the quilter: dashboard, designs, new design, quilts, a quilt map, a workbench, account, classes, a class and its lesson', async () => {
     await signInAs('Tobias Wren');
     const page = browser.page;
     const found: Record<string, AxeFinding[] | string[]> = {};
     for (const path of ['/dashboard', '/designs/new', '/account', '/classes']) await audit(page, path, found);
     await audit(page, '/designs', found, (p) => p.waitForFunction(() => !document.body.innerText.includes('Loading'), undefined, { timeout: 30_000 }));
     const design = (await links(page, /^\/designs\/[0-9a-f-]{36}$/))[0]!;
+    // A quilt map of one of his designs (made through the API from the page, as the new-quilt form does).
+    const designId = design.split('/').pop()!;
+    const quiltId = await page.evaluate(async (id) => {
+      const quilt = { version: 1, units: 'in', rows: 2, columns: 2, block: { width: 12, height: 12 }, placements: [[{ designId: id, rotation: 90 }, null], [null, null]], sashing: 1, borders: [2] };
+      const res = await fetch('/api/quilts', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ title: 'Accessibility sampler', quilt }) });
+      return ((await res.json()) as { quilt: { id: string } }).quilt.id;
+    }, designId);
+    await audit(page, '/quilts', found);
+    await audit(page, `/quilts/${quiltId}`, found, (p) => p.getByTestId('finished-size').waitFor({ timeout: 30_000 }));
     await audit(page, design, found, (p) => p.locator('section[aria-label="Route check"] [data-figure="stitch-length"]').first().waitFor({ timeout: 30_000 }));
     await page.goto('/classes');
     const cls = (await links(page, /^\/classes\/[0-9a-f-]{36}$/))[0]!;

@@ -8,6 +8,7 @@ import { designSchema, type Design } from '@shared/design/design.schema.ts';
 import { buildDesignSvg } from '@shared/export/designSvg.ts';
 import type { DesignPayload, EngineAnswers, EngineTask } from './engine.types.ts';
 import { acceptBody, acceptStored, parseDesignText, plainIssues } from './designCodec.ts';
+import { planQuiltOf } from './quiltPlanTask.ts';
 
 function designOf(payload: DesignPayload): Design {
   return 'designText' in payload ? parseDesignText(payload.designText) : payload.design;
@@ -46,6 +47,8 @@ export function runEngineTask(task: EngineTask, context: EngineContext): EngineA
       const planned = planDesign(designOf(task), { ...exact, stopsTable: true, ...(task.settings ? { settings: task.settings } : {}) });
       return planned.ok ? { ok: true, value: toPlanResult(planned.value) } : { ok: false, problem: planned.error };
     }
+    case 'quiltPlan':
+      return planQuiltOf(task, exact);
     case 'acceptBody':
       return acceptBody(task.text, task.shape);
     case 'acceptStored':

@@ -62,6 +62,14 @@ export const matrixRows: MatrixRow[] = [
   { route: 'PATCH /api/admin/accounts/[id]', path: (w) => `/api/admin/accounts/${w.accounts.otherQuilter.id}`, body: {}, expect: s(401, 404, 404, 400, 404, 404) },
   { route: 'POST /api/admin/storage-sweep', path: () => '/api/admin/storage-sweep', expect: s(401, 404, 404, 200, 404, 404) },
 
+  // Quilts: the owner only, like designs
+  { route: 'GET /api/quilts', path: () => '/api/quilts', expect: signedIn(200) },
+  { route: 'POST /api/quilts', path: () => '/api/quilts', body: {}, expect: signedIn(400) },
+  { route: 'GET /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, expect: s(401, 200, 404, 404, 404, 404) },
+  { route: 'PUT /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, body: { baseVersion: 999, title: 'taken over' }, expect: s(401, 409, 404, 404, 404, 404), note: 'stale baseVersion: the owner gets 409 and nothing changes' },
+  { route: 'POST /api/quilts/[id]/plan', path: (w) => `/api/quilts/${w.quiltId}/plan`, expect: s(401, 200, 404, 404, 404, 404) },
+  { route: 'DELETE /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, send: fresh((w) => w.fresh.quiltId(), (w) => w.quiltId, (_, id) => `/api/quilts/${id}`), expect: s(401, 200, 404, 404, 404, 404) },
+
   // Designs: the owner only (admins included in "not the owner")
   { route: 'GET /api/designs', path: () => '/api/designs', expect: signedIn(200) },
   { route: 'POST /api/designs', path: () => '/api/designs', body: {}, expect: signedIn(400) },
@@ -143,6 +151,8 @@ export const matrixRows: MatrixRow[] = [
   { route: 'GET /account', path: () => '/account', expect: page(200) },
   { route: 'GET /admin/accounts', path: () => '/admin/accounts', expect: s(302, 404, 404, 200, 404, 404) },
   { route: 'GET /designs', path: () => '/designs', expect: page(200) },
+  { route: 'GET /quilts', path: () => '/quilts', expect: page(200) },
+  { route: 'GET /quilts/[id]', path: (w) => `/quilts/${w.quiltId}`, expect: s(302, 200, 404, 404, 404, 404), note: 'the quilt map opens only on the owner’s quilt' },
   { route: 'GET /designs/new', path: () => '/designs/new', expect: page(200) },
   { route: 'GET /designs/[id]', path: (w) => `/designs/${w.designId}`, expect: s(302, 200, 404, 404, 404, 404), note: 'the workbench opens only on the owner’s design' },
   { route: 'GET /templates', path: () => '/templates', expect: all(200) },

@@ -34,11 +34,14 @@ export interface SecurityWorld {
   unlistedToken: string;
   designId: string;
   otherDesignId: string;
+  /** The quilter's quilt (one block: designId), version 1. */
+  quiltId: string;
   photoId: string;
   invitationToken: string;
   png: Uint8Array;
   fresh: {
     design(owner?: TestAccount): Promise<string>;
+    quiltId(): Promise<string>;
     classId(): Promise<string>;
     lessonId(): Promise<string>;
     invitationId(): Promise<string>;
@@ -88,6 +91,9 @@ export async function buildSecurityWorld(): Promise<SecurityWorld> {
   const designId = await designWithRoute(quilter, 'Kestrel private design');
   await expectOk(quilter.client.put(`/api/designs/${designId}`, { baseVersion: 1, notes: 'second version' }), 200);
   const otherDesignId = await designWithRoute(otherQuilter, 'Kestrel neighbour design');
+  const newQuilt = async () =>
+    (await expectOk(quilter.client.post('/api/quilts', { title: 'Kestrel quilt', quilt: { version: 1, units: 'in', rows: 1, columns: 1, block: { width: 12, height: 12 }, placements: [[{ designId }]] } }), 201)).quilt.id as string;
+  const quiltId = await newQuilt();
 
   const png = new Uint8Array(await sharp({ create: { width: 48, height: 32, channels: 3, background: '#5d7a8c' } }).png().toBuffer());
   const uploadPhoto = async () => {
@@ -115,11 +121,13 @@ export async function buildSecurityWorld(): Promise<SecurityWorld> {
     unlistedToken: (unlisted.linkPath as string).split('/').pop()!,
     designId,
     otherDesignId,
+    quiltId,
     photoId,
     invitationToken,
     png,
     fresh: {
       design: async (owner = quilter) => (await expectOk(owner.client.post('/api/designs', { title: 'Fresh design', design: block() }), 201)).design.id,
+      quiltId: newQuilt,
       classId: async () => (await expectOk(teacher.client.post('/api/classes', { title: 'Fresh class', startsOn: daysAhead(117) }), 201)).class.id,
       lessonId: async () =>
         (await expectOk(teacher.client.post(`/api/classes/${cls.class.id}/lessons`, { title: 'Fresh lesson', releaseAt: new Date(Date.now() + 86_400_000).toISOString(), templateVersionId: classTemplate.version.id, confirmed: true }), 201))

@@ -1,0 +1,261 @@
+import { useCallback, useEffect, useId, useMemo, useState } from 'react';
+import { z } from 'zod';
+import type { Units } from '@shared/design/design.schema.ts';
+import { designListSchema, type DesignListItem } from '@shared/contract/designs.ts';
+import { quiltRecordSchema, type QuiltRecord } from '@shared/contract/quilts.ts';
+import type { DesignSummary } from '@shared/contract/figures.ts';
+import type { Quilt } from '@shared/quilt/quilt.schema.ts';
+import { blockRect, bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
+import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
+import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
+import { apiRequest } from '../designs/apiClient.ts';
+import { QuiltRoutePanel } from './QuiltRoutePanel.tsx';
+import { budgetOf, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+
+export interface QuiltEditorProps {
+  readonly quiltId: string;
+  readonly viewerUnits: Units;
+}
+
+const TRIM_LABELS: Record<keyof typeof TRIM_SOURCES, string> = { seamAllowance: 'Joining seam', shrinkage: 'Shrinkage while quilting', margin: 'Extra fabric and batting beyond each cut line' };
+
+const answerSchema = z.object({ quilt: quiltRecordSchema });
+type Cell = { row: number; column: number };
+
+/**
+ * The quilt map: the grid of blocks with the placed designs' pictures (turned and mirrored as they sit), sashing and
+ * border widths, the finished size in the viewer's units; a picked cell takes one of my designs, a quarter turn or a
+ * mirror. Saves with the version it was loaded at; when the quilt was saved elsewhere meanwhile (409) it says so
+ * and shows the saved copy.
+ */
+export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
+  const [record, setRecord] = useState<QuiltRecord | null>(null);
+  const [quilt, setQuilt] = useState<Quilt | null>(null);
+  const [designs, setDesigns] = useState<readonly DesignListItem[]>([]);
+  const [picked, setPicked] = useState<Cell>({ row: 0, column: 0 });
+  const [dirty, setDirty] = useState(false);
+  const [saving, setSaving] = useState(false);
+  const [notice, setNotice] = useState<{ tone: 'ok' | 'warn'; text: string } | null>(null);
+  const [loadError, setLoadError] = useState<string | null>(null);
+  const ids = { design: useId(), sashing: useId(), border: useId() };
+
+  const show = useCallback((r: QuiltRecord) => {
+    setRecord(r);
+    setQuilt(r.quilt as Quilt);
+    setDirty(false);
+  }, []);
+
+  useEffect(() => {
+    let live = true;
+    void (async () => {
+      const [q, d] = await Promise.all([apiRequest('GET', `/api/quilts/${quiltId}`), apiRequest('GET', '/api/designs?sort=title&dir=asc&pageSize=100')]);
+      if (!live) return;
+      if (!q.ok) return setLoadError(q.error.message);
+      const parsed = answerSchema.safeParse(q.value);
+      if (!parsed.success) return setLoadError('The quilt could not be read.');
+      show(parsed.data.quilt);
+      const list = d.ok ? designListSchema.safeParse(d.value) : null;
+      if (list?.success) setDesigns(list.data.designs);
+      else setNotice({ tone: 'warn', text: 'Your designs could not be loaded, so blocks cannot be placed just now. Reload the page to try again.' });
+    })();
+    return () => {
+      live = false;
+    };
+  }, [quiltId, show]);
+
+  const byId = useMemo(() => new Map(designs.map((d) => [d.id, d])), [designs]);
+  const summaries = useMemo(() => new Map<string, DesignSummary | null>(designs.map((d) => [d.id, d.summary])), [designs]);
+
+  if (loadError) return <p className="mt-4 font-semibold text-madder-600" role="alert">{loadError}</p>;
+  if (!record || !quilt) return <p className="mt-4">Loading the quilt…</p>;
+
+  const edit = (next: Quilt) => {
+    setQuilt(next);
+    setDirty(true);
+    setNotice(null);
+  };
+
+  async function save() {
+    if (!record || !quilt) return;
+    setSaving(true);
+    const res = await apiRequest('PUT', `/api/quilts/${record.id}`, { baseVersion: record.version, quilt });
+    setSaving(false);
+    if (res.ok) {
+      const parsed = answerSchema.safeParse(res.value);
+      if (parsed.success) show(parsed.data.quilt);
+      setNotice({ tone: 'ok', text: 'Saved.' });
+      return;
+    }
+    if (res.error.kind === 'http' && res.error.status === 409) {
+      const current = answerSchema.safeParse(res.error.body);
+      if (current.success) show(current.data.quilt);
+      setNotice({ tone: 'warn', text: 'This quilt was saved in another tab or window while you worked. Your changes here were not saved; the saved copy is shown now.' });
+      return;
+    }
+    setNotice({ tone: 'warn', text: `Not saved: ${res.error.message}` });
+  }
+
+  const size = finishedSize(quilt);
+  const border = bordersWidth(quilt);
+  const cell = quilt.placements[picked.row]?.[picked.column] ?? null;
+  const trim = trimTableOf(quilt);
+  const { budget, missing } = budgetOf(quilt, summaries);
+  const pct = (v: number, of: number) => `${(100 * v) / of}%`;
+  const len = (v: number) => formatLength(v, quilt.units, viewerUnits);
+
+  return (
+    <div className="mt-4 grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
+      <section aria-label="Quilt map">
+        <p className="mb-2">
+          Finished size <strong data-testid="finished-size">{formatSize(size.width, size.height, quilt.units, viewerUnits)}</strong>
+          {' '}· {quilt.rows} × {quilt.columns} blocks of {formatSize(quilt.block.width, quilt.block.height, quilt.units, viewerUnits)}
+        </p>
+        <div className="relative mx-auto w-full max-w-2xl border border-indigo-ink bg-ochre-100" style={{ aspectRatio: `${size.width} / ${size.height}` }}>
+          {border > 0 && <span className="sr-only">Border {len(border)} wide all round.</span>}
+          {quilt.placements.flatMap((cells, row) =>
+            cells.map((p, column) => {
+              const r = blockRect(quilt, { row, column });
+              const d = p ? byId.get(p.designId) : undefined;
+              const isPicked = picked.row === row && picked.column === column;
+              const name = `Row ${row + 1}, column ${column + 1}: ${p ? `${d?.title ?? 'a design'}${p.rotation ? `, turned ${p.rotation}°` : ''}${p.mirror ? ', mirrored' : ''}` : 'empty'}`;
+              return (
+                <button
+                  key={`${row}-${column}`}
+                  type="button"
+                  aria-label={name}
+                  aria-pressed={isPicked}
+                  data-cell={`${row}-${column}`}
+                  onClick={() => setPicked({ row, column })}
+                  className={`absolute overflow-hidden bg-white ${isPicked ? 'z-10 outline outline-4 outline-denim-600' : 'outline outline-1 outline-muslin-300'}`}
+                  style={{ left: pct(r.x, size.width), top: pct(r.y, size.height), width: pct(r.width, size.width), height: pct(r.height, size.height) }}
+                >
+                  {p && d?.thumbnailSvg ? (
+                    <img
+                      src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`}
+                      alt=""
+                      data-rotation={p.rotation}
+                      data-mirror={p.mirror}
+                      className="h-full w-full"
+                      style={{ transform: `rotate(${p.rotation}deg)${p.mirror ? ' scaleX(-1)' : ''}` }}
+                    />
+                  ) : (
+                    <span className="text-sm text-denim-700">{p ? (d?.title ?? 'Design') : 'Empty'}</span>
+                  )}
+                </button>
+              );
+            }),
+          )}
+        </div>
+      </section>
+
+      <aside className="space-y-4">
+        <section className="rounded border border-muslin-300 bg-muslin-50 p-3" aria-label="Picked block">
+          <h2 className="font-bold">Row {picked.row + 1}, column {picked.column + 1}</h2>
+          <label htmlFor={ids.design} className="mt-2 block font-semibold">Design</label>
+          <select
+            id={ids.design}
+            className="mt-1 block w-full rounded border border-muslin-300 bg-white px-2 py-2"
+            value={cell?.designId ?? ''}
+            onChange={(e) => edit(placeDesign(quilt, picked.row, picked.column, e.target.value || null))}
+          >
+            <option value="">Empty</option>
+            {cell && !byId.has(cell.designId) && <option value={cell.designId}>A design no longer in your list</option>}
+            {designs.map((d) => (
+              <option key={d.id} value={d.id}>{d.title}</option>
+            ))}
+          </select>
+          <div className="mt-2 flex flex-wrap gap-2">
+            <button type="button" disabled={!cell} onClick={() => edit(turnQuarter(quilt, picked.row, picked.column))} className="rounded border border-denim-600 px-3 py-1 font-semibold text-denim-700 disabled:opacity-50">
+              Turn a quarter
+            </button>
+            <button type="button" disabled={!cell} onClick={() => edit(toggleMirror(quilt, picked.row, picked.column))} className="rounded border border-denim-600 px-3 py-1 font-semibold text-denim-700 disabled:opacity-50">
+              {cell?.mirror ? 'Unmirror' : 'Mirror'}
+            </button>
+          </div>
+          {cell && <p className="mt-1 text-sm">Turned {cell.rotation}° clockwise{cell.mirror ? ', mirrored left to right' : ''}.</p>}
+        </section>
+
+        <section className="grid grid-cols-2 gap-3 rounded border border-muslin-300 bg-muslin-50 p-3" aria-label="Sashing and border">
+          <div>
+            <label htmlFor={ids.sashing} className="block font-semibold">Sashing ({quilt.units})</label>
+            <input id={ids.sashing} type="number" min={0} step={quilt.units === 'in' ? 0.125 : 0.5} className="mt-1 block w-full rounded border border-muslin-300 bg-white px-2 py-2" value={quilt.sashing} onChange={(e) => edit(setFrame(quilt, Number(e.target.value) || 0, border))} />
+          </div>
+          <div>
+            <label htmlFor={ids.border} className="block font-semibold">Border ({quilt.units})</label>
+            <input id={ids.border} type="number" min={0} step={quilt.units === 'in' ? 0.125 : 0.5} className="mt-1 block w-full rounded border border-muslin-300 bg-white px-2 py-2" value={border} onChange={(e) => edit(setFrame(quilt, quilt.sashing, Number(e.target.value) || 0))} />
+          </div>
+        </section>
+
+        <div className="flex flex-wrap items-center gap-3">
+          <button type="button" onClick={() => void save()} disabled={saving || !dirty} className="rounded bg-denim-600 px-5 py-2 font-semibold text-white hover:bg-denim-700 disabled:opacity-60">
+            {saving ? 'Saving…' : 'Save quilt'}
+          </button>
+          <span aria-live="polite" className="text-sm">{dirty ? 'Unsaved changes' : `Saved, version ${record.version}`}</span>
+        </div>
+        {notice && <p role={notice.tone === 'warn' ? 'alert' : 'status'} className={notice.tone === 'warn' ? 'font-semibold text-madder-600' : 'text-denim-700'}>{notice.text}</p>}
+      </aside>
+
+      <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} />
+
+      <section className="lg:col-span-2" aria-labelledby="budget-heading">
+        <h2 id="budget-heading" className="text-xl font-bold">Quilt budget, block by block</h2>
+        {budget ? (
+          <>
+            <p className="mt-1">Each block quilted on its own, from the blocks' planned routes.</p>
+            <dl className="mt-2 grid grid-cols-2 gap-x-6 gap-y-1 sm:grid-cols-4">
+              <dt>Passes</dt><dd className="font-semibold">{budget.passes}</dd>
+              <dt>Stitched</dt><dd className="font-semibold">{len(budget.stitchLength)}</dd>
+              <dt>Travel</dt><dd className="font-semibold">{len(budget.travelLength)}</dd>
+              <dt>Stitches</dt><dd className="font-semibold">{budget.total.stitchCount.toLocaleString()}</dd>
+              <dt>Top thread</dt><dd className="font-semibold">{formatThread(budget.total.topThreadYards, viewerUnits)}</dd>
+              <dt>Bobbin thread</dt><dd className="font-semibold">{formatThread(budget.total.bobbinThreadYards, viewerUnits)}</dd>
+              <dt>Bobbins</dt><dd className="font-semibold">{budget.total.bobbins}</dd>
+              <dt>Sewing time</dt><dd className="font-semibold">about {Math.round(budget.total.sewingMinutes)} min</dd>
+            </dl>
+            <details className="mt-2 text-sm">
+              <summary>Where these numbers come from</summary>
+              <ul className="ml-5 list-disc">
+                {budget.total.assumptions.map((a) => <li key={a.setting}>{a.setting}: {String(a.value)} ({a.source})</li>)}
+              </ul>
+            </details>
+          </>
+        ) : (
+          <p className="mt-1">{missing > 0 ? `${missing} placed block${missing === 1 ? ' has' : 's have'} no planned figures yet; the budget follows when every block has them.` : 'Place a design to see the budget.'}</p>
+        )}
+      </section>
+
+      <section className="lg:col-span-2" aria-labelledby="trim-heading">
+        <h2 id="trim-heading" className="text-xl font-bold">Quilt-as-you-go trim plan</h2>
+        {'problem' in trim ? (
+          <p className="mt-1">{trim.problem}</p>
+        ) : trim.rows.length === 0 ? (
+          <p className="mt-1">Place a design to see how each block is trimmed.</p>
+        ) : (
+          <>
+            <p className="mt-1 text-sm">Lengths in {quilt.units === 'in' ? 'inches' : 'centimetres'}, the quilt's own units. Settings in use:</p>
+            <ul className="ml-5 list-disc text-sm">
+              {trim.assumptions.map((a) => (
+                <li key={a.setting}>{TRIM_LABELS[a.setting]} {a.setting === 'shrinkage' ? `${a.value} %` : formatLength(a.value, quilt.units, quilt.units)} ({a.source === 'quilt' ? 'set for this quilt' : a.source})</li>
+              ))}
+            </ul>
+            <div className="mt-2 overflow-x-auto">
+              <table className="min-w-full text-left text-sm">
+                <thead>
+                  <tr className="border-b border-muslin-300"><th className="p-2">Block</th><th className="p-2">Position</th><th className="p-2">Make at</th><th className="p-2">Cut to</th><th className="p-2">Top</th><th className="p-2">Right</th><th className="p-2">Bottom</th><th className="p-2">Left</th></tr>
+                </thead>
+                <tbody>
+                  {trim.rows.map((r) => (
+                    <tr key={r.block} className="border-b border-muslin-200 align-top">
+                      <th scope="row" className="p-2 font-semibold">{r.block}</th><td className="p-2">{r.position}</td><td className="p-2">{r.makeAt}</td><td className="p-2">{r.cutTo}</td>
+                      <td className="p-2">{r.sides.top}</td><td className="p-2">{r.sides.right}</td><td className="p-2">{r.sides.bottom}</td><td className="p-2">{r.sides.left}</td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
+          </>
+        )}
+      </section>
+    </div>
+  );
+}

@@ -4,6 +4,7 @@ import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { findAccountRowByEmail } from '@server/accounts/account.repository.ts';
 import { seedGuildClass } from './guildClass.ts';
+import { seedGuildQuilt } from './guildQuilt.ts';
 import { seedDesign } from './guildDesigns.ts';
 import { saoirseDrawings, tobiasDrawings } from './guildDrawings.ts';
 
@@ -20,7 +21,7 @@ export interface GuildPeople {
   readonly saoirse: string | undefined;
 }
 
-/** Adds the guild's designs, template and class for the people (e-mails) named; idempotent. */
+/** Adds the guild's designs, templates, class and quilt for the people (e-mails) named; idempotent. */
 export async function seedGuildContent(db: Kysely<Database>, emails: GuildPeople, now: Date) {
   const [teacher, tobias, saoirse] = await Promise.all([emails.teacher, emails.tobias, emails.saoirse].map((e) => accountId(db, e)));
   let designs = 0;
@@ -28,5 +29,6 @@ export async function seedGuildContent(db: Kysely<Database>, emails: GuildPeople
     for (const d of drawings) if ((await seedDesign(db, owner, d)).added) designs += 1;
   }
   const taught = await seedGuildClass(db, teacher!, [tobias!, saoirse!], now);
-  return { designs, ...taught };
+  const quilts = await seedGuildQuilt(db, teacher!);
+  return { designs, ...taught, quilts };
 }

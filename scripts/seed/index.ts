@@ -29,5 +29,5 @@ for (const account of demo.accounts) {
 console.log(`[seed] demo guild: ${added} account(s) added, ${demo.accounts.length - added} already present`);
 const emailOf = (name: string) => demo.accounts.find((a) => a.displayName === name)?.email;
 const content = await seedGuildContent(db, { teacher: emailOf('Marigold Ashby'), tobias: emailOf('Tobias Wren'), saoirse: emailOf('Saoirse Lindqvist') }, new Date());
-console.log(`[seed] demo content: ${content.designs} design(s), ${content.templates} template(s), ${content.classes} class(es), ${content.enrollments} enrollment(s) added`);
+console.log(`[seed] demo content: ${content.designs} design(s), ${content.templates} template(s), ${content.classes} class(es), ${content.enrollments} enrollment(s), ${content.quilts} quilt(s) added`);
 await db.destroy();

@@ -10,6 +10,10 @@ import { routeNote } from '@shared/walkthrough/routeNote.ts';
 import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
 import { strokePathOf, summaryOf } from '@shared/route/routeAnswers.ts';
 import { marigoldDrawings, saoirseDrawings, tobiasDrawings, type GuildDrawing } from '../../scripts/seed/guildDrawings.ts';
+import { demoQuilt } from '../../scripts/seed/guildQuilt.ts';
+import { CornerCostCache } from '@shared/quilt/cornerCostCache.ts';
+import { finishedSize } from '@shared/quilt/finishedSize.ts';
+import { planQuiltRoute } from '@shared/quilt/quiltRoute.ts';
 
 const marigold = marigoldDrawings();
 const drawings: GuildDrawing[] = [...tobiasDrawings(), ...saoirseDrawings(), marigold.ditch, marigold.echoes];
@@ -44,4 +48,24 @@ describe('the lesson notes describe the templates route', () => {
     expect(note).toMatch(/one pass/i);
     expect(note).not.toMatch(/centre/i);
   });
+});
+
+describe('the demo quilt is quilted in one pass across its blocks', () => {
+  // Outside check: with the top quilted in one piece, each block's route enters and leaves at corners and the links
+  // between blocks are travel, so the quilt needs one pass exactly when every block does (each block's corner-pair
+  // routes are one pass here: tested above for the blocks themselves; the chain is checked against brute force in
+  // shared/quilt/chain.test.ts).
+  it('Tuesday quilt-along top: 2 × 3 pinwheels, one pass, finished 44 × 31 in', async () => {
+    const quilt = demoQuilt('ditch', 'echoes');
+    const designs = new Map([
+      ['ditch', { design: marigold.ditch.design, revision: '1' }],
+      ['echoes', { design: marigold.echoes.design, revision: '1' }],
+    ]);
+    const planned = planQuiltRoute(quilt, designs, new CornerCostCache(), { solver: await loadHighsSolver() });
+    if (!planned.ok) throw new Error(planned.error.message);
+    expect(planned.value.budget.passes).toBe(1);
+    expect(planned.value.order).toHaveLength(6);
+    // 3 blocks × 12 in + 2 sashing × 1 in + 2 borders × 3 in = 44 in across; 2 × 12 + 1 + 6 = 31 in down.
+    expect(finishedSize(quilt)).toMatchObject({ width: 44, height: 31 });
+  }, 120_000);
 });

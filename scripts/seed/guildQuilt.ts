@@ -1,4 +1,4 @@
-// Marigold's quilt-along top (invented demo content): the two lesson blocks of her Tuesday quilt-along set 2 × 3,
+// Marigold's quilt-along top (invented demo content): the two lesson blocks of her Tuesday quilt-along set 4 rows × 3,
 // ditch and echoed blades alternating like a checkerboard, 1 in sashing and a 3 in border, quilted row by row from
 // the top left. Stored through the app's own quilt service; idempotent by owner + title.
 import type { Kysely } from 'kysely';
@@ -16,10 +16,10 @@ export function demoQuilt(ditchId: string, echoesId: string): Quilt {
   return quiltSchema.parse({
     version: 1,
     units: 'in',
-    rows: 2,
+    rows: 4,
     columns: 3,
     block: { width: 12, height: 12 },
-    placements: [0, 1].map((row) => [0, 1, 2].map((column) => place(row, column))),
+    placements: [0, 1, 2, 3].map((row) => [0, 1, 2].map((column) => place(row, column))),
     sashing: 1,
     borders: [3],
     order: { kind: 'rows' },

@@ -55,7 +55,7 @@ describe('the demo quilt is quilted in one pass across its blocks', () => {
   // between blocks are travel, so the quilt needs one pass exactly when every block does (each block's corner-pair
   // routes are one pass here: tested above for the blocks themselves; the chain is checked against brute force in
   // shared/quilt/chain.test.ts).
-  it('Tuesday quilt-along top: 2 × 3 pinwheels, one pass, finished 44 × 31 in', async () => {
+  it('Tuesday quilt-along top: 4 × 3 pinwheels, one pass, finished 44 × 57 in', async () => {
     const quilt = demoQuilt('ditch', 'echoes');
     const designs = new Map([
       ['ditch', { design: marigold.ditch.design, revision: '1' }],
@@ -64,8 +64,8 @@ describe('the demo quilt is quilted in one pass across its blocks', () => {
     const planned = planQuiltRoute(quilt, designs, new CornerCostCache(), { solver: await loadHighsSolver() });
     if (!planned.ok) throw new Error(planned.error.message);
     expect(planned.value.budget.passes).toBe(1);
-    expect(planned.value.order).toHaveLength(6);
-    // 3 blocks × 12 in + 2 sashing × 1 in + 2 borders × 3 in = 44 in across; 2 × 12 + 1 + 6 = 31 in down.
-    expect(finishedSize(quilt)).toMatchObject({ width: 44, height: 31 });
+    expect(planned.value.order).toHaveLength(12);
+    // 3 blocks × 12 in + 2 sashing × 1 in + 2 borders × 3 in = 44 in across; 4 × 12 + 3 × 1 + 6 = 57 in down.
+    expect(finishedSize(quilt)).toMatchObject({ width: 44, height: 57 });
   }, 120_000);
 });

@@ -3,9 +3,7 @@
 // the teacher and the admin.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { launchBrowser, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
-import { demoGuild, signIn } from '../helpers/accounts.ts';
-import { testEnv } from '../helpers/env.ts';
+import { launchBrowser, waitForIslands, type TestBrowser, signInDemoBrowser } from '../helpers/browser.ts';
 import { seriousAxeFindings, type AxeFinding } from '../helpers/axe.ts';
 
 let browser: TestBrowser;
@@ -17,11 +15,8 @@ afterAll(async () => {
 });
 
 async function signInAs(displayName: string | null): Promise<void> {
-  await browser.context.clearCookies();
-  if (!displayName) return;
-  const account = demoGuild.accounts.find((a) => a.displayName === displayName)!;
-  const client = await signIn(account.email, demoGuild.password);
-  await browser.context.addCookies([{ name: 'tw_session', value: client.sessionToken!, url: testEnv.appUrl }]);
+  if (displayName) await signInDemoBrowser(browser.context, displayName);
+  else await browser.context.clearCookies();
 }
 
 async function links(page: Page, pattern: RegExp): Promise<string[]> {

@@ -2,9 +2,7 @@
 // next lesson of each class; a teacher sees what the students did this week; templates are in the header. Checked
 // at desktop, tablet and phone widths: nothing wider than the viewport. Screenshots in test-output/screenshots.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
-import { demoGuild, signIn } from '../helpers/accounts.ts';
-import { testEnv } from '../helpers/env.ts';
+import { launchBrowser, screenshot, type TestBrowser, signInDemoBrowser } from '../helpers/browser.ts';
 import { elementsWiderThanViewport, WIDTHS } from '../helpers/layout.ts';
 
 let browser: TestBrowser;
@@ -15,12 +13,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function signInAs(displayName: string): Promise<void> {
-  const account = demoGuild.accounts.find((a) => a.displayName === displayName)!;
-  const client = await signIn(account.email, demoGuild.password);
-  await browser.context.clearCookies();
-  await browser.context.addCookies([{ name: 'tw_session', value: client.sessionToken!, url: testEnv.appUrl }]);
-}
+const signInAs = (displayName: string) => signInDemoBrowser(browser.context, displayName);
 
 describe('the dashboard', () => {
   it('a student sees their latest designs with passes and stops and the next lesson to start', async () => {

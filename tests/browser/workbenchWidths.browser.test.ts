@@ -2,17 +2,13 @@
 // the tools, the canvas and the route check all reachable, the legend under the block; the keys overlay opens over
 // the canvas without moving it and Esc closes it. Screenshots in test-output/screenshots.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
-import { demoGuild, signIn } from '../helpers/accounts.ts';
-import { testEnv } from '../helpers/env.ts';
+import { launchBrowser, screenshot, type TestBrowser, signInDemoBrowser } from '../helpers/browser.ts';
 import { elementsWiderThanViewport, WIDTHS } from '../helpers/layout.ts';
 
 let browser: TestBrowser;
 beforeAll(async () => {
-  const saoirse = demoGuild.accounts.find((a) => a.displayName === 'Saoirse Lindqvist')!;
-  const client = await signIn(saoirse.email, demoGuild.password);
   browser = await launchBrowser(WIDTHS[0]);
-  await browser.context.addCookies([{ name: 'tw_session', value: client.sessionToken!, url: testEnv.appUrl }]);
+  await signInDemoBrowser(browser.context, 'Saoirse Lindqvist');
 });
 afterAll(async () => {
   await browser?.close();

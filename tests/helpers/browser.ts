@@ -59,3 +59,13 @@ export async function screenshot(page: Page, name: string): Promise<string> {
 export async function waitForIslands(page: Page, timeoutMs = 30_000): Promise<void> {
   await page.waitForFunction(() => document.querySelectorAll('astro-island[ssr]').length === 0, undefined, { timeout: timeoutMs });
 }
+
+/** Signs the browser in as one of the demo guild's people (by display name), replacing any session it had. */
+export async function signInDemoBrowser(context: BrowserContext, displayName: string): Promise<void> {
+  const { demoGuild, signIn } = await import('./accounts.ts');
+  const account = demoGuild.accounts.find((a) => a.displayName === displayName);
+  if (!account) throw new Error(`tests/helpers/browser: the demo guild has no ${displayName}`);
+  const client = await signIn(account.email, demoGuild.password);
+  await context.clearCookies();
+  await context.addCookies([{ name: 'tw_session', value: client.sessionToken!, url: testEnv.appUrl }]);
+}

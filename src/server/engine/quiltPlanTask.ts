@@ -4,7 +4,7 @@
 import type { QuiltPlan } from '@shared/contract/quiltPlan.ts';
 import type { DesignPlanOptions } from '@shared/route/planDesign.ts';
 import { CornerCostCache } from '@shared/quilt/cornerCostCache.ts';
-import { planQuiltRoute, type QuiltDesign } from '@shared/quilt/quiltRoute.ts';
+import { planQuiltRoute, type QuiltDesign, type QuiltRoute } from '@shared/quilt/quiltRoute.ts';
 import type { EngineAnswers, EngineTask } from './engine.types.ts';
 import { parseDesignText } from './designCodec.ts';
 
@@ -19,8 +19,13 @@ export function planQuiltOf(task: Extract<EngineTask, { op: 'quiltPlan' }>, exac
     ...(task.settings ? { settings: task.settings } : {}),
   });
   if (!planned.ok) return { ok: false, quiltProblem: planned.error };
-  const { chain, budget, lowerBound } = planned.value;
-  const plan: QuiltPlan = {
+  return { ok: true, value: quiltPlanOf(planned.value) };
+}
+
+/** The quilt route cut to the contract: order, corners, travel, proof and budget. */
+export function quiltPlanOf(route: QuiltRoute): QuiltPlan {
+  const { chain, budget, lowerBound } = route;
+  return {
     units: budget.units,
     steps: chain.steps.map((s) => ({ cell: s.cell, entry: s.entry, exit: s.exit, blockCost: s.blockCost, linkBefore: s.linkBefore })),
     blockTravel: chain.blockTravel,
@@ -39,5 +44,4 @@ export function planQuiltOf(task: Extract<EngineTask, { op: 'quiltPlan' }>, exac
     assumptions: budget.total.assumptions.map((a) => ({ setting: a.setting, value: a.value, source: a.source })),
     linkModel: budget.linkModel,
   };
-  return { ok: true, value: plan };
 }

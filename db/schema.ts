@@ -21,6 +21,8 @@ export interface Database {
   design_version: DesignVersionTable;
   design_route: DesignRouteTable;
   quilt: QuiltTable;
+  corner_cost: CornerCostTable;
+  quilt_plan_job: QuiltPlanJobTable;
 }
 
 export type Role = 'quilter' | 'teacher' | 'admin';
@@ -261,3 +263,38 @@ export interface QuiltTable {
   deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 export type QuiltRow = Selectable<QuiltTable>;
+
+/**
+ * A design's corner-pair plans (migration 2026_12_05_1215) in its own corners and units, for one design version and
+ * one set of planner settings; `pairs` is checked by shared/quilt/cornerCosts.ts designCornerCostsSchema when read.
+ */
+export interface CornerCostTable {
+  design_id: string;
+  design_version: number;
+  settings_key: string;
+  pairs: Jsonb;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+export type CornerCostRow = Selectable<CornerCostTable>;
+
+export type QuiltPlanJobState = 'queued' | 'running' | 'done' | 'failed';
+
+/** One whole-quilt plan of a quilt version over given design versions (`inputs_key`), run by a planning worker. */
+export interface QuiltPlanJobTable {
+  id: Generated<string>;
+  quilt_id: string;
+  owner_id: string;
+  quilt_version: number;
+  inputs_key: string;
+  state: ColumnType<QuiltPlanJobState, QuiltPlanJobState | undefined, QuiltPlanJobState>;
+  done: ColumnType<number, number | undefined, number>;
+  total: ColumnType<number, number | undefined, number>;
+  attempts: ColumnType<number, number | undefined, number>;
+  queue_job_id: string | null;
+  result: Jsonb | null;
+  failure: Jsonb | null;
+  created_at: CreatedAt;
+  updated_at: UpdatedAt;
+}
+export type QuiltPlanJobRow = Selectable<QuiltPlanJobTable>;

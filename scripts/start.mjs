@@ -6,7 +6,7 @@ import path from 'node:path';
 import { ROOT, ensureNodeModules, ensurePostgres, log } from './lib/system.mjs';
 import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
 import { findFreePort, waitForHttp } from './lib/ports.mjs';
-import { buildApp, runTs, serveApp } from './lib/app.mjs';
+import { buildApp, runTs, serveApp, startPlanWorkerProcess } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
 import { clusterLocation } from './lib/cluster.mjs';
@@ -46,6 +46,8 @@ const app = superviseApp({
   start: () => serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: origin } }),
   onGiveUp: () => shutdown(),
 });
+// One planning worker process beside the app (whole-quilt plans from the job queue), restarted like the app.
+const planWorker = superviseApp({ start: () => startPlanWorkerProcess({ env }), onGiveUp: () => shutdown(), name: 'planning worker' });
 await waitForHttp(origin);
 
 console.log(`
@@ -54,6 +56,7 @@ console.log(`
   Demo sign-ins (password for all: ${readDemoPassword()}):
 ${readDemoAccounts().map((a) => `    ${a.role.padEnd(8)} ${a.email.padEnd(36)} ${a.displayName}`).join('\n')}
 
+  One planning worker takes whole-quilt plans from the job queue (more: node scripts/plan-worker.mjs, see README).
   Captured e-mail (fake mail server on 127.0.0.1:${mail.port}) is kept in ${env.MAIL_CAPTURE_DIR}
   ${devTools ? `and shown to admins at ${origin}/dev/mail.` : 'To read it in the browser as an admin: npm start -- --dev-tools, then /dev/mail.'}
   Stop with Ctrl-C (the database stops too; or later: npm run db:stop).
@@ -64,6 +67,7 @@ async function shutdown() {
   if (stopping) return;
   stopping = true;
   log('stopping…');
+  await planWorker.stop();
   await app.stop();
   await mail.close();
   await s3.close();

@@ -8,7 +8,7 @@ import path from 'node:path';
 import { ROOT, ensureDebianPackages, ensureNodeModules, ensurePostgres, log } from './lib/system.mjs';
 import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from './lib/postgres.mjs';
 import { findFreePort, waitForHttp } from './lib/ports.mjs';
-import { buildApp, runTs, serveApp } from './lib/app.mjs';
+import { buildApp, runTs, serveApp, startPlanWorkerProcess } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
 
@@ -96,6 +96,9 @@ try {
   const appUrl = `http://127.0.0.1:${appPort}`;
   const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: appUrl }, quiet: true });
   cleanups.push(() => server.kill('SIGTERM'));
+  // One planning worker process takes whole-quilt plans from the job queue, as under npm start.
+  const planWorker = startPlanWorkerProcess({ env, quiet: true });
+  cleanups.push(() => planWorker.kill('SIGTERM'));
   await waitForHttp(appUrl);
   log(`app under test at ${appUrl}; database ${env.DATABASE_URL}`);
 

@@ -3,7 +3,7 @@ import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, readdirSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { ROOT, fail, log } from './system.mjs';
-import { ENGINE_WORKER_OUT, bundleEngineWorker } from './engineWorker.mjs';
+import { ENGINE_WORKER_OUT, PLAN_WORKER_OUT, bundleEngineWorker } from './engineWorker.mjs';
 
 const SOURCES = ['src', 'shared', 'db', 'public', 'astro.config.mjs', 'package-lock.json', 'tsconfig.json'];
 const STAMP = path.join(ROOT, 'dist', '.threadway-build');
@@ -18,7 +18,7 @@ function newestMtime(entry) {
 /** Runs `astro build` and bundles the engine worker, unless dist/ is newer than every source file (or `force`). */
 export function buildApp({ force = false } = {}) {
   const newest = Math.max(...SOURCES.map((s) => newestMtime(path.join(ROOT, s))));
-  if (!force && existsSync(STAMP) && existsSync(ENGINE_WORKER_OUT) && statSync(STAMP).mtimeMs >= newest) {
+  if (!force && existsSync(STAMP) && existsSync(ENGINE_WORKER_OUT) && existsSync(PLAN_WORKER_OUT) && statSync(STAMP).mtimeMs >= newest) {
     log('app build is up to date.');
     return;
   }
@@ -41,6 +41,20 @@ export function serveApp({ port, env, quiet = false }) {
   const child = spawn(process.execPath, [path.join(ROOT, 'scripts', 'serve.mjs')], {
     cwd: ROOT,
     env: { ...process.env, ...env, HOST: '127.0.0.1', PORT: String(port), ASTRO_TELEMETRY_DISABLED: '1' },
+    stdio: quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],
+  });
+  if (quiet) child.stderr.on('data', (d) => process.stderr.write(d));
+  return child;
+}
+
+/**
+ * Starts one planning worker process (scripts/plan-worker.mjs → dist/jobs/planWorker.mjs) against `env.DATABASE_URL`;
+ * returns the child process. `threads`: its engine threads (default: the machine's cores).
+ */
+export function startPlanWorkerProcess({ env, threads, quiet = false }) {
+  const child = spawn(process.execPath, [path.join(ROOT, 'scripts', 'plan-worker.mjs')], {
+    cwd: ROOT,
+    env: { ...process.env, ...env, ...(threads ? { PLAN_WORKER_THREADS: String(threads) } : {}) },
     stdio: quiet ? ['ignore', 'ignore', 'pipe'] : ['ignore', 'inherit', 'inherit'],
   });
   if (quiet) child.stderr.on('data', (d) => process.stderr.write(d));

@@ -89,7 +89,7 @@ export function planQuiltRoute(quilt: Quilt, designs: ReadonlyMap<string, QuiltD
  * Step 1: the quilting order, once every placed design is there and fills its cell (its size, turned as placed and
  * in the quilt's units, equals the quilt's block size within 1/64 in).
  */
-export function checkQuiltDesigns(quilt: Quilt, designs: ReadonlyMap<string, QuiltDesign>): Result<Cell[], QuiltRouteProblem> {
+export function checkQuiltDesigns(quilt: Quilt, designs: ReadonlyMap<string, { readonly design: Pick<Design, 'units' | 'width' | 'height'> }>): Result<Cell[], QuiltRouteProblem> {
   const ordered = orderCells(quilt, quilt.order);
   if (!ordered.ok) return err({ kind: 'order', problem: ordered.error, message: ordered.error.message });
   for (const cell of ordered.value) {
@@ -135,7 +135,7 @@ export function pairsToProve(quilt: Quilt, order: readonly Cell[], tableOf: (des
 }
 
 /** Step 3: the chain over the pairs' costs (the placed tables the cache keeps) and the quilt's budget. */
-export function finishQuiltRoute(quilt: Quilt, order: readonly Cell[], designs: ReadonlyMap<string, QuiltDesign>, cache: CornerCostCache, metric: LinkMetric, bound: QuiltChain): QuiltRoute {
+export function finishQuiltRoute(quilt: Quilt, order: readonly Cell[], designs: ReadonlyMap<string, { readonly revision: string }>, cache: CornerCostCache, metric: LinkMetric, bound: QuiltChain): QuiltRoute {
   const revisionOf = (id: string): string => designs.get(id)!.revision;
   const chain = planChain(
     chainBlocksOf(quilt, order, (p) => {

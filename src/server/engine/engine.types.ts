@@ -9,9 +9,7 @@ import type { DesignSvgOptions } from '@shared/export/designSvg.ts';
 import type { DesignProblem } from '@shared/graph/designProblem.ts';
 import type { PlanSettings } from '@shared/route/planSettings.ts';
 import type { OwnRouteResult } from '@shared/route/routeAnswers.ts';
-import type { QuiltPlan } from '@shared/contract/quiltPlan.ts';
-import type { Quilt } from '@shared/quilt/quilt.schema.ts';
-import type { QuiltRouteProblem } from '@shared/quilt/quiltRoute.ts';
+import type { CornerPairPlan } from '@shared/quilt/cornerCosts.ts';
 
 /** A design for the engine: parsed and validated by the caller, or JSON text the worker parses and validates
  * itself (designSchema), so a heavy design is never parsed on the request thread. */
@@ -28,9 +26,9 @@ export type BodyShape = 'create' | 'update' | 'draft' | 'plan' | 'route';
  *   (time budget, extra stops, hidden-end allowance) were checked by planSettingsSchema; missing: the defaults;
  * - `ownRoute`: route check of the design's own `route` with drawing strokes (for saving it); the route comes
  *   inside the design, or as JSON text (`routeText`) checked against the design here;
- * - `quiltPlan`: the chained route of a quilt (planQuiltRoute) over its placed designs, given as JSON text with the
- *   revision their corner costs belong to (`id@version`); corner pairs are planned with `settings` (a short time
- *   budget each, so a small quilt fits the job's cap);
+ * - `cornerPair`: one (entry corner, exit corner) pair of a design (design corners, a ≤ b) planned as
+ *   shared/quilt/cornerCosts.ts planCornerPair does, with the exact search when `exact` (a planning worker process
+ *   sends these one by one so its threads share a whole quilt's pairs);
  * Design codec tasks (the codec pool, never behind planning):
  * - `acceptBody`: parse and validate a heavy request body; the design comes back as canonical JSON text;
  * - `acceptStored`: validate a stored design's JSON text (and build its thumbnail when asked);
@@ -42,10 +40,12 @@ export type EngineTask =
   | ({ readonly op: 'plan'; readonly settings?: PlanSettings } & DesignPayload)
   | ({ readonly op: 'ownRoute'; readonly routeText?: string } & DesignPayload)
   | {
-      readonly op: 'quiltPlan';
-      readonly quilt: Quilt;
-      readonly designs: readonly { readonly id: string; readonly revision: string; readonly designText: string }[];
-      readonly settings?: PlanSettings;
+      readonly op: 'cornerPair';
+      readonly designText: string;
+      readonly a: 0 | 1 | 2 | 3;
+      readonly b: 0 | 1 | 2 | 3;
+      readonly exact: boolean;
+      readonly settings: PlanSettings;
     }
   | { readonly op: 'acceptBody'; readonly text: string; readonly shape: BodyShape }
   | { readonly op: 'acceptStored'; readonly text: string; readonly thumbnail: boolean }
@@ -88,5 +88,5 @@ export interface EngineAnswers {
   acceptBody: AcceptBodyAnswer;
   acceptStored: AcceptStoredAnswer;
   exportSvg: string;
-  quiltPlan: { readonly ok: true; readonly value: QuiltPlan } | { readonly ok: false; readonly quiltProblem: QuiltRouteProblem };
+  cornerPair: EngineAnswer<CornerPairPlan>;
 }

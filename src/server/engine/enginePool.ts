@@ -68,7 +68,7 @@ function designCodecPool(): Pool {
   return codecPool;
 }
 
-type EngineOp = 'summary' | 'check' | 'plan' | 'ownRoute' | 'quiltPlan';
+type EngineOp = 'summary' | 'check' | 'plan' | 'ownRoute' | 'cornerPair';
 type CodecOp = 'acceptBody' | 'acceptStored' | 'exportSvg';
 
 /**

@@ -8,7 +8,7 @@ import { designSchema, type Design } from '@shared/design/design.schema.ts';
 import { buildDesignSvg } from '@shared/export/designSvg.ts';
 import type { DesignPayload, EngineAnswers, EngineTask } from './engine.types.ts';
 import { acceptBody, acceptStored, parseDesignText, plainIssues } from './designCodec.ts';
-import { planQuiltOf } from './quiltPlanTask.ts';
+import { planCornerPair } from '@shared/quilt/cornerCosts.ts';
 
 function designOf(payload: DesignPayload): Design {
   return 'designText' in payload ? parseDesignText(payload.designText) : payload.design;
@@ -47,8 +47,14 @@ export function runEngineTask(task: EngineTask, context: EngineContext): EngineA
       const planned = planDesign(designOf(task), { ...exact, stopsTable: true, ...(task.settings ? { settings: task.settings } : {}) });
       return planned.ok ? { ok: true, value: toPlanResult(planned.value) } : { ok: false, problem: planned.error };
     }
-    case 'quiltPlan':
-      return planQuiltOf(task, exact);
+    case 'cornerPair': {
+      const pair = planCornerPair(parseDesignText(task.designText), task.a, task.b, {
+        settings: task.settings,
+        clock: context.clock,
+        ...(task.exact ? { solver: context.solver } : {}),
+      });
+      return pair.ok ? { ok: true, value: pair.value } : { ok: false, problem: pair.error };
+    }
     case 'acceptBody':
       return acceptBody(task.text, task.shape);
     case 'acceptStored':

@@ -73,3 +73,20 @@ export async function liveOwnedDesignTexts(db: Db, ownerId: string, ids: readonl
     .where('id', 'in', [...ids])
     .execute();
 }
+
+/** Size, units and version of the owner's live designs among these ids (ids must be uuids): enough to check a fit. */
+export async function liveOwnedDesignShapes(db: Db, ownerId: string, ids: readonly string[]): Promise<{ id: string; version: number; units: string; width: number; height: number }[]> {
+  if (ids.length === 0) return [];
+  return db
+    .selectFrom('design')
+    .select(['id', 'version', sql<string>`data->>'units'`.as('units'), sql<number>`(data->>'width')::float8`.as('width'), sql<number>`(data->>'height')::float8`.as('height')])
+    .where('owner_id', '=', ownerId)
+    .where('deleted_at', 'is', null)
+    .where('id', 'in', [...ids])
+    .execute();
+}
+
+/** A live quilt by id, whoever owns it (for a planning worker, which has the owner from its job row). */
+export async function findLiveQuilt(db: Db, id: string): Promise<QuiltRow | undefined> {
+  return db.selectFrom('quilt').selectAll().where('id', '=', id).where('deleted_at', 'is', null).executeTakeFirst();
+}

@@ -1,35 +1,105 @@
-// Planning a quilt's chained route off the request thread: the placed designs are read (the owner's live ones, as
-// JSON text the worker validates) and the whole planning step runs as one job in the engine's worker pool, in the
-// interactive lane, fair between accounts like every check and plan. Each corner-pair plan gets a short time budget
-// (QUILT_PAIR_BUDGET_MS) so a small quilt fits the job's 8 s cap; a larger one answers engine_timeout.
+// Planning a quilt's chained route, as an app instance sees it. When every placed design's corner-pair table is in
+// PostgreSQL (and no pair the chain uses still wants the exact search), the plan is the dynamic programme alone and
+// is answered at once, on the request thread (milliseconds for 6 × 8). Otherwise a job goes on the queue
+// (planQueue.ts) for a planning worker process (src/server/jobs/planWorker.ts), and the answer is the job: its
+// state and progress live in quilt_plan_job, so any app instance can answer a poll. One job per quilt version and
+// inputs: asking again while it runs answers the same job. An account may have PLAN_JOBS_PER_ACCOUNT jobs open.
 import type { Kysely } from 'kysely';
-import type { Database } from '@db/schema.ts';
-import type { QuiltPlan } from '@shared/contract/quiltPlan.ts';
+import type PgBoss from 'pg-boss';
+import type { Database, QuiltPlanJobRow } from '@db/schema.ts';
+import type { ProblemDetail } from '@shared/contract/errors.ts';
+import { problemDetailSchema } from '@shared/contract/errors.ts';
+import { quiltPlanSchema, type QuiltPlan, type QuiltPlanJob } from '@shared/contract/quiltPlan.ts';
 import type { Quilt } from '@shared/quilt/quilt.schema.ts';
 import type { QuiltRouteProblem } from '@shared/quilt/quiltRoute.ts';
 import { err, ok, type Result } from '@shared/result.ts';
-import { runEngine } from '../engine/enginePool.ts';
-import type { PoolFailure } from '../engine/workerPool.ts';
-import { liveOwnedDesignTexts } from './quilt.repository.ts';
+import { inputsKey, placedDesignShapes, postgresCornerCostStore, QUILT_JOB_PROVES } from '../jobs/planInputs.ts';
+import { queueJobState, sendPlanQuiltJob } from '../jobs/planQueue.ts';
+import { planFromStoredTables } from '../jobs/quiltPlanRun.ts';
+import { countOpenPlanJobs, failPlanJob, findOwnedPlanJob, findPlanJobByInputs, insertPlanJob, requeuePlanJob, setPlanJobQueueId } from '../jobs/quiltPlanJob.repository.ts';
+import { quiltPlanOf } from './quiltPlanAnswer.ts';
 
-/** Time budget of each corner-pair plan (the planner's least, 100 ms). */
-export const QUILT_PAIR_BUDGET_MS = 100;
-
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+/** Whole-quilt plans one account may have queued or running at once; one more is 429. */
+export const PLAN_JOBS_PER_ACCOUNT = 2;
 
 export type QuiltPlanFailure =
   | { readonly kind: 'empty' }
   | { readonly kind: 'problem'; readonly problem: QuiltRouteProblem }
-  | { readonly kind: 'engine'; readonly failure: PoolFailure };
+  | { readonly kind: 'too-many'; readonly open: number };
 
-export async function planQuiltOnServer(db: Kysely<Database>, ownerId: string, quilt: Quilt, signal?: AbortSignal): Promise<Result<QuiltPlan, QuiltPlanFailure>> {
-  const ids = new Set<string>();
-  for (const row of quilt.placements) for (const p of row) if (p && UUID.test(p.designId)) ids.add(p.designId);
-  if (!quilt.placements.some((row) => row.some((p) => p !== null))) return err({ kind: 'empty' });
-  // A design deleted since the quilt was saved is simply absent: planQuiltRoute names its cell (missing-design).
-  const rows = await liveOwnedDesignTexts(db, ownerId, [...ids]);
-  const designs = rows.map((r) => ({ id: r.id, revision: `${r.id}@${r.version}`, designText: r.data_json }));
-  const r = await runEngine({ op: 'quiltPlan', quilt, designs, settings: { timeBudgetMs: QUILT_PAIR_BUDGET_MS, extraStops: 0, hiddenEndAllowance: 0 } }, { key: ownerId, ...(signal ? { signal } : {}) });
-  if (!r.ok) return err({ kind: 'engine', failure: r.error });
-  return r.value.ok ? ok(r.value.value) : err({ kind: 'problem', problem: r.value.quiltProblem });
+export type QuiltPlanOutcome = { readonly kind: 'planned'; readonly plan: QuiltPlan } | { readonly kind: 'queued'; readonly job: QuiltPlanJob };
+
+/** The plan of the quilt as saved (`quiltVersion`), from the cache at once, or the job that will make it. */
+export async function requestQuiltPlan(
+  db: Kysely<Database>,
+  queue: () => Promise<PgBoss>,
+  ownerId: string,
+  quilt: { id: string; version: number; map: Quilt },
+): Promise<Result<QuiltPlanOutcome, QuiltPlanFailure>> {
+  if (!quilt.map.placements.some((row) => row.some((p) => p !== null))) return err({ kind: 'empty' });
+  const designs = await placedDesignShapes(db, ownerId, quilt.map);
+  const tables = await postgresCornerCostStore(db).load(designs);
+  const cached = planFromStoredTables(quilt.map, designs, tables, QUILT_JOB_PROVES);
+  if (!cached.ok) return err({ kind: 'problem', problem: cached.error });
+  if (cached.value) return ok({ kind: 'planned', plan: quiltPlanOf(cached.value) });
+
+  const key = inputsKey(designs);
+  const existing = await findPlanJobByInputs(db, quilt.id, quilt.version, key);
+  if (existing && existing.state !== 'failed') {
+    const plan = planOfRow(existing);
+    return ok(plan ? { kind: 'planned', plan } : { kind: 'queued', job: jobOfRow(existing) });
+  }
+  const open = await countOpenPlanJobs(db, ownerId);
+  if (open >= PLAN_JOBS_PER_ACCOUNT) return err({ kind: 'too-many', open });
+  const row = existing ? await requeuePlanJob(db, existing.id) : await insertPlanJob(db, { quiltId: quilt.id, ownerId, quiltVersion: quilt.version, inputsKey: key });
+  // Another request made (or re-queued) the same job a moment ago: answer that one.
+  if (!row) return ok({ kind: 'queued', job: jobOfRow((await findPlanJobByInputs(db, quilt.id, quilt.version, key))!) });
+  const queueJobId = await sendPlanQuiltJob(await queue(), { planJobId: row.id });
+  await setPlanJobQueueId(db, row.id, queueJobId);
+  return ok({ kind: 'queued', job: jobOfRow(row) });
+}
+
+/**
+ * The owner's job with its plan once done. A job the queue has given up on while our row still says queued or
+ * running (its worker died on the last try) is marked failed here, so the page stops waiting.
+ */
+export async function readQuiltPlanJob(
+  db: Kysely<Database>,
+  queue: () => Promise<PgBoss>,
+  ownerId: string,
+  quiltId: string,
+  jobId: string,
+): Promise<{ job: QuiltPlanJob; plan: QuiltPlan | null } | undefined> {
+  let row = await findOwnedPlanJob(db, ownerId, quiltId, jobId);
+  if (!row) return undefined;
+  if ((row.state === 'queued' || row.state === 'running') && row.queue_job_id) {
+    const state = await queueJobState(await queue(), row.queue_job_id);
+    if (state === 'failed' || state === 'cancelled') {
+      await failPlanJob(db, row.id, JSON.stringify(GAVE_UP));
+      row = (await findOwnedPlanJob(db, ownerId, quiltId, jobId))!;
+    }
+  }
+  return { job: jobOfRow(row), plan: planOfRow(row) };
+}
+
+const GAVE_UP: ProblemDetail = { code: 'internal', message: 'Planning this quilt stopped after several tries. Try again; if it stops again, plan fewer blocks at a time.' };
+
+function jobOfRow(row: QuiltPlanJobRow): QuiltPlanJob {
+  const failure = row.failure === null ? null : problemDetailSchema.safeParse(row.failure);
+  return {
+    id: row.id,
+    quiltVersion: row.quilt_version,
+    state: row.state,
+    done: Math.min(row.done, row.total),
+    total: row.total,
+    failure: failure === null ? null : failure.success ? failure.data : GAVE_UP,
+  };
+}
+
+/** The stored plan of a done job (checked by the contract's schema: a stored plan it refuses is a bug). */
+function planOfRow(row: QuiltPlanJobRow): QuiltPlan | null {
+  if (row.state !== 'done' || row.result === null) return null;
+  const parsed = quiltPlanSchema.safeParse(row.result);
+  if (!parsed.success) throw new Error(`server/quilts/quiltPlan.service: stored plan of job ${row.id} fails its schema`);
+  return parsed.data;
 }

@@ -44,6 +44,25 @@ async function throwawaySession(w: SecurityWorld, a: Actor): Promise<TestClient>
   return c;
 }
 
+/** A new quilt of the quilter's holding one new design (never planned, so nothing is cached for it). */
+async function quiltOfFreshDesign(w: SecurityWorld): Promise<string> {
+  const designId = await w.fresh.design();
+  const res = await w.client('quilter').post('/api/quilts', { title: 'Fresh quilt', quilt: { version: 1, units: 'in', rows: 1, columns: 1, block: { width: 12, height: 12 }, placements: [[{ designId }]] } });
+  if (res.status !== 201) throw new Error(`tests/api/security/accessMatrix: quilt not made: ${res.text}`);
+  return res.body.quilt.id as string;
+}
+/** One plan job of the quilter's, made once and asked for by every visitor. */
+let planJob: Promise<{ quiltId: string; jobId: string }> | undefined;
+function quilterPlanJob(w: SecurityWorld): Promise<{ quiltId: string; jobId: string }> {
+  planJob ??= (async () => {
+    const quiltId = await quiltOfFreshDesign(w);
+    const res = await w.client('quilter').post(`/api/quilts/${quiltId}/plan`);
+    if (res.status !== 202) throw new Error(`tests/api/security/accessMatrix: plan job not made: ${res.text}`);
+    return { quiltId, jobId: res.body.job.id as string };
+  })();
+  return planJob;
+}
+
 export const matrixRows: MatrixRow[] = [
   // Accounts and sessions
   { route: 'POST /api/accounts', path: () => '/api/accounts', body: {}, expect: all(400) },
@@ -67,7 +86,22 @@ export const matrixRows: MatrixRow[] = [
   { route: 'POST /api/quilts', path: () => '/api/quilts', body: {}, expect: signedIn(400) },
   { route: 'GET /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, expect: s(401, 200, 404, 404, 404, 404) },
   { route: 'PUT /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, body: { baseVersion: 999, title: 'taken over' }, expect: s(401, 409, 404, 404, 404, 404), note: 'stale baseVersion: the owner gets 409 and nothing changes' },
-  { route: 'POST /api/quilts/[id]/plan', path: (w) => `/api/quilts/${w.quiltId}/plan`, expect: s(401, 200, 404, 404, 404, 404) },
+  {
+    route: 'POST /api/quilts/[id]/plan',
+    path: (w) => `/api/quilts/${w.quiltId}/plan`,
+    send: async (w, a, allowed) => w.client(a).post(`/api/quilts/${allowed ? await quiltOfFreshDesign(w) : w.quiltId}/plan`),
+    expect: s(401, 202, 404, 404, 404, 404),
+    note: 'the owner asks for a quilt of a design never planned: 202 and a job (200 comes from the cache)',
+  },
+  {
+    route: 'GET /api/quilts/[id]/plan-jobs/[jobId]',
+    path: () => '/api/quilts/…/plan-jobs/…',
+    send: async (w, a) => {
+      const { quiltId, jobId } = await quilterPlanJob(w);
+      return w.client(a).get(`/api/quilts/${quiltId}/plan-jobs/${jobId}`);
+    },
+    expect: s(401, 200, 404, 404, 404, 404),
+  },
   { route: 'DELETE /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, send: fresh((w) => w.fresh.quiltId(), (w) => w.quiltId, (_, id) => `/api/quilts/${id}`), expect: s(401, 200, 404, 404, 404, 404) },
 
   // Designs: the owner only (admins included in "not the owner")

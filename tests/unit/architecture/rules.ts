@@ -110,6 +110,7 @@ export const folderRules: readonly FolderRule[] = [
       { from: ['scripts/lib/s3Fake.mjs'], packages: ['s3rver'], why: 'the local object-storage fake, started after npm ci' },
       { from: ['scripts/lib/engineWorker.mjs'], packages: ['esbuild'], why: 'it bundles the engine worker, loading esbuild after npm ci' },
       { from: ['scripts/serve.mjs'], files: ['dist/server/entry.mjs'], why: 'it serves the build' },
+      { from: ['scripts/plan-worker.mjs'], files: ['dist/jobs/planWorker.mjs'], why: 'it starts the built planning worker process' },
       {
         from: ['scripts/seed/**'],
         files: ['db/**', 'shared/**', 'src/server/**'],

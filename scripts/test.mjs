@@ -16,7 +16,7 @@ ensureNodeModules();
 const pgBin = ensurePostgres();
 // Browser tests drive Debian's chromium; reference tests use Debian's networkx and shapely, and an exact rural
 // postman model solved by Debian's CBC through python3-pulp.
-ensureDebianPackages(['chromium', 'fonts-liberation', 'python3-networkx', 'python3-shapely', 'python3-pulp', 'coinor-cbc']);
+ensureDebianPackages(['chromium', 'fonts-liberation', 'python3-networkx', 'python3-shapely', 'python3-pulp', 'coinor-cbc', 'poppler-utils']);
 
 const scratch = mkdtempSync('/tmp/threadway-test-');
 chmodSync(scratch, 0o755);

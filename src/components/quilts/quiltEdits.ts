@@ -2,11 +2,7 @@
 // a cell, a quarter turn, a mirror, sashing and border widths; and the figures the page shows from the map and the
 // designs' stored summaries (finished size, trim plan, quilt budget). No React, no fetch.
 import type { Units } from '@shared/design/design.schema.ts';
-import type { DesignSummary } from '@shared/contract/figures.ts';
-import { bindingAllowanceOf, QUILT_VERSION, type Quilt, type Rotation } from '@shared/quilt/quilt.schema.ts';
-import { planQuiltBudget, type BlockFigures, type QuiltBudget } from '@shared/quilt/quiltBudget.ts';
-import { planTrim, type TrimAssumption } from '@shared/quilt/trim.ts';
-import { buildTrimTable, type TrimTableRow } from '@shared/quilt/trimTable.ts';
+import { QUILT_VERSION, type Quilt, type Rotation } from '@shared/quilt/quilt.schema.ts';
 
 /** An empty map: every cell empty, no sashing or borders, blocks quilted row by row. */
 export function newQuilt(units: Units, rows: number, columns: number, blockSize: number): Quilt {
@@ -49,30 +45,5 @@ export function setFrame(quilt: Quilt, sashing: number, border: number): Quilt {
   return { ...quilt, sashing: Math.max(0, sashing), borders: border > 0 ? [border] : [] };
 }
 
-/** The quilt-as-you-go trim table, or the reason there is none (e.g. a margin too small for the shrinkage). */
-export function trimTableOf(quilt: Quilt): { rows: TrimTableRow[]; assumptions: readonly TrimAssumption[] } | { problem: string } {
-  const plan = planTrim(quilt, bindingAllowanceOf(quilt), quilt.trim);
-  return plan.ok ? { rows: buildTrimTable(plan.value), assumptions: plan.value.assumptions } : { problem: plan.error.message };
-}
-
-/**
- * The quilt budget from the placed designs' stored figures, each block quilted on its own (quilt-as-you-go; the
- * chained route is planned separately). Null until every placed design has figures; `missing` counts those without.
- */
-export function budgetOf(quilt: Quilt, summaries: ReadonlyMap<string, DesignSummary | null>): { budget: QuiltBudget | null; missing: number } {
-  const blocks: BlockFigures[] = [];
-  let missing = 0;
-  quilt.placements.forEach((cells, row) =>
-    cells.forEach((p, column) => {
-      if (!p) return;
-      const s = summaries.get(p.designId);
-      if (!s) {
-        missing++;
-        return;
-      }
-      blocks.push({ cell: { row, column }, units: s.units, stitchLength: s.stitchLength, travelLength: s.travelLength, passes: s.passes });
-    }),
-  );
-  if (missing > 0 || blocks.length === 0) return { budget: null, missing };
-  return { budget: planQuiltBudget(quilt.units, blocks, null, quilt.thread ?? {}), missing };
-}
+// The trim table and the block-by-block budget moved to shared/quilt/quiltFigures.ts (the printed plan uses them too).
+export { budgetOf, trimTableOf } from '@shared/quilt/quiltFigures.ts';

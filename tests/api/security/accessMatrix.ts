@@ -102,6 +102,7 @@ export const matrixRows: MatrixRow[] = [
     },
     expect: s(401, 200, 404, 404, 404, 404),
   },
+  { route: 'GET /api/quilts/[id]/plan.pdf', path: (w) => `/api/quilts/${w.quiltId}/plan.pdf`, expect: s(401, 200, 404, 404, 404, 404), note: 'the printed plan: owner only, as the quilt' },
   { route: 'DELETE /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, send: fresh((w) => w.fresh.quiltId(), (w) => w.quiltId, (_, id) => `/api/quilts/${id}`), expect: s(401, 200, 404, 404, 404, 404) },
 
   // Designs: the owner only (admins included in "not the owner")
@@ -115,6 +116,7 @@ export const matrixRows: MatrixRow[] = [
   { route: 'POST /api/designs/[id]/duplicate', path: (w) => `/api/designs/${w.designId}/duplicate`, expect: s(401, 201, 404, 404, 404, 404) },
   { route: 'POST /api/designs/[id]/restore', path: (w) => `/api/designs/${w.designId}/restore`, expect: s(401, 200, 404, 404, 404, 404) },
   { route: 'GET /api/designs/[id]/export.svg', path: (w) => `/api/designs/${w.designId}/export.svg`, expect: s(401, 200, 404, 404, 404, 404) },
+  { route: 'GET /api/designs/[id]/plan.pdf', path: (w) => `/api/designs/${w.designId}/plan.pdf`, expect: s(401, 200, 404, 404, 404, 404), note: 'the printed plan: owner only, as the design' },
   { route: 'GET /api/designs/[id]/route', path: (w) => `/api/designs/${w.designId}/route`, expect: s(401, 200, 404, 404, 404, 404) },
   { route: 'PUT /api/designs/[id]/route', path: (w) => `/api/designs/${w.designId}/route`, body: { kind: 'planned', designVersion: 999 }, expect: s(401, 409, 404, 404, 404, 404) },
   { route: 'GET /api/designs/[id]/versions', path: (w) => `/api/designs/${w.designId}/versions`, expect: s(401, 200, 404, 404, 404, 404) },
@@ -158,6 +160,7 @@ export const matrixRows: MatrixRow[] = [
 
   // Lessons, progress, photos
   { route: 'GET /api/lessons/[id]', path: (w) => `/api/lessons/${w.lessonId}`, expect: s(401, 200, 200, 200, 404, 404) },
+  { route: 'GET /api/lessons/[id]/plan.pdf', path: (w) => `/api/lessons/${w.lessonId}/plan.pdf`, expect: s(401, 200, 200, 200, 404, 404), note: 'the printed plan: whoever may read the lesson' },
   { route: 'PATCH /api/lessons/[id]', path: (w) => `/api/lessons/${w.lessonId}`, body: {}, expect: s(401, 404, 200, 200, 404, 404) },
   { route: 'DELETE /api/lessons/[id]', path: (w) => `/api/lessons/${w.lessonId}`, send: fresh((w) => w.fresh.lessonId(), (w) => w.lessonId, (_, id) => `/api/lessons/${id}`), expect: s(401, 404, 204, 204, 404, 404) },
   { route: 'GET /api/lessons/[id]/progress', path: (w) => `/api/lessons/${w.lessonId}/progress`, expect: s(401, 200, 404, 404, 404, 404), note: 'only students have progress' },

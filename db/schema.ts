@@ -21,6 +21,8 @@ export interface Database {
   design_version: DesignVersionTable;
   design_route: DesignRouteTable;
   quilt: QuiltTable;
+  class_payment: ClassPaymentTable;
+  payment_event: PaymentEventTable;
 }
 
 export type Role = 'quilter' | 'teacher' | 'admin';
@@ -156,8 +158,10 @@ export interface LessonTable {
 export interface EnrollmentTable {
   class_id: string;
   student_id: string;
-  joined_via: 'invitation' | 'join-code';
+  joined_via: 'invitation' | 'join-code' | 'payment';
   joined_at: CreatedAt;
+  /** Set when the student's payment was refunded: lessons released after this instant are closed to them. */
+  access_until: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 
 export interface ClassInvitationTable {
@@ -261,3 +265,37 @@ export interface QuiltTable {
   deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 export type QuiltRow = Selectable<QuiltTable>;
+
+export type PaymentStateColumn = 'pending' | 'paid' | 'refunded' | 'expired';
+
+/** One student's checkout for one paid class (migration 2026_12_05_1215; shared/payments/paymentState.ts). */
+export interface ClassPaymentTable {
+  id: Generated<string>;
+  class_id: string | null;
+  teacher_id: string | null;
+  class_title: string;
+  student_id: string;
+  /** In the currency's minor unit (cents). */
+  amount: number;
+  currency: string;
+  state: ColumnType<PaymentStateColumn, PaymentStateColumn | undefined, PaymentStateColumn>;
+  /** The student's locale when they paid (first Accept-Language tag): the receipt is written in it. */
+  locale: string | null;
+  checkout_session_id: string | null;
+  payment_intent_id: string | null;
+  created_at: CreatedAt;
+  paid_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  refunded_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  updated_at: UpdatedAt;
+}
+
+/** A webhook event applied (or waiting for its payment), keyed by the payments service's event id. */
+export interface PaymentEventTable {
+  event_id: string;
+  type: string;
+  payment_id: string | null;
+  payment_intent_id: string | null;
+  occurred_at: ColumnType<Date, Date, never>;
+  received_at: CreatedAt;
+  applied: boolean;
+}

@@ -63,8 +63,31 @@ describe('paying for a class', () => {
         await page.goto(s.path);
         await page.getByText(s.wait).first().waitFor();
         expect(await elementsWiderThanViewport(page), `${s.name} at ${size.name}`).toEqual([]);
+        // Also what that check leaves out: an absolutely placed child escaping its scroll box widens the page too.
+        expect(await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth), `${s.name} at ${size.name} scrolls sideways`).toBe(0);
         await screenshot(page, `paid-${s.name}-${size.name}`);
       }
     }
   }, 120_000);
+
+  it('after the teacher refunds, the student’s class page says the released lessons stay theirs', async () => {
+    const page = browser.page;
+    await signInBrowserAs(w.teacher);
+    await page.setViewportSize({ width: 390, height: 844 });
+    await page.goto('/payments');
+    await page.getByRole('button', { name: 'Refund…' }).click();
+    await page.getByRole('dialog').getByRole('button', { name: 'Refund in full' }).click();
+    await page.waitForLoadState('load');
+    for (let i = 0; i < 40 && !(await page.textContent('[data-payment-state]'))?.includes('refunded'); i += 1) {
+      await new Promise((r) => setTimeout(r, 250));
+      await page.reload();
+    }
+    expect(await page.textContent('[data-payment-state]')).toContain('refunded');
+    await screenshot(page, 'paid-teacher-refunded-phone');
+    await signInBrowserAs(buyer);
+    await page.goto(`/classes/${w.classId}`);
+    await page.getByText('You keep the lessons').waitFor();
+    await page.getByRole('link', { name: /Evening lesson 1/ }).first().waitFor();
+    await screenshot(page, 'paid-class-refunded-phone');
+  }, 60_000);
 });

@@ -69,6 +69,12 @@ export default defineConfig({
       INVITE_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
       // Seconds between lesson-release sweeps (e-mails to students when a lesson opens).
       RELEASE_SWEEP_SECONDS: envField.number({ context: 'server', access: 'secret', default: 30 }),
+      // Paid classes (the payments service's SDK, npm `stripe`). PAYMENTS_API_URL points the SDK at another host:
+      // npm start / npm test set it to the local fake (scripts/lib/paymentsFake.mjs); unset, the SDK uses the real
+      // service. Without PAYMENTS_API_KEY and PAYMENTS_WEBHOOK_SECRET paid classes cannot be bought (free ones work).
+      PAYMENTS_API_URL: envField.string({ context: 'server', access: 'secret', optional: true }),
+      PAYMENTS_API_KEY: envField.string({ context: 'server', access: 'secret', optional: true }),
+      PAYMENTS_WEBHOOK_SECRET: envField.string({ context: 'server', access: 'secret', optional: true }),
     },
   },
 });

@@ -23,6 +23,8 @@ export interface Database {
   quilt: QuiltTable;
   corner_cost: CornerCostTable;
   quilt_plan_job: QuiltPlanJobTable;
+  class_payment: ClassPaymentTable;
+  payment_event: PaymentEventTable;
 }
 
 export type Role = 'quilter' | 'teacher' | 'admin';
@@ -158,8 +160,10 @@ export interface LessonTable {
 export interface EnrollmentTable {
   class_id: string;
   student_id: string;
-  joined_via: 'invitation' | 'join-code';
+  joined_via: 'invitation' | 'join-code' | 'payment';
   joined_at: CreatedAt;
+  /** Set when the student's payment was refunded: lessons released after this instant are closed to them. */
+  access_until: ColumnType<Date | null, Date | null | undefined, Date | null>;
 }
 
 export interface ClassInvitationTable {
@@ -298,3 +302,36 @@ export interface QuiltPlanJobTable {
   updated_at: UpdatedAt;
 }
 export type QuiltPlanJobRow = Selectable<QuiltPlanJobTable>;
+export type PaymentStateColumn = 'pending' | 'paid' | 'refunded' | 'expired';
+
+/** One student's checkout for one paid class (migration 2026_12_05_1215; shared/payments/paymentState.ts). */
+export interface ClassPaymentTable {
+  id: Generated<string>;
+  class_id: string | null;
+  teacher_id: string | null;
+  class_title: string;
+  student_id: string;
+  /** In the currency's minor unit (cents). */
+  amount: number;
+  currency: string;
+  state: ColumnType<PaymentStateColumn, PaymentStateColumn | undefined, PaymentStateColumn>;
+  /** The student's locale when they paid (first Accept-Language tag): the receipt is written in it. */
+  locale: string | null;
+  checkout_session_id: string | null;
+  payment_intent_id: string | null;
+  created_at: CreatedAt;
+  paid_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  refunded_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  updated_at: UpdatedAt;
+}
+
+/** A webhook event applied (or waiting for its payment), keyed by the payments service's event id. */
+export interface PaymentEventTable {
+  event_id: string;
+  type: string;
+  payment_id: string | null;
+  payment_intent_id: string | null;
+  occurred_at: ColumnType<Date, Date, never>;
+  received_at: CreatedAt;
+  applied: boolean;
+}

@@ -9,6 +9,7 @@ import { findFreePort, waitForHttp } from './lib/ports.mjs';
 import { buildApp, runTs, serveApp, startPlanWorkerProcess } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
+import { startPaymentsFake } from './lib/paymentsFake.mjs';
 import { clusterLocation } from './lib/cluster.mjs';
 import { wantsDevTools } from './lib/devTools.mjs';
 import { superviseApp } from './lib/supervise.mjs';
@@ -40,6 +41,9 @@ buildApp();
 
 const appPort = Number(process.env.PORT ?? (await findFreePort(4321)));
 const origin = `http://127.0.0.1:${appPort}`;
+// The payments service's stand-in: paid classes are bought on its checkout page with the test card.
+const payments = await startPaymentsFake({ webhookUrl: `${origin}/api/payments/webhook` });
+Object.assign(env, payments.env);
 // The app survives a database restart by itself (503 meanwhile); should it still crash, it is started again
 // rather than taking the database and the fakes down with it.
 const app = superviseApp({
@@ -59,6 +63,7 @@ ${readDemoAccounts().map((a) => `    ${a.role.padEnd(8)} ${a.email.padEnd(36)} $
   One planning worker takes whole-quilt plans from the job queue (more: node scripts/plan-worker.mjs, see README).
   Captured e-mail (fake mail server on 127.0.0.1:${mail.port}) is kept in ${env.MAIL_CAPTURE_DIR}
   ${devTools ? `and shown to admins at ${origin}/dev/mail.` : 'To read it in the browser as an admin: npm start -- --dev-tools, then /dev/mail.'}
+  Paid classes check out on the local payments fake at ${payments.url} (test card 4242 4242 4242 4242).
   Stop with Ctrl-C (the database stops too; or later: npm run db:stop).
 `);
 
@@ -71,6 +76,7 @@ async function shutdown() {
   await app.stop();
   await mail.close();
   await s3.close();
+  await payments.close();
   stopCluster(pgBin, pgDir);
   log('stopped.');
   process.exit(0);

@@ -11,6 +11,7 @@ import { findFreePort, waitForHttp } from './lib/ports.mjs';
 import { buildApp, runTs, serveApp, startPlanWorkerProcess } from './lib/app.mjs';
 import { startMailSink } from './lib/mailSink.mjs';
 import { startS3Fake } from './lib/s3Fake.mjs';
+import { startPaymentsFake } from './lib/paymentsFake.mjs';
 
 ensureNodeModules();
 const pgBin = ensurePostgres();
@@ -94,6 +95,9 @@ try {
   buildApp({ force: process.env.CI === 'true' });
   const appPort = await findFreePort();
   const appUrl = `http://127.0.0.1:${appPort}`;
+  const payments = await startPaymentsFake({ webhookUrl: `${appUrl}/api/payments/webhook` });
+  cleanups.push(() => payments.close());
+  Object.assign(env, payments.env);
   const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: appUrl }, quiet: true });
   cleanups.push(() => server.kill('SIGTERM'));
   // One planning worker process takes whole-quilt plans from the job queue, as under npm start.

@@ -9,6 +9,7 @@ import * as addDesignSummaryVersion from './2026_12_04_1800_add_design_summary_v
 import * as addProgressClientAt from './2026_12_05_0900_add_progress_client_at.ts';
 import * as createQuilts from './2026_12_05_0930_create_quilts.ts';
 import * as createQuiltPlanJobs from './2026_12_05_1215_create_quilt_plan_jobs.ts';
+import * as createClassPayments from './2026_12_05_1215_create_class_payments.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
@@ -22,6 +23,7 @@ export const migrations: Record<string, Migration> = {
   '2026_12_05_0900_add_progress_client_at': addProgressClientAt,
   '2026_12_05_0930_create_quilts': createQuilts,
   '2026_12_05_1215_create_quilt_plan_jobs': createQuiltPlanJobs,
+  '2026_12_05_1215_create_class_payments': createClassPayments,
 };
 
 export const migrationProvider: MigrationProvider = {

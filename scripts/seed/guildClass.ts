@@ -124,5 +124,30 @@ export async function seedGuildClass(
   }
   let enrollments = 0;
   for (const studentId of studentIds) if (await enrollStudent(db, classId, studentId, 'join-code')) enrollments += 1;
+  classes += await seedPaidClass(db, teacherId, { ditch: week1.versionId, echoes: week2.versionId }, now);
   return { templates, classes, enrollments };
+}
+
+const PAID_CLASS_TITLE = 'Evening echoes workshop';
+
+/**
+ * Marigold's paid class (45.00 USD), with one lesson out and one to come. Nobody is enrolled: a demo student buys
+ * it with its join code on the local payments fake's checkout page (test card 4242 4242 4242 4242). 1 when added.
+ */
+async function seedPaidClass(db: Kysely<Database>, teacherId: string, versions: { ditch: string; echoes: string }, now: Date): Promise<number> {
+  if (await findTaughtClassIdByTitle(db, teacherId, PAID_CLASS_TITLE)) return 0;
+  const notes1 = await noteFor(db, versions.ditch, 'We warm up on the pinwheel seams before the echoes.');
+  const notes2 = await noteFor(db, versions.echoes, 'Echoes 1/2 in apart inside each blade.');
+  await inTransaction(db, async (trx) => {
+    const created = await createClass(trx, teacherId, {
+      title: PAID_CLASS_TITLE,
+      description: 'Two evenings on echo quilting for Heron Bend members, one block each evening. Paid ahead through checkout.',
+      startsOn: new Date(now.getTime() - 3 * DAY_MS).toISOString().slice(0, 10),
+      priceCents: 4500,
+      currency: 'USD',
+    });
+    await createLesson(trx, created, { title: 'Evening 1: the ditch warm-up', releaseAt: new Date(now.getTime() - 2 * DAY_MS).toISOString(), notes: notes1, templateVersionId: versions.ditch });
+    await createLesson(trx, created, { title: 'Evening 2: echoes inside the blades', releaseAt: new Date(now.getTime() + 21 * DAY_MS).toISOString(), notes: notes2, templateVersionId: versions.echoes });
+  });
+  return 1;
 }

@@ -22,6 +22,8 @@ export const ERROR_CODES = [
   'engine_timeout',
   'engine_busy',
   'database_unavailable',
+  'invalid_signature',
+  'payments_unavailable',
   'internal',
 ] as const;
 export const errorCodeSchema = z.enum(ERROR_CODES);

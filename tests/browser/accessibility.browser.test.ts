@@ -64,7 +64,7 @@ describe('accessibility (axe-core: no serious or critical finding; every control
     await signInAs('Tobias Wren');
     const page = browser.page;
     const found: Record<string, AxeFinding[] | string[]> = {};
-    for (const path of ['/dashboard', '/designs/new', '/account', '/classes']) await audit(page, path, found);
+    for (const path of ['/dashboard', '/designs/new', '/account', '/classes', '/payments']) await audit(page, path, found);
     await audit(page, '/designs', found, (p) => p.waitForFunction(() => !document.body.innerText.includes('Loading'), undefined, { timeout: 30_000 }));
     const design = (await links(page, /^\/designs\/[0-9a-f-]{36}$/))[0]!;
     // A quilt map of one of his designs (made through the API from the page, as the new-quilt form does).
@@ -89,11 +89,11 @@ describe('accessibility (axe-core: no serious or critical finding; every control
     await signInAs('Marigold Ashby');
     const page = browser.page;
     const found: Record<string, AxeFinding[] | string[]> = {};
-    for (const path of ['/classes/new', '/templates']) await audit(page, path, found);
+    for (const path of ['/classes/new', '/templates', '/payments']) await audit(page, path, found);
     await page.goto('/classes');
     for (const cls of await links(page, /^\/classes\/[0-9a-f-]{36}$/)) await audit(page, cls, found);
     await signInAs('Ines Calloway');
-    for (const path of ['/admin/accounts', '/dev/mail']) await audit(page, path, found);
+    for (const path of ['/admin/accounts', '/dev/mail', '/payments']) await audit(page, path, found);
     expect(found).toEqual({});
   });
 });

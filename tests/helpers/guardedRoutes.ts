@@ -30,8 +30,11 @@ export const guardedRoutes: GuardedRoute[] = [
   { kind: 'api', method: 'POST', path: '/api/designs', minRole: 'quilter', body: {} },
   { kind: 'api', method: 'PATCH', path: `/api/admin/accounts/${SOME_UUID}`, minRole: 'admin', body: {} },
   { kind: 'api', method: 'POST', path: '/api/admin/storage-sweep', minRole: 'admin' },
+  { kind: 'api', method: 'GET', path: '/api/payments', minRole: 'teacher' },
+  { kind: 'api', method: 'GET', path: '/api/payments/receipts', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/dashboard', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/account', minRole: 'quilter' },
+  { kind: 'page', method: 'GET', path: '/payments', minRole: 'quilter' },
   { kind: 'page', method: 'GET', path: '/admin/accounts', minRole: 'admin' },
   // Exists only with DEV_TOOLS (true under npm test); it shows reset links, so admins only.
   { kind: 'page', method: 'GET', path: '/dev/mail', minRole: 'admin' },

@@ -62,10 +62,14 @@ export function selectLessons(db: Db) {
 }
 export type LessonListRow = Awaited<ReturnType<ReturnType<typeof selectLessons>['executeTakeFirstOrThrow']>>;
 
-/** A class's lessons by release date; `releasedOnly` for students. */
-export async function listLessons(db: Db, classId: string, releasedOnly: boolean): Promise<LessonListRow[]> {
+/**
+ * A class's lessons by release date; `releasedOnly` for students, and for a refunded student only those released
+ * by `accessUntil` (their enrolment's cut-off).
+ */
+export async function listLessons(db: Db, classId: string, releasedOnly: boolean, accessUntil: Date | null = null): Promise<LessonListRow[]> {
   let q = selectLessons(db).where('lesson.class_id', '=', classId);
   if (releasedOnly) q = q.where('lesson.release_at', '<=', sql<Date>`now()`);
+  if (releasedOnly && accessUntil !== null) q = q.where('lesson.release_at', '<=', accessUntil);
   return q.orderBy('lesson.release_at').orderBy('lesson.created_at').execute();
 }
 
@@ -144,7 +148,7 @@ export async function findClassByJoinCode(db: Db, joinCode: string) {
   return db
     .selectFrom('class')
     .innerJoin('account as teacher', 'teacher.id', 'class.teacher_id')
-    .select(['class.id', 'class.teacher_id', 'teacher.role as teacher_role'])
+    .select(['class.id', 'class.teacher_id', 'class.title', 'class.price_cents', 'class.currency', 'teacher.role as teacher_role'])
     .where('class.join_code', '=', joinCode)
     .executeTakeFirst();
 }
@@ -188,19 +192,19 @@ export async function findClassById(db: Db, id: string): Promise<Selectable<Clas
   return db.selectFrom('class').selectAll().where('id', '=', id).executeTakeFirst();
 }
 
-export async function isEnrolled(db: Db, classId: string, studentId: string): Promise<boolean> {
-  const row = await db.selectFrom('enrollment').select('student_id').where('class_id', '=', classId).where('student_id', '=', studentId).executeTakeFirst();
-  return row !== undefined;
+/** The student's enrolment: undefined when not enrolled; `access_until` set once a payment for it was refunded. */
+export async function findEnrollmentAccess(db: Db, classId: string, studentId: string): Promise<{ access_until: Date | null } | undefined> {
+  return db.selectFrom('enrollment').select('access_until').where('class_id', '=', classId).where('student_id', '=', studentId).executeTakeFirst();
 }
 
 /** The lesson's class and whether it is out (the database clock decides: release_at <= now()). */
-export async function findLessonRelease(db: Db, lessonId: string): Promise<{ id: string; class_id: string; released: boolean } | undefined> {
+export async function findLessonRelease(db: Db, lessonId: string): Promise<{ id: string; class_id: string; released: boolean; release_at: Date } | undefined> {
   const row = await db
     .selectFrom('lesson')
-    .select((eb) => ['id', 'class_id', eb('release_at', '<=', sql<Date>`now()`).as('released')])
+    .select((eb) => ['id', 'class_id', 'release_at', eb('release_at', '<=', sql<Date>`now()`).as('released')])
     .where('id', '=', lessonId)
     .executeTakeFirst();
-  return row && { id: row.id, class_id: row.class_id, released: Boolean(row.released) };
+  return row && { id: row.id, class_id: row.class_id, released: Boolean(row.released), release_at: row.release_at };
 }
 
 /** Deletes the class (its lessons, enrollments, invitations, progress and photo rows go with it, by cascade). */

@@ -1,5 +1,6 @@
 // Request bodies for classes, lessons, invitations and progress. Limits are stated here once.
 import { z } from 'zod';
+import { CLASS_CURRENCIES } from '@shared/format/money.ts';
 import { calendarDate, isoInstant } from '../inputRules.ts';
 
 // Lengths and ranges without a message of their own are worded by shared/forms/plainMessages.ts, naming the field.
@@ -9,9 +10,10 @@ const classFields = {
   title: text(200),
   description: z.string().trim().max(5000),
   startsOn: calendarDate,
-  /** Price in the smallest currency unit (cents); kept for a later payments feature. Null = free. */
+  /** Price in the currency's minor unit (cents); null or 0 = free. Students pay it through checkout. */
   priceCents: z.number().int().min(0).max(10_000_000).nullable(),
-  currency: z.string().regex(/^[A-Z]{3}$/, 'A three-letter currency code, e.g. USD.').nullable(),
+  /** One of the short list the payments offer (shared/format/money.ts); needed with a price. */
+  currency: z.enum(CLASS_CURRENCIES).nullable(),
 };
 /** The teacher's yes to a date the server asked about (teachingDates.ts: in the past, or before the class starts). */
 const confirmed = z.boolean().default(false);

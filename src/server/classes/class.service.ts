@@ -3,11 +3,14 @@ import type { Kysely } from 'kysely';
 import type { z } from 'zod';
 import type { Database } from '@db/schema.ts';
 import { err, ok, type Result } from '@shared/result.ts';
+import { problem } from '../http.ts';
 import type { SessionUser } from '../auth/session.ts';
 import type { createClassSchema, createLessonSchema, updateClassSchema, updateLessonSchema } from './class.schema.ts';
 import { findVersionAccess } from '../templates/template.repository.ts';
 import { enrollStudent, findClassByJoinCode, findClassRow, insertClass, insertLesson, updateClassRow, updateLessonRow } from './class.repository.ts';
 import { generateJoinCode, normalizeJoinCode } from './joinCode.ts';
+import { findEnrollment } from '../payments/payment.repository.ts';
+import type { PaidClass } from '../payments/payment.service.ts';
 import { checkClassStart, checkLessonRelease, type DateProblem } from './teachingDates.ts';
 
 const UNIQUE_VIOLATION = '23505';
@@ -40,6 +43,25 @@ export async function updateClass(db: Kysely<Database>, classId: string, input: 
     ...(input.priceCents !== undefined && { priceCents: input.priceCents }),
     ...(input.currency !== undefined && { currency: input.currency }),
   });
+}
+
+/** Smallest price a paid class may have, in minor units: the payments service refuses smaller charges (about 0.50 in its main currencies; from memory). */
+export const MIN_PRICE_MINOR = 50;
+
+/**
+ * A price and its currency as they will be stored (the request's values, else the stored ones): null when fine,
+ * else the field to fix and why. 0 or no amount is a free class, whatever the currency.
+ */
+export function checkClassPrice(priceCents: number | null, currency: string | null): { field: 'priceCents' | 'currency'; message: string } | null {
+  if (priceCents === null || priceCents === 0) return null;
+  if (priceCents < MIN_PRICE_MINOR) return { field: 'priceCents', message: 'Price must be at least 0.50, or empty for a free class.' };
+  if (currency === null) return { field: 'currency', message: 'Currency is needed with a price.' };
+  return null;
+}
+
+/** The problem answer for checkClassPrice's complaint. */
+export function priceProblemResponse(p: { field: string; message: string }): Response {
+  return problem(400, 'invalid_input', p.message, { [p.field]: p.message });
 }
 
 export async function regenerateJoinCode(db: Kysely<Database>, classId: string): Promise<string> {
@@ -91,7 +113,13 @@ export async function checkLessonDates(
   return checkLessonRelease(input.releaseAt, cls.starts_on_text, now, input.confirmed);
 }
 
-export type JoinError = { kind: 'unknown-code' } | { kind: 'own-class' };
+export type JoinError = { kind: 'unknown-code' } | { kind: 'own-class' } | { kind: 'payment-required'; cls: PaidClass };
+
+/** The class's price when it has one: a price and a currency, more than 0. */
+export function paidClassOf(cls: { id: string; title: string; teacher_id: string; price_cents: number | null; currency: string | null }): PaidClass | null {
+  if (cls.price_cents === null || cls.price_cents <= 0 || cls.currency === null) return null;
+  return { id: cls.id, title: cls.title, teacherId: cls.teacher_id, priceCents: cls.price_cents, currency: cls.currency };
+}
 
 /** Enrols the user in the class whose join code they typed. */
 export async function joinByCode(db: Kysely<Database>, user: SessionUser, typed: string): Promise<Result<{ classId: string; newlyJoined: boolean }, JoinError>> {
@@ -99,6 +127,14 @@ export async function joinByCode(db: Kysely<Database>, user: SessionUser, typed:
   // A class whose teacher is no longer a teacher takes no new students (the code answers as unknown).
   if (!cls || cls.teacher_role === 'quilter') return err({ kind: 'unknown-code' });
   if (cls.teacher_id === user.id) return err({ kind: 'own-class' });
+  // A paid class opens through checkout; a student already in it (paid, or invited) just goes to it. A refunded
+  // student may buy it again.
+  const paid = paidClassOf(cls);
+  if (paid) {
+    const enrollment = await findEnrollment(db, cls.id, user.id);
+    if (enrollment && enrollment.access_until === null) return ok({ classId: cls.id, newlyJoined: false });
+    return err({ kind: 'payment-required', cls: paid });
+  }
   const newlyJoined = await enrollStudent(db, cls.id, user.id, 'join-code');
   return ok({ classId: cls.id, newlyJoined });
 }

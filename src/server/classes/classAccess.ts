@@ -6,7 +6,7 @@ import type { Kysely, Selectable, Transaction } from 'kysely';
 import type { ClassTable, Database } from '@db/schema.ts';
 import { hasRole } from '../auth/guards.ts';
 import type { SessionUser } from '../auth/session.ts';
-import { findClassById, findLessonRelease, isEnrolled } from './class.repository.ts';
+import { findClassById, findEnrollmentAccess, findLessonRelease } from './class.repository.ts';
 
 type Db = Kysely<Database> | Transaction<Database>;
 export type ClassRow = Selectable<ClassTable>;
@@ -16,6 +16,8 @@ export type ClassStanding = 'teacher' | 'admin' | 'student';
 export interface ClassAccess {
   cls: ClassRow;
   standing: ClassStanding;
+  /** Students whose payment was refunded: lessons released after this stay closed to them. Null otherwise. */
+  accessUntil: Date | null;
 }
 
 export const isManager = (standing: ClassStanding): boolean => standing === 'teacher' || standing === 'admin';
@@ -28,9 +30,10 @@ export async function findClassAccess(db: Db, user: SessionUser, classId: string
   if (!isUuid(classId)) return null;
   const cls = await findClassById(db, classId);
   if (!cls) return null;
-  if (cls.teacher_id === user.id && hasRole(user, 'teacher')) return { cls, standing: 'teacher' };
-  if (user.role === 'admin') return { cls, standing: 'admin' };
-  return (await isEnrolled(db, cls.id, user.id)) ? { cls, standing: 'student' } : null;
+  if (cls.teacher_id === user.id && hasRole(user, 'teacher')) return { cls, standing: 'teacher', accessUntil: null };
+  if (user.role === 'admin') return { cls, standing: 'admin', accessUntil: null };
+  const enrollment = await findEnrollmentAccess(db, cls.id, user.id);
+  return enrollment ? { cls, standing: 'student', accessUntil: enrollment.access_until } : null;
 }
 
 export interface LessonAccess extends ClassAccess {
@@ -40,7 +43,7 @@ export interface LessonAccess extends ClassAccess {
 
 /**
  * A lesson as the user may see it: managers see every lesson; students only released ones (the server's
- * clock decides: release_at <= now()). Null → 404.
+ * clock decides: release_at <= now()), and after a refund only those released by then. Null → 404.
  */
 export async function findLessonAccess(db: Db, user: SessionUser, lessonId: string | undefined): Promise<LessonAccess | null> {
   if (!isUuid(lessonId)) return null;
@@ -49,5 +52,6 @@ export async function findLessonAccess(db: Db, user: SessionUser, lessonId: stri
   const access = await findClassAccess(db, user, lesson.class_id);
   if (!access) return null;
   if (access.standing === 'student' && !lesson.released) return null;
+  if (access.standing === 'student' && access.accessUntil !== null && lesson.release_at > access.accessUntil) return null;
   return { ...access, lessonId: lesson.id, released: lesson.released };
 }

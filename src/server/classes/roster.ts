@@ -9,7 +9,7 @@ export interface RosterEntry {
   displayName: string;
   email: string;
   joinedAt: string;
-  joinedVia: 'invitation' | 'join-code';
+  joinedVia: 'invitation' | 'join-code' | 'payment';
   /** Released lessons finished, out of `lessonCount` released lessons (a lesson not out yet counts in neither). */
   lessonsFinished: number;
   lessonCount: number;

@@ -158,6 +158,12 @@ export const matrixRows: MatrixRow[] = [
   { route: 'POST /api/invitations/[token]/sign-up', path: (w) => `/api/invitations/${w.invitationToken}/sign-up`, body: {}, expect: all(400), note: 'only the invited address may sign up through it' },
   { route: 'POST /api/invitations/[token]/accept', path: () => '/api/invitations/not.a.token/accept', expect: signedIn(400), note: 'accepting a real link: tests/api/teaching.flows.test.ts' },
 
+  // Payments: the class's teacher and admins see and refund its payments; everyone sees only their own receipts
+  { route: 'GET /api/payments', path: () => '/api/payments', expect: s(401, 404, 200, 200, 404, 200), note: 'another teacher gets 200 with only their own classes’ payments (tests/api/payments.access.test.ts)' },
+  { route: 'GET /api/payments/receipts', path: () => '/api/payments/receipts', expect: signedIn(200) },
+  { route: 'POST /api/payments/[id]/refund', path: (w) => `/api/payments/${w.paymentId}/refund`, expect: s(401, 404, 409, 409, 404, 404), note: 'an expired checkout: the teacher and admins reach the 409, nothing is refunded' },
+  { route: 'POST /api/payments/webhook', path: () => '/api/payments/webhook', body: {}, expect: all(400), note: 'no signature: the payments service’s signature is the only key (tests/api/payments.webhook.test.ts)' },
+
   // Lessons, progress, photos
   { route: 'GET /api/lessons/[id]', path: (w) => `/api/lessons/${w.lessonId}`, expect: s(401, 200, 200, 200, 404, 404) },
   { route: 'GET /api/lessons/[id]/plan.pdf', path: (w) => `/api/lessons/${w.lessonId}/plan.pdf`, expect: s(401, 200, 200, 200, 404, 404), note: 'the printed plan: whoever may read the lesson' },
@@ -197,6 +203,8 @@ export const matrixRows: MatrixRow[] = [
   { route: 'GET /templates/link/[token]', path: (w) => `/templates/link/${w.unlistedToken}`, expect: all(200) },
   { route: 'GET /walkthrough/[templateId]', path: (w) => `/walkthrough/${w.classTemplateId}`, expect: s(404, 200, 200, 200, 404, 404) },
   { route: 'GET /classes', path: () => '/classes', expect: page(200) },
+  { route: 'GET /payments', path: () => '/payments', expect: page(200) },
+  { route: 'GET /payments/return', path: () => '/payments/return?session_id=cs_test_unknown', expect: page(200), note: 'only the visitor’s own checkout is found' },
   { route: 'GET /classes/new', path: () => '/classes/new', expect: s(302, 404, 200, 200, 404, 200) },
   { route: 'GET /classes/[id]', path: (w) => `/classes/${w.classId}`, expect: s(302, 200, 200, 200, 404, 404) },
   { route: 'GET /classes/[id]/lessons/[lessonId]', path: (w) => `/classes/${w.classId}/lessons/${w.lessonId}`, expect: s(302, 200, 200, 200, 404, 404) },

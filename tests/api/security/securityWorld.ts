@@ -12,6 +12,7 @@ import { createAccount, type TestAccount } from '../../helpers/accounts.ts';
 import { TestClient, type ApiResponse } from '../../helpers/client.ts';
 import { linksIn, waitForMail } from '../../helpers/mail.ts';
 import { block } from '../designFixtures.ts';
+import { testDb } from '../../helpers/db.ts';
 import { daysAhead, sendBytes } from '../teachingWorld.ts';
 
 export type Actor = 'anonymous' | 'quilter' | 'teacher' | 'admin' | 'otherQuilter' | 'otherTeacher';
@@ -38,6 +39,8 @@ export interface SecurityWorld {
   quiltId: string;
   photoId: string;
   invitationToken: string;
+  /** An expired (never paid) checkout by the quilter for the teacher's class: refund attempts reach only 409. */
+  paymentId: string;
   png: Uint8Array;
   fresh: {
     design(owner?: TestAccount): Promise<string>;
@@ -108,9 +111,17 @@ export async function buildSecurityWorld(): Promise<SecurityWorld> {
   const link = linksIn((await waitForMail(invitee, { subject: 'invites you' })).text).find((l) => l.includes('/invitations/'))!;
   const invitationToken = new URL(link).pathname.split('/').pop()!;
 
+  // Written straight to the table: the security suite needs a payment row, not a checkout (payments.webhook.test.ts).
+  const payment = await testDb()
+    .insertInto('class_payment')
+    .values({ class_id: cls.class.id, teacher_id: teacher.id, class_title: 'Kestrel Tuesday circle', student_id: quilter.id, amount: 1500, currency: 'GBP', state: 'expired', locale: 'en-GB' })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+
   return {
     accounts,
     client,
+    paymentId: payment.id,
     classId: cls.class.id,
     joinCode: cls.class.joinCode,
     otherClassId: otherClass.id,

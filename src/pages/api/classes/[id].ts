@@ -9,7 +9,7 @@ import { findClassAccess, isManager } from '@server/classes/classAccess.ts';
 import { deleteClass, findClassRow, listLessons } from '@server/classes/class.repository.ts';
 import { toClassJson, toLessonJson } from '@server/classes/classJson.ts';
 import { updateClassSchema } from '@server/classes/class.schema.ts';
-import { checkClassDates, updateClass } from '@server/classes/class.service.ts';
+import { checkClassDates, updateClass, checkClassPrice, priceProblemResponse } from '@server/classes/class.service.ts';
 import { dateProblemResponse } from '@server/classes/teachingDates.ts';
 import { deletePhotoObjectsOf } from '@server/photos/photoCleanup.ts';
 
@@ -23,7 +23,7 @@ export const GET = (async ({ locals, params }) => {
   const manager = isManager(access.standing);
   const row = await findClassRow(db, access.cls.id);
   if (!row) return notFound();
-  const lessons = await listLessons(db, access.cls.id, !manager);
+  const lessons = await listLessons(db, access.cls.id, !manager, access.accessUntil);
   return json({ class: toClassJson(row, manager), standing: access.standing, lessons: lessons.map((l) => toLessonJson(l, manager)) });
 }) satisfies APIRoute;
 
@@ -36,6 +36,8 @@ export const PATCH = (async ({ locals, params, request }) => {
   if (!body.ok) return body.error;
   const before = await findClassRow(db, access.cls.id);
   if (!before) return notFound();
+  const price = checkClassPrice(body.value.priceCents !== undefined ? body.value.priceCents : before.price_cents, body.value.currency !== undefined ? body.value.currency : before.currency);
+  if (price) return priceProblemResponse(price);
   const dates = checkClassDates(body.value, before.starts_on_text);
   if (!dates.ok) return dateProblemResponse(dates.error);
   await updateClass(db, access.cls.id, body.value);

@@ -6,7 +6,7 @@ import { db } from '@server/db.ts';
 import { json, readJson } from '@server/http.ts';
 import { hasRole, requireRole, requireUser } from '@server/auth/guards.ts';
 import { createClassSchema } from '@server/classes/class.schema.ts';
-import { checkClassDates, createClass } from '@server/classes/class.service.ts';
+import { checkClassDates, createClass, checkClassPrice, priceProblemResponse } from '@server/classes/class.service.ts';
 import { dateProblemResponse } from '@server/classes/teachingDates.ts';
 import { findClassRow, listClassesFor } from '@server/classes/class.repository.ts';
 import { toClassJson } from '@server/classes/classJson.ts';
@@ -24,6 +24,8 @@ export const POST = (async ({ locals, request }) => {
   if (!signedIn.ok) return signedIn.error;
   const body = await readJson(request, createClassSchema);
   if (!body.ok) return body.error;
+  const price = checkClassPrice(body.value.priceCents, body.value.currency);
+  if (price) return priceProblemResponse(price);
   const dates = checkClassDates(body.value);
   if (!dates.ok) return dateProblemResponse(dates.error);
   const id = await createClass(db, signedIn.value.user.id, body.value);

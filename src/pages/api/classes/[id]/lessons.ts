@@ -18,7 +18,7 @@ export const GET = (async ({ locals, params }) => {
   const access = await findClassAccess(db, signedIn.value.user, params['id']);
   if (!access) return problem(404, 'not_found', 'Not found.');
   const manager = isManager(access.standing);
-  const lessons = await listLessons(db, access.cls.id, !manager);
+  const lessons = await listLessons(db, access.cls.id, !manager, access.accessUntil);
   return json({ lessons: lessons.map((l) => toLessonJson(l, manager)) });
 }) satisfies APIRoute;
 

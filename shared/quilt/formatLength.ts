@@ -1,4 +1,5 @@
 import type { Units } from '../design/design.schema.ts';
+import { convertLength } from '../units/units.ts';
 
 /**
  * A length as a quilter reads it: inches to the nearest 1/8 in as a whole number and a reduced fraction
@@ -18,4 +19,19 @@ export function formatLength(value: number, units: Units): string {
   }
   if (num === 0) return `${sign}${whole} in`;
   return whole === 0 ? `${sign}${num}/${den} in` : `${sign}${whole} ${num}/${den} in`;
+}
+
+/**
+ * A quilt length measured in the quilt's `from` units, written in the viewer's units the quilt way: inches to the
+ * nearest 1/8 in, centimetres to one decimal (formatLength above).
+ */
+export function formatQuiltLength(value: number, from: Units, viewer: Units): string {
+  return formatLength(convertLength(value, from, viewer), viewer);
+}
+
+/** A finished quilt or block size in the viewer's units: "44 × 57 1/8 in", "111.8 × 144.8 cm". */
+export function formatQuiltSize(width: number, height: number, from: Units, viewer: Units): string {
+  const w = formatQuiltLength(width, from, viewer);
+  const h = formatQuiltLength(height, from, viewer);
+  return `${w.replace(/ (in|cm)$/, '')} × ${h}`;
 }

@@ -5,12 +5,19 @@ import { designListSchema, type DesignListItem } from '@shared/contract/designs.
 import { quiltRecordSchema, type QuiltRecord } from '@shared/contract/quilts.ts';
 import type { DesignSummary } from '@shared/contract/figures.ts';
 import type { Quilt } from '@shared/quilt/quilt.schema.ts';
-import { blockRect, bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
+import { bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
 import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { QuiltRoutePanel } from './QuiltRoutePanel.tsx';
-import { budgetOf, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { budgetOf, clearCell, moveBlock, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { keepHandOrder, quiltingOrder, swapInHandOrder } from './quiltOrderEdits.ts';
+import type { BlockDrop } from './blockGesture.ts';
+import { OrderPanel } from './OrderPanel.tsx';
+import { DesignTray } from './DesignTray.tsx';
+import { DragGhost } from './DragGhost.tsx';
+import { cellKey, QuiltMap } from './QuiltMap.tsx';
+import { useBlockGesture } from './useBlockGesture.ts';
 
 export interface QuiltEditorProps {
   readonly quiltId: string;
@@ -63,17 +70,24 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
     };
   }, [quiltId, show]);
 
+  // Every edit keeps a hand order true to the map (a cleared block leaves it, a new one joins at the end).
+  const applyEdit = useCallback((f: (q: Quilt) => Quilt) => {
+    setQuilt((q) => (q ? keepHandOrder(f(q)) : q));
+    setDirty(true);
+    setNotice(null);
+  }, []);
+  const onDrop = useCallback(
+    (d: BlockDrop) => applyEdit((q) => (d.kind === 'place' ? placeDesign(q, d.cell.row, d.cell.column, d.designId) : swapInHandOrder(moveBlock(q, d.from, d.to), d.from, d.to))),
+    [applyEdit],
+  );
+  const { gesture, dispatch } = useBlockGesture(onDrop, setPicked);
   const byId = useMemo(() => new Map(designs.map((d) => [d.id, d])), [designs]);
   const summaries = useMemo(() => new Map<string, DesignSummary | null>(designs.map((d) => [d.id, d.summary])), [designs]);
 
   if (loadError) return <p className="mt-4 font-semibold text-madder-600" role="alert">{loadError}</p>;
   if (!record || !quilt) return <p className="mt-4">Loading the quilt…</p>;
 
-  const edit = (next: Quilt) => {
-    setQuilt(next);
-    setDirty(true);
-    setNotice(null);
-  };
+  const edit = (next: Quilt) => applyEdit(() => next);
 
   async function save() {
     if (!record || !quilt) return;
@@ -96,11 +110,13 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
   }
 
   const size = finishedSize(quilt);
+  const orderNumbers = new Map(quiltingOrder(quilt).map((c, i) => [cellKey(c), i + 1] as const));
+  const heldDesign = gesture.kind === 'holding' && gesture.carried.kind === 'design' ? byId.get(gesture.carried.designId) : undefined;
+  const heldWords = heldDesign ? `Placing “${heldDesign.title}”: pick a block on the map (Escape to stop).` : '';
   const border = bordersWidth(quilt);
   const cell = quilt.placements[picked.row]?.[picked.column] ?? null;
   const trim = trimTableOf(quilt);
   const { budget, missing } = budgetOf(quilt, summaries);
-  const pct = (v: number, of: number) => `${(100 * v) / of}%`;
   const len = (v: number) => formatLength(v, quilt.units, viewerUnits);
 
   return (
@@ -110,45 +126,32 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           Finished size <strong data-testid="finished-size">{formatSize(size.width, size.height, quilt.units, viewerUnits)}</strong>
           {' '}· {quilt.rows} × {quilt.columns} blocks of {formatSize(quilt.block.width, quilt.block.height, quilt.units, viewerUnits)}
         </p>
-        <div className="relative mx-auto w-full max-w-2xl border border-indigo-ink bg-ochre-100" style={{ aspectRatio: `${size.width} / ${size.height}` }}>
-          {border > 0 && <span className="sr-only">Border {len(border)} wide all round.</span>}
-          {quilt.placements.flatMap((cells, row) =>
-            cells.map((p, column) => {
-              const r = blockRect(quilt, { row, column });
-              const d = p ? byId.get(p.designId) : undefined;
-              const isPicked = picked.row === row && picked.column === column;
-              const name = `Row ${row + 1}, column ${column + 1}: ${p ? `${d?.title ?? 'a design'}${p.rotation ? `, turned ${p.rotation}°` : ''}${p.mirror ? ', mirrored' : ''}` : 'empty'}`;
-              return (
-                <button
-                  key={`${row}-${column}`}
-                  type="button"
-                  aria-label={name}
-                  aria-pressed={isPicked}
-                  data-cell={`${row}-${column}`}
-                  onClick={() => setPicked({ row, column })}
-                  className={`absolute overflow-hidden bg-white ${isPicked ? 'z-10 outline outline-4 outline-denim-600' : 'outline outline-1 outline-muslin-300'}`}
-                  style={{ left: pct(r.x, size.width), top: pct(r.y, size.height), width: pct(r.width, size.width), height: pct(r.height, size.height) }}
-                >
-                  {p && d?.thumbnailSvg ? (
-                    <img
-                      src={`data:image/svg+xml;charset=utf-8,${encodeURIComponent(d.thumbnailSvg)}`}
-                      alt=""
-                      data-rotation={p.rotation}
-                      data-mirror={p.mirror}
-                      className="h-full w-full"
-                      style={{ transform: `rotate(${p.rotation}deg)${p.mirror ? ' scaleX(-1)' : ''}` }}
-                    />
-                  ) : (
-                    <span className="text-sm text-denim-700">{p ? (d?.title ?? 'Design') : 'Empty'}</span>
-                  )}
-                </button>
-              );
-            }),
-          )}
-        </div>
+        <QuiltMap
+          quilt={quilt}
+          viewerUnits={viewerUnits}
+          designs={byId}
+          picked={picked}
+          gesture={gesture}
+          orderNumbers={orderNumbers}
+          onCellClick={(c) => dispatch({ kind: 'cell', cell: c })}
+          onCellPointerDown={(c, e) => e.button === 0 && dispatch({ kind: 'pointer-down', carried: { kind: 'cell', cell: c }, at: { x: e.clientX, y: e.clientY } })}
+        />
+        <p className="sr-only" role="status" aria-live="polite">{heldWords}</p>
+        {gesture.kind === 'holding' && (
+          <p className="mt-2 rounded border-l-4 border-denim-600 bg-muslin-100 px-3 py-2" aria-hidden="true">
+            {heldWords} <button type="button" className="ml-1 underline" onClick={() => dispatch({ kind: 'cancel' })}>Put it back</button>
+          </p>
+        )}
+        {gesture.kind === 'dragging' && <DragGhost carried={gesture.carried} at={gesture.at} quilt={quilt} designs={byId} />}
       </section>
 
       <aside className="space-y-4">
+        <DesignTray
+          designs={designs}
+          heldDesignId={gesture.kind === 'holding' && gesture.carried.kind === 'design' ? gesture.carried.designId : null}
+          onPick={(c) => dispatch({ kind: 'pick', carried: c })}
+          onPointerDown={(c, e) => e.button === 0 && dispatch({ kind: 'pointer-down', carried: c, at: { x: e.clientX, y: e.clientY } })}
+        />
         <section className="rounded border border-muslin-300 bg-muslin-50 p-3" aria-label="Picked block">
           <h2 className="font-bold">Row {picked.row + 1}, column {picked.column + 1}</h2>
           <label htmlFor={ids.design} className="mt-2 block font-semibold">Design</label>
@@ -171,9 +174,14 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
             <button type="button" disabled={!cell} onClick={() => edit(toggleMirror(quilt, picked.row, picked.column))} className="rounded border border-denim-600 px-3 py-1 font-semibold text-denim-700 disabled:opacity-50">
               {cell?.mirror ? 'Unmirror' : 'Mirror'}
             </button>
+            <button type="button" disabled={!cell} onClick={() => edit(clearCell(quilt, picked.row, picked.column))} className="rounded border border-madder-600 px-3 py-1 font-semibold text-madder-600 disabled:opacity-50">
+              Clear block
+            </button>
           </div>
           {cell && <p className="mt-1 text-sm">Turned {cell.rotation}° clockwise{cell.mirror ? ', mirrored left to right' : ''}.</p>}
         </section>
+
+        <OrderPanel quilt={quilt} designs={byId} onEdit={edit} />
 
         <section className="grid grid-cols-2 gap-3 rounded border border-muslin-300 bg-muslin-50 p-3" aria-label="Sashing and border">
           <div>

@@ -1,7 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { quiltSchema } from '@shared/quilt/quilt.schema.ts';
+import fc from 'fast-check';
+import { quiltSchema, type Quilt } from '@shared/quilt/quilt.schema.ts';
 import { finishedSize } from '@shared/quilt/finishedSize.ts';
-import { budgetOf, newQuilt, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { budgetOf, clearCell, moveBlock, newQuilt, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
 import type { DesignSummary } from '@shared/contract/figures.ts';
 
 describe('quilt map edits', () => {
@@ -62,5 +63,46 @@ describe('quilt map edits', () => {
     expect(budget?.passes).toBe(3);
     expect(budget?.stitchLength).toBe(200);
     expect(budget?.chained).toBe(false);
+  });
+});
+
+describe('placing, replacing, moving and clearing blocks', () => {
+  it('a design dropped on a filled cell replaces the design and keeps the cell’s turn and mirror', () => {
+    let q = toggleMirror(turnQuarter(placeDesign(newQuilt('in', 1, 2, 12), 0, 0, 'a'), 0, 0), 0, 0);
+    q = placeDesign(q, 0, 0, 'b');
+    expect(q.placements[0]![0]).toEqual({ designId: 'b', rotation: 90, mirror: true });
+  });
+
+  it('moving a block swaps it with what is in the target cell, turn and mirror travelling with each block', () => {
+    let q = placeDesign(newQuilt('in', 2, 2, 12), 0, 0, 'a');
+    q = turnQuarter(q, 0, 0);
+    q = placeDesign(q, 1, 1, 'b');
+    const moved = moveBlock(q, { row: 0, column: 0 }, { row: 1, column: 1 });
+    expect(moved.placements).toEqual([[{ designId: 'b', rotation: 0, mirror: false }, null], [null, { designId: 'a', rotation: 90, mirror: false }]]);
+    const toEmpty = moveBlock(q, { row: 0, column: 0 }, { row: 0, column: 1 });
+    expect(toEmpty.placements[0]).toEqual([null, { designId: 'a', rotation: 90, mirror: false }]);
+    expect(moveBlock(q, { row: 1, column: 1 }, { row: 1, column: 1 })).toEqual(q);
+    expect(() => moveBlock(q, { row: 2, column: 0 }, { row: 0, column: 0 })).toThrow(/outside/);
+  });
+
+  it('clearing empties the cell and the map still passes the schema; a random run of edits never leaves the schema', () => {
+    const q = clearCell(placeDesign(newQuilt('in', 2, 2, 12), 0, 1, 'a'), 0, 1);
+    expect(q.placements).toEqual([[null, null], [null, null]]);
+    const cell = fc.record({ row: fc.integer({ min: 0, max: 2 }), column: fc.integer({ min: 0, max: 3 }) });
+    const edit = fc.oneof(
+      fc.record({ c: cell, d: fc.constantFrom('a', 'b', 'c') }).map(({ c, d }) => (x: Quilt) => placeDesign(x, c.row, c.column, d)),
+      cell.map((c) => (x: Quilt) => clearCell(x, c.row, c.column)),
+      cell.map((c) => (x: Quilt) => turnQuarter(x, c.row, c.column)),
+      cell.map((c) => (x: Quilt) => toggleMirror(x, c.row, c.column)),
+      fc.tuple(cell, cell).map(([a, b]) => (x: Quilt) => moveBlock(x, a, b)),
+    );
+    fc.assert(
+      fc.property(fc.array(edit, { maxLength: 25 }), (edits) => {
+        const start = newQuilt('in', 3, 4, 10);
+        const end = edits.reduce((x, f) => f(x), start);
+        expect(quiltSchema.parse(end)).toEqual(end);
+        expect(end.placements.map((r) => r.length)).toEqual([4, 4, 4]);
+      }),
+    );
   });
 });

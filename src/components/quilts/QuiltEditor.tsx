@@ -9,6 +9,7 @@ import { blockRect, bordersWidth, finishedSize } from '@shared/quilt/finishedSiz
 import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
+import { PlanDownload } from '../print/PlanDownload.tsx';
 import { QuiltRoutePanel } from './QuiltRoutePanel.tsx';
 import { budgetOf, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
 
@@ -110,7 +111,7 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           Finished size <strong data-testid="finished-size">{formatSize(size.width, size.height, quilt.units, viewerUnits)}</strong>
           {' '}· {quilt.rows} × {quilt.columns} blocks of {formatSize(quilt.block.width, quilt.block.height, quilt.units, viewerUnits)}
         </p>
-        <div className="relative mx-auto w-full max-w-2xl border border-indigo-ink bg-ochre-100" style={{ aspectRatio: `${size.width} / ${size.height}` }}>
+        <div data-print-keep className="relative mx-auto w-full max-w-2xl border border-indigo-ink bg-ochre-100" style={{ aspectRatio: `${size.width} / ${size.height}` }}>
           {border > 0 && <span className="sr-only">Border {len(border)} wide all round.</span>}
           {quilt.placements.flatMap((cells, row) =>
             cells.map((p, column) => {
@@ -192,6 +193,11 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           </button>
           <span aria-live="polite" className="text-sm">{dirty ? 'Unsaved changes' : `Saved, version ${record.version}`}</span>
         </div>
+        <section aria-label="Printable plan" className="print:hidden">
+          <h2 className="font-bold">Printable plan</h2>
+          <p className="text-sm">The quilt map, trim plan and budget, then each block with its numbered steps.</p>
+          <PlanDownload href={`/api/quilts/${record.id}/plan.pdf`} waitText={dirty ? 'Save the quilt to download its plan.' : null} className="mt-2" />
+        </section>
         {notice && <p role={notice.tone === 'warn' ? 'alert' : 'status'} className={notice.tone === 'warn' ? 'font-semibold text-madder-600' : 'text-denim-700'}>{notice.text}</p>}
       </aside>
 

@@ -333,7 +333,7 @@ function writeTile(w: Writer, sheet: BlockSheet, tile: Tile, rows: number, colum
   const origin: Box = { x: area.x, y: area.y + 34, width: tile.source.width, height: tile.source.height };
   doc.save();
   doc.rect(origin.x, origin.y, origin.width, origin.height).clip();
-  drawBlock(w, sheet, { x: origin.x - tile.source.x, y: origin.y - tile.source.y }, k);
+  drawBlock(w, sheet, { x: origin.x - tile.source.x, y: origin.y - tile.source.y }, k, origin);
   doc.restore();
   // Overlap strips: dashed lines where the neighbour's paper ends, so the quilter sees what is shared.
   doc.save().lineWidth(0.5).strokeColor(INK.rule).dash(2, { space: 2 });
@@ -359,7 +359,7 @@ function writeTile(w: Writer, sheet: BlockSheet, tile: Tile, rows: number, colum
  * The block at `k` points per design unit with its top-left corner at (frame.x, frame.y): paper colour, binding
  * band, seams, the route in the one visual language (lineStyles.ts), the outline, then arrows and step numbers.
  */
-function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k: number): void {
+function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k: number, visible?: Box): void {
   const { doc } = w;
   const d = sheet.design;
   const at = (p: Point): [number, number] => [frame.x + p[0] * k, frame.y + p[1] * k];
@@ -394,9 +394,11 @@ function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k:
   doc.lineWidth(0.8).strokeColor(INK.outline).rect(frame.x, frame.y, W, H).stroke();
   for (const m of sheet.marks) {
     const [x, y] = at(m.at);
+    // On a tile only the marks on this tile are drawn (the rest would be clipped anyway).
+    if (visible && (x < visible.x - 12 || x > visible.x + visible.width + 12 || y < visible.y - 12 || y > visible.y + visible.height + 12)) continue;
     if (m.kind === 'start') {
       doc.circle(x, y, 6.5).fill(INK.mark);
-      w.text(`S${m.number}`, { size: 6.5, weight: 'bold', colour: '#ffffff', x: x - 8, y: y - 4, width: 16, align: 'center', gap: 0 });
+      label(doc, `S${m.number}`, x, y, 6.5, '#ffffff');
       continue;
     }
     const c = Math.cos(m.angle);
@@ -412,9 +414,19 @@ function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k:
     const nx = x + s * 9;
     const ny = y - c * 9;
     doc.circle(nx, ny, 5.5).lineWidth(0.5).fillAndStroke('#ffffff', INK.mark);
-    w.text(String(m.number), { size: m.number > 99 ? 5 : 6.5, weight: 'bold', colour: INK.mark, x: nx - 8, y: ny - 3.9, width: 16, align: 'center', gap: 0 });
+    label(doc, String(m.number), nx, ny, m.number > 99 ? 5 : 6.5, INK.mark);
   }
   doc.restore();
+}
+
+/**
+ * A short label (digits, "S1") centred on (x, y), written without wrapping: pdfkit never starts a new page for it,
+ * even when a tile's clipped drawing reaches below the margin.
+ */
+function label(doc: PDFKit.PDFDocument, text: string, x: number, y: number, size: number, colour: string): void {
+  doc.font(faceName('bold', 'latin')).fontSize(size).fillColor(colour);
+  const width = doc.widthOfString(text);
+  doc.text(text, x - width / 2, y - size * 0.62, { lineBreak: false });
 }
 
 function writeScaleBar(w: Writer, scale: number, trueSize: boolean): void {

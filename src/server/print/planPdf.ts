@@ -20,7 +20,7 @@ import { layoutQuiltMap } from '@shared/print/quiltMapLayout.ts';
 import { dashFor, LINE_STYLES } from '@shared/style/lineStyles.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import type { ThreadBudget } from '@shared/route/threadBudget.ts';
-import { faceName, FONT_WEIGHTS, fontPath, SUBSETS, subsetRanges, type FontWeight } from './pdfFonts.ts';
+import { faceName, FONT_WEIGHTS, fontBytes, SUBSETS, subsetRanges, type FontWeight } from './pdfFonts.ts';
 
 /** A quilt's own pages, everything in the viewer's units (the quilt converted with convertQuilt). */
 export interface QuiltSheet {
@@ -65,8 +65,9 @@ export async function renderPlanPdf(plan: PrintPlan, options: RenderOptions = {}
     autoFirstPage: false,
     bufferPages: true,
     compress: options.compress ?? true,
-    // The first face is the document's default, so pdfkit never loads a standard font.
-    font: fontPath('regular', 'latin'),
+    // The first face is the document's default, so pdfkit never loads a standard font (the option is typed as a
+    // name or path; pdfkit takes the font's bytes as well).
+    font: fontBytes('regular', 'latin') as unknown as string,
     info: { Title: plan.title, Creator: 'Threadway', Producer: 'Threadway (pdfkit)' },
     lang: 'en',
   });
@@ -80,11 +81,11 @@ export async function renderPlanPdf(plan: PrintPlan, options: RenderOptions = {}
   const between = options.between ?? (async () => {});
 
   if (plan.quilt) {
-    writeQuiltPages(w, plan.quilt);
+    await writeQuiltPages(w, plan.quilt, between);
     await between();
   }
   for (const sheet of plan.blocks) {
-    writeBlockPages(w, sheet, plan.layout);
+    await writeBlockPages(w, sheet, plan.layout, between);
     await between();
   }
   w.footers(plan.title);
@@ -100,7 +101,7 @@ class Writer {
     readonly paper: Paper,
     readonly units: Units,
   ) {
-    for (const weight of FONT_WEIGHTS) for (const subset of SUBSETS) doc.registerFont(faceName(weight, subset), fontPath(weight, subset));
+    for (const weight of FONT_WEIGHTS) for (const subset of SUBSETS) doc.registerFont(faceName(weight, subset), fontBytes(weight, subset));
     const ranges = subsetRanges();
     this.covers = SUBSETS.map((s) => parseUnicodeRange(ranges[s]));
   }
@@ -174,7 +175,7 @@ class Writer {
 
 // ── the quilt ────────────────────────────────────────────────────────────────────────────────────────────────────
 
-function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
+async function writeQuiltPages(w: Writer, sheet: QuiltSheet, between: () => Promise<void>): Promise<void> {
   const { doc } = w;
   const q = sheet.quilt;
   const size = finishedSize(q);
@@ -217,6 +218,7 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
     { size: 9, x: w.area.x, width: w.area.width },
   );
 
+  await between();
   w.heading('Quilt budget');
   const budget = sheet.budget;
   if (!budget) {
@@ -230,6 +232,7 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
     ]);
   }
 
+  await between();
   w.page();
   w.text('Quilt-as-you-go trim plan', { size: 16, weight: 'bold', x: w.area.x, y: w.area.y });
   if ('problem' in sheet.trim) {
@@ -253,7 +256,9 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
   doc.table({
     position: { x: w.area.x, y: doc.y },
     maxWidth: w.area.width,
-    columnStyles: [58, 38, 58, 58, '*', '*', '*', '*'],
+    // Fixed widths: pdfkit measures every cell again for each '*' column, which made this one table take most of a
+    // quilt plan's time (measured with bench/printPlan.bench.ts).
+    columnStyles: [54, 40, 58, 58, ...Array.from({ length: 4 }, () => (w.area.width - 210) / 4)],
     defaultStyle: { padding: 3, border: 0.5, borderColor: INK.rule },
     data: [
       ['Block', 'Position', 'Make at', 'Cut to', 'Top', 'Right', 'Bottom', 'Left'].map((t) => cell(t, true)),
@@ -264,7 +269,7 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
 
 // ── a block ──────────────────────────────────────────────────────────────────────────────────────────────────────
 
-function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout): void {
+async function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout, between: () => Promise<void>): Promise<void> {
   const { doc, paper } = w;
   const d = sheet.design;
   const size = blockSizeInPoints(d);
@@ -302,7 +307,10 @@ function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout): voi
     }
     doc.y = frame.y + frame.height + 8;
     writeLegend(w);
-    for (const t of placed.tiling.tiles) writeTile(w, sheet, t, placed.tiling.rows, placed.tiling.columns, k);
+    for (const t of placed.tiling.tiles) {
+      await between();
+      writeTile(w, sheet, t, placed.tiling.rows, placed.tiling.columns, k);
+    }
     w.page();
     w.text(sheet.title, { size: 14, weight: 'bold', x: area.x, y: area.y });
   } else {
@@ -312,6 +320,7 @@ function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout): voi
     writeLegend(w);
   }
   for (const note of sheet.notes) w.text(note, { size: 9, colour: INK.muted, x: area.x });
+  await between();
   writeSteps(w, sheet);
   w.heading('Thread budget for this block', 12);
   writeBudget(w, sheet.budget, [

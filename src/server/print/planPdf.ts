@@ -14,6 +14,7 @@ import { bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
 import { describeAssumption, sourceKind } from '@shared/print/assumptionWords.ts';
 import { placeBlock, rowLetter, type PrintLayout, type Tile } from '@shared/print/blockPlacement.ts';
 import { blockSizeInPoints, type BlockSheet } from '@shared/print/blockSheet.ts';
+import { placeStepNumbers } from '@shared/print/stepMarks.ts';
 import { parseUnicodeRange, splitFontRuns } from '@shared/print/fontRuns.ts';
 import { paperFor, pointsPerUnit, printableBox, type Box, type Paper } from '@shared/print/paper.ts';
 import { layoutQuiltMap } from '@shared/print/quiltMapLayout.ts';
@@ -184,12 +185,12 @@ async function writeQuiltPages(w: Writer, sheet: QuiltSheet, between: () => Prom
   w.text(
     `Quilt map · finished size ${formatSize(size.width, size.height, q.units, w.units)} · ${q.rows} × ${q.columns} blocks of ${formatSize(q.block.width, q.block.height, q.units, w.units)}` +
       `${q.sashing > 0 ? ` · sashing ${w.len(q.sashing)}` : ' · no sashing'}` +
-      `${q.borders.length > 0 ? ` · border${q.borders.length > 1 ? 's' : ''} ${q.borders.map((b) => w.len(b)).join(', ')} (innermost first)` : ' · no border'}`,
+      `${q.borders.length > 1 ? ` · borders ${q.borders.map((b) => w.len(b)).join(', ')} (innermost first)` : q.borders.length === 1 ? ` · border ${w.len(q.borders[0]!)}` : ' · no border'}`,
     { size: 10, colour: INK.muted },
   );
   doc.moveDown(0.6);
   const top = doc.y;
-  const mapArea: Box = { x: w.area.x, y: top, width: w.area.width, height: Math.min(w.area.height * 0.62, w.area.y + w.area.height - top - 120) };
+  const mapArea: Box = { x: w.area.x, y: top, width: w.area.width, height: Math.min(w.area.height * 0.55, w.area.y + w.area.height - top - 190) };
   const map = layoutQuiltMap(q, mapArea);
   // Borders: the whole quilt in the border colour, then the blocks' field in the sashing colour, then the blocks.
   doc.save();
@@ -401,15 +402,14 @@ function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k:
     if (dash.length > 0) doc.undash();
   }
   doc.lineWidth(0.8).strokeColor(INK.outline).rect(frame.x, frame.y, W, H).stroke();
-  for (const m of sheet.marks) {
-    const [x, y] = at(m.at);
+  const shown = sheet.marks
+    .map((m) => ({ ...m, page: at(m.at) }))
     // On a tile only the marks on this tile are drawn (the rest would be clipped anyway).
-    if (visible && (x < visible.x - 12 || x > visible.x + visible.width + 12 || y < visible.y - 12 || y > visible.y + visible.height + 12)) continue;
-    if (m.kind === 'start') {
-      doc.circle(x, y, 6.5).fill(INK.mark);
-      label(doc, `S${m.number}`, x, y, 6.5, '#ffffff');
-      continue;
-    }
+    .filter(({ page: [x, y] }) => !visible || (x >= visible.x - 12 && x <= visible.x + visible.width + 12 && y >= visible.y - 12 && y <= visible.y + visible.height + 12));
+  const steps = shown.filter((m) => m.kind !== 'start');
+  const discs = placeStepNumbers(steps.map((m) => ({ at: m.page, angle: m.angle })), 5.5);
+  for (const m of steps) {
+    const [x, y] = m.page;
     const c = Math.cos(m.angle);
     const s = Math.sin(m.angle);
     const size = 4.5;
@@ -419,11 +419,19 @@ function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k:
       .lineTo(x - c * size * 0.7 + s * size * 0.7, y - s * size * 0.7 - c * size * 0.7)
       .closePath()
       .fill(INK.mark);
-    // The number sits to the left of the direction of sewing, clear of the arrow.
-    const nx = x + s * 9;
-    const ny = y - c * 9;
+  }
+  steps.forEach((m, i) => {
+    const [nx, ny] = discs[i]!;
+    // A number set back from its arrow to stay clear of its neighbours gets a thin leader to the arrow.
+    if (Math.hypot(nx - m.page[0], ny - m.page[1]) > 10) doc.moveTo(nx, ny).lineTo(m.page[0], m.page[1]).lineWidth(0.4).stroke(INK.mark);
     doc.circle(nx, ny, 5.5).lineWidth(0.5).fillAndStroke('#ffffff', INK.mark);
     label(doc, String(m.number), nx, ny, m.number > 99 ? 5 : 6.5, INK.mark);
+  });
+  for (const m of shown) {
+    if (m.kind !== 'start') continue;
+    const [x, y] = m.page;
+    doc.circle(x, y, 6.5).fill(INK.mark);
+    label(doc, `S${m.number}`, x, y, 6.5, '#ffffff');
   }
   doc.restore();
 }

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { designSchema } from '../design/design.schema.ts';
 import { buildWalkthrough } from '../walkthrough/buildWalkthrough.ts';
 import type { RouteStrokeInput } from '../walkthrough/walkthrough.types.ts';
-import { findStepMarks, halfway } from './stepMarks.ts';
+import { findStepMarks, halfway, placeStepNumbers } from './stepMarks.ts';
 
 describe('halfway', () => {
   it('finds the point at half the length and the direction there (worked example)', () => {
@@ -35,5 +35,19 @@ describe('findStepMarks', () => {
     const last = marks[marks.length - 1]!;
     expect(last.at).toEqual([5, 3]);
     expect(last.angle).toBeCloseTo(Math.PI / 2, 12);
+  });
+});
+
+describe('placeStepNumbers', () => {
+  it('puts a lone number 9 pt to the left of the way of sewing', () => {
+    // Sewing toward +x (angle 0, y down): left is −y.
+    const [p] = placeStepNumbers([{ at: [100, 100], angle: 0 }], 5.5);
+    expect(p![0]).toBeCloseTo(100, 12);
+    expect(p![1]).toBeCloseTo(91, 12);
+  });
+  it('keeps the discs of marks that meet at one point apart (the centre of a pinwheel)', () => {
+    const marks = [0, 1, 2, 3, 4, 5].map((k) => ({ at: [50, 50] as const, angle: (k * Math.PI) / 3 }));
+    const discs = placeStepNumbers(marks, 5.5);
+    for (let i = 0; i < discs.length; i++) for (let j = i + 1; j < discs.length; j++) expect(Math.hypot(discs[i]![0] - discs[j]![0], discs[i]![1] - discs[j]![1])).toBeGreaterThanOrEqual(11 - 1e-9);
   });
 });

@@ -51,3 +51,29 @@ export function halfway(points: readonly Point[]): { at: Point; angle: number } 
   }
   return null;
 }
+
+/**
+ * Where each step number's disc goes on the page (points): beside its mark, to the left of the direction of sewing
+ * first, then to the right, then ahead and behind, at 9 pt and then 16 pt, with the first spot whose disc (radius `r`)
+ * overlaps no disc placed before it and no other mark's arrow. When every spot is taken the number still prints at the
+ * first spot (a number is never dropped: the list refers to it). Greedy in the given order.
+ */
+export function placeStepNumbers(marks: readonly { readonly at: Point; readonly angle: number }[], r: number): Point[] {
+  const placed: Point[] = [];
+  const clear = (p: Point, upTo: number): boolean =>
+    placed.every((q) => Math.hypot(p[0] - q[0], p[1] - q[1]) >= 2 * r) &&
+    marks.every((m, j) => j === upTo || Math.hypot(p[0] - m.at[0], p[1] - m.at[1]) >= r + 3);
+  marks.forEach((m, i) => {
+    const c = Math.cos(m.angle);
+    const s = Math.sin(m.angle);
+    // Left of the direction of sewing is (s, −c) in y-down coordinates.
+    const directions: Point[] = [[s, -c], [-s, c], [c, s], [-c, -s], [s + c, s - c], [s - c, -c - s], [c - s, s + c], [-s - c, c - s]];
+    const spots: Point[] = [];
+    for (const d of [9, 16]) for (const [dx, dy] of directions) {
+      const len = Math.hypot(dx, dy);
+      spots.push([m.at[0] + (dx / len) * d, m.at[1] + (dy / len) * d]);
+    }
+    placed.push(spots.find((p) => clear(p, i)) ?? spots[0]!);
+  });
+  return placed;
+}

@@ -3,7 +3,7 @@
 // Sources: Letter is 612 × 792 pt (8.5 × 11 in, ANSI/ASME Y14.1), A4 is 595.28 × 841.89 pt (210 × 297 mm, ISO 216),
 // one PDF unit is 1/72 in (ISO 32000-1 §8.3.2.3); the step list and the budget are compared with what the shared
 // walkthrough and thread-budget code give for the same saved route (the screens' own words).
-import { execFileSync } from 'node:child_process';
+import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
@@ -36,7 +36,12 @@ async function getPdf(client: TestClient, p: string): Promise<PdfAnswer> {
   return { status: res.status, headers: res.headers, bytes, file };
 }
 
-const poppler = (tool: string, ...args: string[]): string => execFileSync(`/usr/bin/${tool}`, args, { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+/** Runs a poppler tool; anything it reports on stderr ("Syntax Error: …", e.g. an unbalanced graphics state) fails the test. */
+function poppler(tool: string, ...args: string[]): string {
+  const r = spawnSync(`/usr/bin/${tool}`, args, { encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+  if (r.status !== 0 || r.stderr.trim() !== '') throw new Error(`${tool} ${args.join(' ')}: exit ${r.status}, ${r.stderr.trim()}`);
+  return r.stdout;
+}
 /** pdftotext's words with every run of white space (line wraps included) as one space. */
 const words = (file: string): string => poppler('pdftotext', '-enc', 'UTF-8', file, '-').replace(/\s+/g, ' ');
 const pages = (file: string): number => Number(/Pages:\s+(\d+)/.exec(poppler('pdfinfo', file))![1]);

@@ -1,3 +1,4 @@
+import { PlanDownload } from '../print/PlanDownload.tsx';
 import { SaveIndicator } from './SaveIndicator.tsx';
 import type { SaveStatus } from './saveStatus.ts';
 
@@ -14,7 +15,7 @@ export interface WorkbenchHeaderProps {
   readonly onToggleKeys: () => void;
 }
 
-/** The workbench's top line: back link, editable title, block size, save state, SVG download and the key list. */
+/** The workbench's top line: back link, editable title, block size, save state, the printable plan and SVG downloads and the key list. */
 export function WorkbenchHeader({ designId, title, onTitle, sizeText, status, onSaveNow, onResolve, showKeys, onToggleKeys }: WorkbenchHeaderProps) {
   return (
     <header className="flex flex-wrap items-center gap-3">
@@ -27,6 +28,7 @@ export function WorkbenchHeader({ designId, title, onTitle, sizeText, status, on
       <span className="text-denim-700">{sizeText}</span>
       <SaveIndicator status={status} onSaveNow={onSaveNow} onResolve={onResolve} />
       <span className="ml-auto flex flex-wrap gap-2">
+        <PlanDownload href={`/api/designs/${designId}/plan.pdf`} />
         <a href={`/api/designs/${designId}/export.svg`} download className="rounded border border-denim-600 px-3 py-1 text-sm">Download SVG</a>
         <button type="button" onClick={onToggleKeys} aria-expanded={showKeys} className="rounded border border-denim-600 px-3 py-1 text-sm">Keys</button>
       </span>

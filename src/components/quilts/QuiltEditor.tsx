@@ -9,6 +9,7 @@ import { bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
 import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
+import { PlanDownload } from '../print/PlanDownload.tsx';
 import { QuiltRoutePanel } from './QuiltRoutePanel.tsx';
 import { budgetOf, clearCell, moveBlock, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
 import { keepHandOrder, quiltingOrder, swapInHandOrder } from './quiltOrderEdits.ts';
@@ -200,6 +201,11 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           </button>
           <span aria-live="polite" className="text-sm">{dirty ? 'Unsaved changes' : `Saved, version ${record.version}`}</span>
         </div>
+        <section aria-label="Printable plan" className="print:hidden">
+          <h2 className="font-bold">Printable plan</h2>
+          <p className="text-sm">The quilt map, trim plan and budget, then each block with its numbered steps.</p>
+          <PlanDownload href={`/api/quilts/${record.id}/plan.pdf`} waitText={dirty ? 'Save the quilt to download its plan.' : null} className="mt-2" />
+        </section>
         {notice && <p role={notice.tone === 'warn' ? 'alert' : 'status'} className={notice.tone === 'warn' ? 'font-semibold text-madder-600' : 'text-denim-700'}>{notice.text}</p>}
       </aside>
 

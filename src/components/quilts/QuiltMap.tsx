@@ -41,6 +41,7 @@ export function QuiltMap({ quilt, viewerUnits, designs, picked, gesture, orderNu
   });
   return (
     <div
+      data-print-keep
       className="relative mx-auto w-full max-w-2xl border border-indigo-ink bg-muslin-200"
       style={{ aspectRatio: `${size.width} / ${size.height}` }}
       data-testid="quilt-map"

@@ -29,7 +29,7 @@ export function StepList({ title, steps, cautions, current, onPick }: StepListPr
         </ul>
         <p className="mt-1 text-base">Your machine’s and tools’ own manuals come first; these notes do not replace them.</p>
       </div>
-      <ol className="mt-4 flex flex-col gap-2" data-testid="step-list">
+      <ol className="mt-4 flex flex-col gap-2" data-testid="step-list" data-print-keep>
         {steps.map((s) => (
           <li key={s.index}>
             <button

@@ -2,6 +2,7 @@ import { LineLegend } from '../route/LineLegend.tsx';
 import { legendEntries } from '../route/legendEntries.ts';
 import { useEffect, useMemo } from 'react';
 import type { Design } from '@shared/design/design.schema.ts';
+import { buildDesignSvg } from '@shared/export/designSvg.ts';
 import { buildWalkthrough } from '@shared/walkthrough/buildWalkthrough.ts';
 import { findSafetyCautions } from '@shared/walkthrough/safetyCautions.ts';
 import type { RouteStrokeInput } from '@shared/walkthrough/walkthrough.types.ts';
@@ -48,6 +49,9 @@ const OFFLINE_NOTE: Record<OfflineReadiness, string | null> = {
 export function WalkthroughView({ title, design, route, lessonText, initialStep, progress, offline = null }: WalkthroughViewProps) {
   const online = useOnline();
   const walkthrough = useMemo(() => buildWalkthrough(design, route), [design, route]);
+  // Printing the page: the canvas does not print well, so a print-only picture of the block with its route (the
+  // SVG export's drawing, as an image: no markup from strings) stands in for it.
+  const printPicture = useMemo(() => `data:image/svg+xml;charset=utf-8,${encodeURIComponent(buildDesignSvg(design, { route, viewerUnits: design.units }))}`, [design, route]);
   const { steps } = walkthrough;
   const cautions = useMemo(() => findSafetyCautions(lessonText), [lessonText]);
   const sp = useStepPlayer(steps, route, design.units, design.thread, initialStep);
@@ -92,6 +96,7 @@ export function WalkthroughView({ title, design, route, lessonText, initialStep,
         <div className="h-[40vh] min-h-72 @4xl:sticky @4xl:top-2 @4xl:h-[min(65vh,calc(100dvh-11rem))] @4xl:self-start print:hidden">
           <WalkthroughCanvas design={design} strokes={route} step={step} patch={patch} needle={sp.needle} />
         </div>
+        <img src={printPicture} alt={`${title}: the block with its route, pass numbers and arrows`} className="hidden w-full max-w-[17cm] print:block" />
         <div className="flex flex-col gap-4">
           <StepCard step={step} />
           <details className="rounded border border-muslin-200 bg-white p-3 print:hidden">

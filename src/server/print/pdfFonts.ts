@@ -3,7 +3,9 @@
 // family by script: the `latin` subset has ASCII and Western European letters, `latin-ext` the rest of the Latin
 // letters (Ł, ź, ő …) but not ASCII, so text is set run by run in whichever face has each character
 // (shared/print/fontRuns.ts).
+import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
+import { woffToSfnt } from './woff.ts';
 
 const require = createRequire(import.meta.url);
 
@@ -30,4 +32,20 @@ export function subsetRanges(): Readonly<Record<FontSubset, string>> {
   const ext = ranges['latin-ext'];
   if (!latin || !ext) throw new Error('print/pdfFonts: @fontsource/source-sans-3 has no latin or latin-ext range');
   return { latin, 'latin-ext': ext };
+}
+
+const sfntCache = new Map<string, Buffer>();
+
+/**
+ * A shipped face as plain sfnt bytes, decompressed from its .woff once per process (woff.ts): pdfkit gets these
+ * instead of the file, so no document pays for inflating the font again.
+ */
+export function fontBytes(weight: FontWeight, subset: FontSubset): Buffer {
+  const key = faceName(weight, subset);
+  let bytes = sfntCache.get(key);
+  if (!bytes) {
+    bytes = woffToSfnt(readFileSync(fontPath(weight, subset)));
+    sfntCache.set(key, bytes);
+  }
+  return bytes;
 }

@@ -14,13 +14,14 @@ import { bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
 import { describeAssumption, sourceKind } from '@shared/print/assumptionWords.ts';
 import { placeBlock, rowLetter, type PrintLayout, type Tile } from '@shared/print/blockPlacement.ts';
 import { blockSizeInPoints, type BlockSheet } from '@shared/print/blockSheet.ts';
+import { placeStepNumbers } from '@shared/print/stepMarks.ts';
 import { parseUnicodeRange, splitFontRuns } from '@shared/print/fontRuns.ts';
 import { paperFor, pointsPerUnit, printableBox, type Box, type Paper } from '@shared/print/paper.ts';
 import { layoutQuiltMap } from '@shared/print/quiltMapLayout.ts';
 import { dashFor, LINE_STYLES } from '@shared/style/lineStyles.ts';
 import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
 import type { ThreadBudget } from '@shared/route/threadBudget.ts';
-import { faceName, FONT_WEIGHTS, fontPath, SUBSETS, subsetRanges, type FontWeight } from './pdfFonts.ts';
+import { faceName, FONT_WEIGHTS, fontBytes, SUBSETS, subsetRanges, type FontWeight } from './pdfFonts.ts';
 
 /** A quilt's own pages, everything in the viewer's units (the quilt converted with convertQuilt). */
 export interface QuiltSheet {
@@ -65,8 +66,9 @@ export async function renderPlanPdf(plan: PrintPlan, options: RenderOptions = {}
     autoFirstPage: false,
     bufferPages: true,
     compress: options.compress ?? true,
-    // The first face is the document's default, so pdfkit never loads a standard font.
-    font: fontPath('regular', 'latin'),
+    // The first face is the document's default, so pdfkit never loads a standard font (the option is typed as a
+    // name or path; pdfkit takes the font's bytes as well).
+    font: fontBytes('regular', 'latin') as unknown as string,
     info: { Title: plan.title, Creator: 'Threadway', Producer: 'Threadway (pdfkit)' },
     lang: 'en',
   });
@@ -80,11 +82,11 @@ export async function renderPlanPdf(plan: PrintPlan, options: RenderOptions = {}
   const between = options.between ?? (async () => {});
 
   if (plan.quilt) {
-    writeQuiltPages(w, plan.quilt);
+    await writeQuiltPages(w, plan.quilt, between);
     await between();
   }
   for (const sheet of plan.blocks) {
-    writeBlockPages(w, sheet, plan.layout);
+    await writeBlockPages(w, sheet, plan.layout, between);
     await between();
   }
   w.footers(plan.title);
@@ -100,7 +102,7 @@ class Writer {
     readonly paper: Paper,
     readonly units: Units,
   ) {
-    for (const weight of FONT_WEIGHTS) for (const subset of SUBSETS) doc.registerFont(faceName(weight, subset), fontPath(weight, subset));
+    for (const weight of FONT_WEIGHTS) for (const subset of SUBSETS) doc.registerFont(faceName(weight, subset), fontBytes(weight, subset));
     const ranges = subsetRanges();
     this.covers = SUBSETS.map((s) => parseUnicodeRange(ranges[s]));
   }
@@ -174,7 +176,7 @@ class Writer {
 
 // ── the quilt ────────────────────────────────────────────────────────────────────────────────────────────────────
 
-function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
+async function writeQuiltPages(w: Writer, sheet: QuiltSheet, between: () => Promise<void>): Promise<void> {
   const { doc } = w;
   const q = sheet.quilt;
   const size = finishedSize(q);
@@ -183,12 +185,12 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
   w.text(
     `Quilt map · finished size ${formatSize(size.width, size.height, q.units, w.units)} · ${q.rows} × ${q.columns} blocks of ${formatSize(q.block.width, q.block.height, q.units, w.units)}` +
       `${q.sashing > 0 ? ` · sashing ${w.len(q.sashing)}` : ' · no sashing'}` +
-      `${q.borders.length > 0 ? ` · border${q.borders.length > 1 ? 's' : ''} ${q.borders.map((b) => w.len(b)).join(', ')} (innermost first)` : ' · no border'}`,
+      `${q.borders.length > 1 ? ` · borders ${q.borders.map((b) => w.len(b)).join(', ')} (innermost first)` : q.borders.length === 1 ? ` · border ${w.len(q.borders[0]!)}` : ' · no border'}`,
     { size: 10, colour: INK.muted },
   );
   doc.moveDown(0.6);
   const top = doc.y;
-  const mapArea: Box = { x: w.area.x, y: top, width: w.area.width, height: Math.min(w.area.height * 0.62, w.area.y + w.area.height - top - 120) };
+  const mapArea: Box = { x: w.area.x, y: top, width: w.area.width, height: Math.min(w.area.height * 0.55, w.area.y + w.area.height - top - 190) };
   const map = layoutQuiltMap(q, mapArea);
   // Borders: the whole quilt in the border colour, then the blocks' field in the sashing colour, then the blocks.
   doc.save();
@@ -217,6 +219,7 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
     { size: 9, x: w.area.x, width: w.area.width },
   );
 
+  await between();
   w.heading('Quilt budget');
   const budget = sheet.budget;
   if (!budget) {
@@ -230,6 +233,7 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
     ]);
   }
 
+  await between();
   w.page();
   w.text('Quilt-as-you-go trim plan', { size: 16, weight: 'bold', x: w.area.x, y: w.area.y });
   if ('problem' in sheet.trim) {
@@ -253,7 +257,9 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
   doc.table({
     position: { x: w.area.x, y: doc.y },
     maxWidth: w.area.width,
-    columnStyles: [58, 38, 58, 58, '*', '*', '*', '*'],
+    // Fixed widths: pdfkit measures every cell again for each '*' column, which made this one table take most of a
+    // quilt plan's time (measured with bench/printPlan.bench.ts).
+    columnStyles: [54, 40, 58, 58, ...Array.from({ length: 4 }, () => (w.area.width - 210) / 4)],
     defaultStyle: { padding: 3, border: 0.5, borderColor: INK.rule },
     data: [
       ['Block', 'Position', 'Make at', 'Cut to', 'Top', 'Right', 'Bottom', 'Left'].map((t) => cell(t, true)),
@@ -264,7 +270,7 @@ function writeQuiltPages(w: Writer, sheet: QuiltSheet): void {
 
 // ── a block ──────────────────────────────────────────────────────────────────────────────────────────────────────
 
-function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout): void {
+async function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout, between: () => Promise<void>): Promise<void> {
   const { doc, paper } = w;
   const d = sheet.design;
   const size = blockSizeInPoints(d);
@@ -302,7 +308,10 @@ function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout): voi
     }
     doc.y = frame.y + frame.height + 8;
     writeLegend(w);
-    for (const t of placed.tiling.tiles) writeTile(w, sheet, t, placed.tiling.rows, placed.tiling.columns, k);
+    for (const t of placed.tiling.tiles) {
+      await between();
+      writeTile(w, sheet, t, placed.tiling.rows, placed.tiling.columns, k);
+    }
     w.page();
     w.text(sheet.title, { size: 14, weight: 'bold', x: area.x, y: area.y });
   } else {
@@ -312,6 +321,7 @@ function writeBlockPages(w: Writer, sheet: BlockSheet, layout: PrintLayout): voi
     writeLegend(w);
   }
   for (const note of sheet.notes) w.text(note, { size: 9, colour: INK.muted, x: area.x });
+  await between();
   writeSteps(w, sheet);
   w.heading('Thread budget for this block', 12);
   writeBudget(w, sheet.budget, [
@@ -333,7 +343,7 @@ function writeTile(w: Writer, sheet: BlockSheet, tile: Tile, rows: number, colum
   const origin: Box = { x: area.x, y: area.y + 34, width: tile.source.width, height: tile.source.height };
   doc.save();
   doc.rect(origin.x, origin.y, origin.width, origin.height).clip();
-  drawBlock(w, sheet, { x: origin.x - tile.source.x, y: origin.y - tile.source.y }, k);
+  drawBlock(w, sheet, { x: origin.x - tile.source.x, y: origin.y - tile.source.y }, k, origin);
   doc.restore();
   // Overlap strips: dashed lines where the neighbour's paper ends, so the quilter sees what is shared.
   doc.save().lineWidth(0.5).strokeColor(INK.rule).dash(2, { space: 2 });
@@ -359,7 +369,7 @@ function writeTile(w: Writer, sheet: BlockSheet, tile: Tile, rows: number, colum
  * The block at `k` points per design unit with its top-left corner at (frame.x, frame.y): paper colour, binding
  * band, seams, the route in the one visual language (lineStyles.ts), the outline, then arrows and step numbers.
  */
-function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k: number): void {
+function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k: number, visible?: Box): void {
   const { doc } = w;
   const d = sheet.design;
   const at = (p: Point): [number, number] => [frame.x + p[0] * k, frame.y + p[1] * k];
@@ -392,13 +402,14 @@ function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k:
     if (dash.length > 0) doc.undash();
   }
   doc.lineWidth(0.8).strokeColor(INK.outline).rect(frame.x, frame.y, W, H).stroke();
-  for (const m of sheet.marks) {
-    const [x, y] = at(m.at);
-    if (m.kind === 'start') {
-      doc.circle(x, y, 6.5).fill(INK.mark);
-      w.text(`S${m.number}`, { size: 6.5, weight: 'bold', colour: '#ffffff', x: x - 8, y: y - 4, width: 16, align: 'center', gap: 0 });
-      continue;
-    }
+  const shown = sheet.marks
+    .map((m) => ({ ...m, page: at(m.at) }))
+    // On a tile only the marks on this tile are drawn (the rest would be clipped anyway).
+    .filter(({ page: [x, y] }) => !visible || (x >= visible.x - 12 && x <= visible.x + visible.width + 12 && y >= visible.y - 12 && y <= visible.y + visible.height + 12));
+  const steps = shown.filter((m) => m.kind !== 'start');
+  const discs = placeStepNumbers(steps.map((m) => ({ at: m.page, angle: m.angle })), 5.5);
+  for (const m of steps) {
+    const [x, y] = m.page;
     const c = Math.cos(m.angle);
     const s = Math.sin(m.angle);
     const size = 4.5;
@@ -408,13 +419,31 @@ function drawBlock(w: Writer, sheet: BlockSheet, frame: Pick<Box, 'x' | 'y'>, k:
       .lineTo(x - c * size * 0.7 + s * size * 0.7, y - s * size * 0.7 - c * size * 0.7)
       .closePath()
       .fill(INK.mark);
-    // The number sits to the left of the direction of sewing, clear of the arrow.
-    const nx = x + s * 9;
-    const ny = y - c * 9;
+  }
+  steps.forEach((m, i) => {
+    const [nx, ny] = discs[i]!;
+    // A number set back from its arrow to stay clear of its neighbours gets a thin leader to the arrow.
+    if (Math.hypot(nx - m.page[0], ny - m.page[1]) > 10) doc.moveTo(nx, ny).lineTo(m.page[0], m.page[1]).lineWidth(0.4).stroke(INK.mark);
     doc.circle(nx, ny, 5.5).lineWidth(0.5).fillAndStroke('#ffffff', INK.mark);
-    w.text(String(m.number), { size: m.number > 99 ? 5 : 6.5, weight: 'bold', colour: INK.mark, x: nx - 8, y: ny - 3.9, width: 16, align: 'center', gap: 0 });
+    label(doc, String(m.number), nx, ny, m.number > 99 ? 5 : 6.5, INK.mark);
+  });
+  for (const m of shown) {
+    if (m.kind !== 'start') continue;
+    const [x, y] = m.page;
+    doc.circle(x, y, 6.5).fill(INK.mark);
+    label(doc, `S${m.number}`, x, y, 6.5, '#ffffff');
   }
   doc.restore();
+}
+
+/**
+ * A short label (digits, "S1") centred on (x, y), written without wrapping: pdfkit never starts a new page for it,
+ * even when a tile's clipped drawing reaches below the margin.
+ */
+function label(doc: PDFKit.PDFDocument, text: string, x: number, y: number, size: number, colour: string): void {
+  doc.font(faceName('bold', 'latin')).fontSize(size).fillColor(colour);
+  const width = doc.widthOfString(text);
+  doc.text(text, x - width / 2, y - size * 0.62, { lineBreak: false });
 }
 
 function writeScaleBar(w: Writer, scale: number, trueSize: boolean): void {

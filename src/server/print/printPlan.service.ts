@@ -6,10 +6,7 @@ import type { Kysely } from 'kysely';
 import type { Database, QuiltRow } from '@db/schema.ts';
 import { designSchema, type Design, type Units } from '@shared/design/design.schema.ts';
 import type { PrintLayout } from '@shared/print/blockPlacement.ts';
-import { buildBlockSheet, type BlockSheet } from '@shared/print/blockSheet.ts';
-import { convertQuilt } from '@shared/quilt/convertQuilt.ts';
-import { budgetOf, trimTableOf } from '@shared/quilt/quiltFigures.ts';
-import type { DesignSummary } from '@shared/contract/figures.ts';
+import { buildBlockSheet } from '@shared/print/blockSheet.ts';
 import type { TemplateVersionJson } from '@shared/contract/templates.ts';
 import { err, ok, type Result } from '@shared/result.ts';
 import { parseWalkthroughInput } from '@shared/walkthrough/walkthroughInput.ts';
@@ -20,6 +17,7 @@ import { toSavedRouteJson, currentSummaryOf } from '../designs/designRecord.ts';
 import { designPayloadOf, planDesignOnServer, type EngineFailure } from '../designs/designRoute.service.ts';
 import { quiltOf } from '../quilts/quilt.service.ts';
 import type { PrintPlan } from './planPdf.ts';
+import { assembleQuiltPlan, placedDesignIds, type QuiltBlockInput } from './quiltPrintPlan.ts';
 
 /** Why a plan cannot be printed: the engine failed or refused a drawing, or a lesson's saved route cannot be read. */
 export type PrintFailure = EngineFailure | { readonly kind: 'unreadable'; readonly message: string };
@@ -86,53 +84,13 @@ export function lessonPrintPlan(lesson: { title: string; notesMd: string }, vers
  */
 export async function quiltPrintPlan(db: Kysely<Database>, row: QuiltRow, viewer: { id: string; units: Units }, layout: PrintLayout, signal?: AbortSignal): Promise<Result<PrintPlan, PrintFailure>> {
   const stored = quiltOf(row);
-  const ids: string[] = [];
-  for (const cells of stored.placements) for (const p of cells) if (p && !ids.includes(p.designId)) ids.push(p.designId);
-  const rows = new Map<string, DesignRecordRow>();
-  for (const id of ids) {
+  const designs = new Map<string, QuiltBlockInput>();
+  for (const id of placedDesignIds(stored)) {
     const d = await findOwnedDesign(db, viewer.id, id);
-    if (d) rows.set(id, d);
-  }
-  const quilt = convertQuilt(stored, viewer.units);
-  const summaries = new Map<string, DesignSummary | null>([...rows].map(([id, d]) => [id, currentSummaryOf(d)]));
-  const { budget, missing } = budgetOf(quilt, summaries);
-  const blocks: BlockSheet[] = [];
-  for (const id of ids) {
-    const d = rows.get(id);
     if (!d) continue;
     const r = await routeOf(db, d, viewer.id, signal);
     if (!r.ok) return r;
-    const cells: string[] = [];
-    stored.placements.forEach((cs, rIndex) =>
-      cs.forEach((p, c) => {
-        if (p?.designId === id) cells.push(`row ${rIndex + 1}, column ${c + 1}${p.mirror ? ', mirrored' : ''}${p.rotation ? `, turned ${p.rotation}°` : ''}`);
-      }),
-    );
-    blocks.push(
-      buildBlockSheet({
-        title: d.title,
-        design: storedDesign(d),
-        route: r.value.route,
-        threadEnds: r.value.threadEnds,
-        viewerUnits: viewer.units,
-        // The quilt is trimmed block by block (quilt-as-you-go), so the rotary cutter caution applies.
-        texts: [d.title, d.notes, 'trim each block after quilting'],
-        notes: [`In this quilt at ${cells.join('; ')}. Drawn as designed: turn or mirror the block as the quilt map says.`, r.value.note],
-      }),
-    );
+    designs.set(id, { title: d.title, notes: d.notes, design: storedDesign(d), summary: currentSummaryOf(d), ...r.value });
   }
-  return ok({
-    title: row.title,
-    viewerUnits: viewer.units,
-    layout,
-    quilt: {
-      title: row.title,
-      quilt,
-      designTitles: new Map([...rows].map(([id, d]) => [id, d.title])),
-      trim: trimTableOf(quilt),
-      budget,
-      missing,
-    },
-    blocks,
-  });
+  return ok(assembleQuiltPlan(row.title, stored, designs, viewer.units, layout));
 }

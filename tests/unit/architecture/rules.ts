@@ -98,6 +98,11 @@ export const folderRules: readonly FolderRule[] = [
     allow: [
       { files: ['bench/**', 'shared/**', 'scripts/lib/**'] },
       { from: ['bench/reliability.bench.ts'], files: ['db/connect.ts', 'src/server/auth/password.ts'], why: 'it makes its own accounts' },
+      {
+        from: ['bench/printPlan.bench.ts'],
+        files: ['src/server/print/planPdf.ts', 'src/server/print/quiltPrintPlan.ts', 'scripts/seed/guildDrawings.ts', 'scripts/seed/guildQuilt.ts'],
+        why: 'it writes the demo quilt’s printed plan with the server’s own PDF writer, from the seed’s drawings and quilt map',
+      },
     ],
   },
   {

@@ -42,6 +42,9 @@ const cell = (page: Page, row: number, column: number) => page.locator(`[data-ce
 const trayItem = (page: Page, title: string) => page.getByTestId('design-tray').getByRole('button', { name: title });
 
 async function dragTo(page: Page, from: ReturnType<Page['locator']>, to: ReturnType<Page['locator']>) {
+  // Mouse events only reach what is on screen: bring the pair into view (they are close together in these tests).
+  await to.scrollIntoViewIfNeeded();
+  await from.scrollIntoViewIfNeeded();
   const a = (await from.boundingBox())!;
   const b = (await to.boundingBox())!;
   await page.mouse.move(a.x + a.width / 2, a.y + a.height / 2);
@@ -106,6 +109,83 @@ describe('the quilt map editor', () => {
       [null, { designId: designIds.get('Riverbank half-square triangle'), rotation: 90, mirror: true }],
       [null, null],
     ]);
+  });
+
+  it('orders the blocks row by row, serpentine, or by hand (dragging a number, or Earlier and Later from the keyboard)', async () => {
+    const page = browser.page;
+    const now = await quilter.client.get(`/api/quilts/${quiltId}`);
+    const p = (title: string) => ({ designId: designIds.get(title), rotation: 0, mirror: false });
+    const put = await quilter.client.put(`/api/quilts/${quiltId}`, {
+      baseVersion: now.body.quilt.version,
+      quilt: { ...now.body.quilt.quilt, placements: [[p('Heron Bend nine-patch'), p('Ferry landing four-patch')], [p('Riverbank half-square triangle'), p('Heron Bend nine-patch')]] },
+    });
+    expect(put.status, put.text).toBe(200);
+    await page.goto(`/quilts/${quiltId}`);
+    await waitForIslands(page);
+    await page.getByTestId('quilt-map').waitFor();
+    const numbers = () => page.locator('[data-cell]').evaluateAll((cells) => cells.map((c) => `${(c as HTMLElement).dataset.cell}:${c.querySelector<HTMLElement>('[data-order]')?.dataset.order ?? '-'}`).join(' '));
+
+    // Row by row from the top left is the default.
+    await expect.poll(numbers).toBe('0-0:1 0-1:2 1-0:3 1-1:4');
+    await page.getByLabel('Serpentine: every other row right to left').check();
+    await expect.poll(numbers).toBe('0-0:1 0-1:2 1-0:4 1-1:3');
+    await page.getByLabel('By hand').check();
+    const list = page.getByTestId('order-list');
+    expect(await list.locator('li').count()).toBe(4);
+    await expect.poll(numbers).toBe('0-0:1 0-1:2 1-0:4 1-1:3');
+
+    // Pointer: drag the 4th number (bottom left) to the top of the list.
+    await dragTo(page, list.locator('[data-order-handle="3"]'), list.locator('li').first());
+    await expect.poll(numbers).toBe('0-0:2 0-1:3 1-0:1 1-1:4');
+    // Keyboard: the top-left block (now 2nd) goes one later, twice; focus stays on its Later button.
+    await page.getByRole('button', { name: 'Quilt row 1, column 1 later' }).focus();
+    await page.keyboard.press('Enter');
+    await expect.poll(numbers).toBe('0-0:3 0-1:2 1-0:1 1-1:4');
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toBe('Quilt row 1, column 1 later');
+    await page.keyboard.press('Enter');
+    await expect.poll(numbers).toBe('0-0:4 0-1:2 1-0:1 1-1:3');
+    expect(await page.getByRole('button', { name: 'Quilt row 1, column 1 later' }).isDisabled()).toBe(true);
+    // The map's buttons say it too.
+    await page.getByRole('button', { name: /^Row 2, column 1: Riverbank half-square triangle; number 1 in the quilting order$/ }).waitFor();
+
+    await page.getByRole('button', { name: 'Save quilt' }).click();
+    await page.getByText(/^Saved, version \d+$/).waitFor();
+    const saved = await quilter.client.get(`/api/quilts/${quiltId}`);
+    expect(saved.body.quilt.quilt.order).toEqual({ kind: 'hand', cells: [{ row: 1, column: 0 }, { row: 0, column: 1 }, { row: 1, column: 1 }, { row: 0, column: 0 }] });
+  });
+
+  it('takes several borders, each with its width, and shows the finished size after each in eighths of an inch', async () => {
+    const page = browser.page;
+    await page.goto(`/quilts/${quiltId}`);
+    await waitForIslands(page);
+    const size = page.getByTestId('finished-size');
+    // 2 × 2 blocks of 12 in, no sashing or border yet.
+    await expect.poll(() => size.textContent()).toBe('24 × 24 in');
+    await page.getByLabel('Sashing (in)').fill('1 1/2');
+    await page.getByRole('button', { name: 'Add a border' }).click();
+    await page.getByLabel('Border 1 (in)').fill('2 1/2');
+    await page.getByRole('button', { name: 'Add a border' }).click();
+    await page.getByLabel('Border 2 (in)').fill('4 1/8');
+    // 2·12 + 1 1/2 = 25 1/2; + 2·2 1/2 = 30 1/2; + 2·4 1/8 = 38 3/4.
+    await expect.poll(() => size.textContent()).toBe('38 3/4 × 38 3/4 in');
+    expect(await page.getByTestId('size-after-border-1').textContent()).toBe('30 1/2 × 30 1/2 in');
+    expect(await page.locator('[data-border]').count()).toBe(2);
+    // Half-typed, the field says what it needs and the quilt keeps its last width.
+    await page.getByLabel('Border 2 (in)').fill('4 1/');
+    await page.getByText('Border 2 (in) must be a number or a fraction like 2 1/2.').waitFor();
+    expect(await size.textContent()).toBe('38 3/4 × 38 3/4 in');
+    await page.getByLabel('Border 2 (in)').fill('4');
+    await page.getByRole('button', { name: 'Remove border 1' }).click();
+    // 25 1/2 + 2·4 = 33 1/2; the 4 in border is now border 1.
+    await expect.poll(() => size.textContent()).toBe('33 1/2 × 33 1/2 in');
+    expect(await page.getByLabel('Border 1 (in)').inputValue()).toBe('4');
+    await page.getByRole('button', { name: 'Add a border' }).click();
+    await page.getByLabel('Border 2 (in)').fill('1/4');
+    await page.getByRole('button', { name: 'Save quilt' }).click();
+    await page.getByText(/^Saved, version \d+$/).waitFor();
+    const saved = await quilter.client.get(`/api/quilts/${quiltId}`);
+    expect(saved.body.quilt.quilt.borders).toEqual([4, 0.25]);
+    expect(saved.body.quilt.quilt.sashing).toBe(1.5);
   });
 
   it('fits and passes axe at the three widths', async () => {

@@ -188,6 +188,85 @@ describe('the quilt map editor', () => {
     expect(saved.body.quilt.quilt.sashing).toBe(1.5);
   });
 
+  it('draws the planned chained route on the map, corner for corner as the plan lists it, and plays it on request', async () => {
+    const page = browser.page;
+    const now = await quilter.client.get(`/api/quilts/${quiltId}`);
+    const nine = { designId: designIds.get('Heron Bend nine-patch'), rotation: 0, mirror: false };
+    const put = await quilter.client.put(`/api/quilts/${quiltId}`, {
+      baseVersion: now.body.quilt.version,
+      quilt: { ...now.body.quilt.quilt, placements: [[nine, { ...nine, rotation: 90 }], [nine, nine]], order: { kind: 'serpentine' } },
+    });
+    expect(put.status, put.text).toBe(200);
+    await page.goto(`/quilts/${quiltId}`);
+    await waitForIslands(page);
+    await page.getByRole('button', { name: 'Plan the route across the quilt' }).click();
+    const overlay = page.getByTestId('chain-route');
+    await overlay.waitFor({ timeout: 60_000 });
+
+    // The plan's steps as the panel words them, against the drawing: 1.5 in sashing, borders 4 + 1/4 in, 12 in blocks,
+    // so block (r, c) has its top left at (4.25 + 13.5·c, 4.25 + 13.5·r).
+    const words = ['top left', 'top right', 'bottom right', 'bottom left'];
+    const steps = (await page.getByTestId('quilt-route').locator('li').allTextContents()).map((t) => {
+      const m = /^Row (\d+), column (\d+): start at the (top left|top right|bottom right|bottom left) corner, end at the (top left|top right|bottom right|bottom left)\b/.exec(t)!;
+      return { row: Number(m[1]) - 1, column: Number(m[2]) - 1, entry: words.indexOf(m[3]!), exit: words.indexOf(m[4]!) };
+    });
+    // Serpentine: top row left to right, bottom row right to left.
+    expect(steps.map((s) => `${s.row}${s.column}`)).toEqual(['00', '01', '11', '10']);
+    const corner = (row: number, column: number, k: number): [number, number] => {
+      const x = 4.25 + 13.5 * column;
+      const y = 4.25 + 13.5 * row;
+      return [[x, y], [x + 12, y], [x + 12, y + 12], [x, y + 12]][k] as [number, number];
+    };
+    const through = await overlay.locator('[data-through]').evaluateAll((els) => els.map((e) => (e.getAttribute('d') ?? '').match(/-?[\d.]+/g)!.map(Number)));
+    expect(through).toHaveLength(4);
+    through.forEach((d, i) => {
+      const s = steps[i]!;
+      expect([d[0], d[1]], `block ${i + 1} entry`).toEqual(corner(s.row, s.column, s.entry));
+      expect([d[4], d[5]], `block ${i + 1} exit`).toEqual(corner(s.row, s.column, s.exit));
+    });
+    // Each drawn link runs from the last block's exit to the next block's entry.
+    const links = await overlay.locator('[data-link]').evaluateAll((els) => els.map((e) => ({ step: Number(e.getAttribute('data-link')), d: (e.getAttribute('d') ?? '').match(/-?[\d.]+/g)!.map(Number) })));
+    for (const l of links) {
+      const prev = steps[l.step - 2]!;
+      const next = steps[l.step - 1]!;
+      expect(l.d.slice(0, 2)).toEqual(corner(prev.row, prev.column, prev.exit));
+      expect(l.d.slice(-2)).toEqual(corner(next.row, next.column, next.entry));
+    }
+    // The link colour is the route's stitching colour from the one line-style table (Okabe–Ito blue).
+    expect(await overlay.locator('[data-through="1"]').getAttribute('stroke')).toBe('#0072B2');
+
+    // Played on request: the needle goes block by block and the replay ends on the last block.
+    const caption = page.getByTestId('route-caption');
+    await page.getByRole('button', { name: 'Play the route' }).click();
+    await overlay.locator('[data-needle]').waitFor();
+    await expect.poll(() => caption.textContent(), { timeout: 15_000 }).toMatch(/^Block 4 of 4: row 2, column 1/);
+    await page.getByRole('button', { name: 'Play the route' }).waitFor({ timeout: 15_000 });
+
+    // With reduced motion the needle never slides: every position seen is a block corner.
+    await page.emulateMedia({ reducedMotion: 'reduce' });
+    await page.getByRole('button', { name: 'Back to start' }).click();
+    await page.getByRole('button', { name: 'Play the route' }).click();
+    await expect.poll(() => caption.textContent()).toContain('Reduced motion');
+    const corners = new Set(steps.flatMap((s) => [corner(s.row, s.column, s.entry), corner(s.row, s.column, s.exit)]).map((p) => p.join(',')));
+    for (let k = 0; k < 12; k++) {
+      const at = await overlay.locator('[data-needle]').evaluate((c) => `${Number(c.getAttribute('cx'))},${Number(c.getAttribute('cy'))}`);
+      expect(corners.has(at), at).toBe(true);
+      await page.waitForTimeout(150);
+    }
+    await page.emulateMedia({ reducedMotion: 'no-preference' });
+    const pause = page.getByRole('button', { name: 'Pause' });
+    if (await pause.isVisible()) await pause.click();
+
+    for (const size of WIDTHS) {
+      await page.setViewportSize(size);
+      await overlay.waitFor();
+      expect(await elementsWiderThanViewport(page), `${size.name}: wider than the viewport`).toEqual([]);
+      expect(await seriousAxeFindings(page), size.name).toEqual([]);
+      await screenshot(page, `quilt-route-map-${size.name}`);
+    }
+    await page.setViewportSize(WIDTHS[0]);
+  });
+
   it('fits and passes axe at the three widths', async () => {
     const page = browser.page;
     await page.goto(`/quilts/${quiltId}`);

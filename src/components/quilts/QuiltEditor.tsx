@@ -20,6 +20,10 @@ import { DesignTray } from './DesignTray.tsx';
 import { DragGhost } from './DragGhost.tsx';
 import { cellKey, QuiltMap } from './QuiltMap.tsx';
 import { useBlockGesture } from './useBlockGesture.ts';
+import { ChainRouteOverlay } from './ChainRouteOverlay.tsx';
+import { RoutePlayer, useRoutePlayback } from './RoutePlayer.tsx';
+import { buildChainOverview } from '@shared/quilt/chainOverview.ts';
+import type { QuiltPlanAnswer } from '@shared/contract/quiltPlan.ts';
 
 export interface QuiltEditorProps {
   readonly quiltId: string;
@@ -83,6 +87,11 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
     [applyEdit],
   );
   const { gesture, dispatch } = useBlockGesture(onDrop, setPicked);
+  const [route, setRoute] = useState<QuiltPlanAnswer | null>(null);
+  // The route is of the saved quilt: it is drawn only while the map on screen is that save.
+  const routeSteps = route && record && !dirty && route.quiltVersion === record.version ? route.plan.steps : null;
+  const legs = useMemo(() => (quilt && routeSteps ? buildChainOverview(quilt, routeSteps, quilt.linkMetric) : []), [quilt, routeSteps]);
+  const player = useRoutePlayback(legs);
   const byId = useMemo(() => new Map(designs.map((d) => [d.id, d])), [designs]);
   const summaries = useMemo(() => new Map<string, DesignSummary | null>(designs.map((d) => [d.id, d.summary])), [designs]);
 
@@ -136,7 +145,13 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           orderNumbers={orderNumbers}
           onCellClick={(c) => dispatch({ kind: 'cell', cell: c })}
           onCellPointerDown={(c, e) => e.button === 0 && dispatch({ kind: 'pointer-down', carried: { kind: 'cell', cell: c }, at: { x: e.clientX, y: e.clientY } })}
+          overlay={routeSteps ? <ChainRouteOverlay quilt={quilt} legs={legs} metric={quilt.linkMetric} frame={player.frame} /> : undefined}
         />
+        {routeSteps ? (
+          <RoutePlayer legs={legs} player={player} corners={routeSteps} />
+        ) : (
+          route && <p className="mt-2 text-sm">The route drawn on the map is of the saved quilt: save and plan again to see it.</p>
+        )}
         <p className="sr-only" role="status" aria-live="polite">{heldWords}</p>
         {gesture.kind === 'holding' && (
           <p className="mt-2 rounded border-l-4 border-denim-600 bg-muslin-100 px-3 py-2" aria-hidden="true">
@@ -195,7 +210,7 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
         {notice && <p role={notice.tone === 'warn' ? 'alert' : 'status'} className={notice.tone === 'warn' ? 'font-semibold text-madder-600' : 'text-denim-700'}>{notice.text}</p>}
       </aside>
 
-      <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} />
+      <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} onPlanned={setRoute} />
 
       <section className="lg:col-span-2" aria-labelledby="budget-heading">
         <h2 id="budget-heading" className="text-xl font-bold">Quilt budget, block by block</h2>

@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import type { Units } from '@shared/design/design.schema.ts';
-import { quiltPlanAnswerSchema, type QuiltPlan } from '@shared/contract/quiltPlan.ts';
+import { quiltPlanAnswerSchema, type QuiltPlan, type QuiltPlanAnswer } from '@shared/contract/quiltPlan.ts';
 import { formatLength, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 
@@ -13,13 +13,15 @@ export interface QuiltRoutePanelProps {
   /** Unsaved changes on the page: planning waits for a save. */
   readonly dirty: boolean;
   readonly viewerUnits: Units;
+  /** Told each plan that arrives, so the quilt map can draw the route. */
+  readonly onPlanned?: (answer: QuiltPlanAnswer) => void;
 }
 
 /**
  * Plans the chained route of the saved quilt (POST /api/quilts/:id/plan, run in the engine's worker pool): the
  * thread runs on from block to block; each block's entry and exit corner, the travel, passes and thread.
  */
-export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits }: QuiltRoutePanelProps) {
+export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits, onPlanned }: QuiltRoutePanelProps) {
   const [state, setState] = useState<{ kind: 'idle' } | { kind: 'busy' } | { kind: 'done'; plan: QuiltPlan; version: number } | { kind: 'failed'; message: string }>({ kind: 'idle' });
 
   async function plan() {
@@ -28,6 +30,7 @@ export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits }: QuiltR
     if (!res.ok) return setState({ kind: 'failed', message: res.error.message });
     const parsed = quiltPlanAnswerSchema.safeParse(res.value);
     setState(parsed.success ? { kind: 'done', plan: parsed.data.plan, version: parsed.data.quiltVersion } : { kind: 'failed', message: 'The plan could not be read.' });
+    if (parsed.success) onPlanned?.(parsed.data);
   }
 
   const len = (v: number, units: Units) => formatLength(v, units, viewerUnits);

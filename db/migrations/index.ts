@@ -8,6 +8,7 @@ import * as hardenAccounts from './2026_12_04_1710_harden_accounts.ts';
 import * as addDesignSummaryVersion from './2026_12_04_1800_add_design_summary_version.ts';
 import * as addProgressClientAt from './2026_12_05_0900_add_progress_client_at.ts';
 import * as createQuilts from './2026_12_05_0930_create_quilts.ts';
+import * as addQuiltSchedule from './2026_12_05_1245_add_quilt_schedule.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
@@ -20,6 +21,7 @@ export const migrations: Record<string, Migration> = {
   '2026_12_04_1800_add_design_summary_version': addDesignSummaryVersion,
   '2026_12_05_0900_add_progress_client_at': addProgressClientAt,
   '2026_12_05_0930_create_quilts': createQuilts,
+  '2026_12_05_1245_add_quilt_schedule': addQuiltSchedule,
 };
 
 export const migrationProvider: MigrationProvider = {

@@ -272,6 +272,15 @@ describe('the quilt map editor', () => {
     await page.goto(`/quilts/${quiltId}`);
     await waitForIslands(page);
     await trayItem(page, 'Heron Bend nine-patch').waitFor();
+    // The schedule: one block a month from a chosen day, in the quilting order (serpentine, set above).
+    await page.getByLabel('First block on').fill('2027-01-31');
+    await page.getByRole('button', { name: 'Save schedule' }).click();
+    await page.getByText('Schedule saved.').waitFor();
+    const dates = await page.getByTestId('schedule-table').locator('tbody tr').evaluateAll((rows) => rows.map((r) => r.querySelectorAll('td')[0]!.textContent + ' ' + r.querySelector('th')!.textContent!.replace(/:.*/, '')));
+    // Serpentine over 2 × 2: top left, top right, bottom right, bottom left.
+    expect(dates).toEqual(['1 Row 1, column 1', '2 Row 1, column 2', '3 Row 2, column 2', '4 Row 2, column 1']);
+    // 31 January 2027 + 1 month → 28 February (2027 is not a leap year, Gregorian rule).
+    expect(await page.getByTestId('schedule-table').locator('tbody tr').nth(1).locator('td').nth(1).textContent()).toMatch(/28 Feb 2027|Feb 28, 2027/);
     for (const size of WIDTHS) {
       await page.setViewportSize(size);
       await page.getByTestId('quilt-map').waitFor();

@@ -16,6 +16,7 @@ import { FramePanel } from './FramePanel.tsx';
 import { keepHandOrder, quiltingOrder, swapInHandOrder } from './quiltOrderEdits.ts';
 import type { BlockDrop } from './blockGesture.ts';
 import { OrderPanel } from './OrderPanel.tsx';
+import { SchedulePanel } from './SchedulePanel.tsx';
 import { DesignTray } from './DesignTray.tsx';
 import { DragGhost } from './DragGhost.tsx';
 import { cellKey, QuiltMap } from './QuiltMap.tsx';
@@ -211,6 +212,8 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
       </aside>
 
       <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} onPlanned={setRoute} />
+
+      <SchedulePanel quiltId={record.id} version={record.version} quilt={quilt} designs={byId} />
 
       <section className="lg:col-span-2" aria-labelledby="budget-heading">
         <h2 id="budget-heading" className="text-xl font-bold">Quilt budget, block by block</h2>

@@ -67,6 +67,8 @@ export const matrixRows: MatrixRow[] = [
   { route: 'POST /api/quilts', path: () => '/api/quilts', body: {}, expect: signedIn(400) },
   { route: 'GET /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, expect: s(401, 200, 404, 404, 404, 404) },
   { route: 'PUT /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, body: { baseVersion: 999, title: 'taken over' }, expect: s(401, 409, 404, 404, 404, 404), note: 'stale baseVersion: the owner gets 409 and nothing changes' },
+  { route: 'GET /api/quilts/[id]/schedule', path: (w) => `/api/quilts/${w.quiltId}/schedule`, expect: s(401, 200, 404, 404, 404, 404) },
+  { route: 'PUT /api/quilts/[id]/schedule', path: (w) => `/api/quilts/${w.quiltId}/schedule`, body: { classId: null, start: '2027-02-30' }, expect: s(401, 400, 404, 404, 404, 404), note: 'a day that does not exist: the owner gets 400 and nothing changes' },
   { route: 'POST /api/quilts/[id]/plan', path: (w) => `/api/quilts/${w.quiltId}/plan`, expect: s(401, 200, 404, 404, 404, 404) },
   { route: 'DELETE /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, send: fresh((w) => w.fresh.quiltId(), (w) => w.quiltId, (_, id) => `/api/quilts/${id}`), expect: s(401, 200, 404, 404, 404, 404) },
 

@@ -265,6 +265,10 @@ export interface QuiltTable {
   created_at: CreatedAt;
   updated_at: UpdatedAt;
   deleted_at: ColumnType<Date | null, Date | null | undefined, Date | null>;
+  /** The class whose dated lessons give the schedule (migration 2026_12_05_1245); null: one block a month. */
+  class_id: ColumnType<string | null, string | null | undefined, string | null>;
+  /** A calendar date: the monthly schedule's first block (null: the day the quilt was made). Select with to_char. */
+  schedule_start: ColumnType<Date | null, string | null | undefined, string | null>;
 }
 export type QuiltRow = Selectable<QuiltTable>;
 

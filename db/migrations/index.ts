@@ -10,6 +10,7 @@ import * as addProgressClientAt from './2026_12_05_0900_add_progress_client_at.t
 import * as createQuilts from './2026_12_05_0930_create_quilts.ts';
 import * as createQuiltPlanJobs from './2026_12_05_1215_create_quilt_plan_jobs.ts';
 import * as createClassPayments from './2026_12_05_1215_create_class_payments.ts';
+import * as addQuiltSchedule from './2026_12_05_1245_add_quilt_schedule.ts';
 
 /** Every migration, in order. Add new ones at the end; names sort alphanumerically by date. */
 export const migrations: Record<string, Migration> = {
@@ -24,6 +25,7 @@ export const migrations: Record<string, Migration> = {
   '2026_12_05_0930_create_quilts': createQuilts,
   '2026_12_05_1215_create_quilt_plan_jobs': createQuiltPlanJobs,
   '2026_12_05_1215_create_class_payments': createClassPayments,
+  '2026_12_05_1245_add_quilt_schedule': addQuiltSchedule,
 };
 
 export const migrationProvider: MigrationProvider = {

@@ -84,8 +84,7 @@ export function placeChainedRoute(quilt: QuiltFrame & Pick<Quilt, 'units'>, chai
     const pass = passOffset + 1;
     if (i > 0) {
       const from = blockCorners(quilt, chain.steps[i - 1]!.cell)[chain.steps[i - 1]!.exit]!;
-      const points: Point[] = metric === 'straight' ? [from, entry] : [from, [entry[0], from[1]], entry];
-      out.push({ step: i + 1, pass, kind: 'link', points: dedupe(points), length: linkLength(from, entry, metric) });
+      out.push({ step: i + 1, pass, kind: 'link', points: linkPath(from, entry, metric), length: linkLength(from, entry, metric) });
     }
     const strokes = block.plan.route.map((s) => ({ step: i + 1, pass: passOffset + s.pass, kind: s.kind, points: s.points.map(toQuilt), length: s.length * scale }));
     const first = strokes[0]?.points[0];
@@ -97,6 +96,14 @@ export function placeChainedRoute(quilt: QuiltFrame & Pick<Quilt, 'units'>, chai
     passOffset += Math.max(1, block.plan.passes) - 1;
   });
   return out;
+}
+
+/**
+ * The path of a link from one block's exit corner to the next block's entry corner: straight, or along the seams
+ * horizontally then vertically (chain.ts `LinkMetric`); its length is `linkLength`. Repeated points are dropped.
+ */
+export function linkPath(from: Point, to: Point, metric: LinkMetric): Point[] {
+  return dedupe(metric === 'straight' ? [from, to] : [from, [to[0], from[1]], to]);
 }
 
 const SAME = 1e-9;

@@ -44,7 +44,8 @@ describe('a quilt map', () => {
     await page.getByLabel('Design', { exact: true }).selectOption({ label: 'Heron Bend nine-patch' });
     await page.getByRole('button', { name: 'Turn a quarter' }).click();
     await page.getByLabel('Sashing (in)').fill('2');
-    await page.getByLabel('Border (in)').fill('3');
+    await page.getByRole('button', { name: 'Add a border' }).click();
+    await page.getByLabel('Border 1 (in)').fill('3');
     // 2·12 + 2 + 2·3 = 32 in.
     await expect.poll(() => page.getByTestId('finished-size').textContent()).toBe('32 × 32 in');
     await page.getByRole('button', { name: 'Save quilt' }).click();

@@ -5,20 +5,27 @@ import { designListSchema, type DesignListItem } from '@shared/contract/designs.
 import { quiltRecordSchema, type QuiltRecord } from '@shared/contract/quilts.ts';
 import type { DesignSummary } from '@shared/contract/figures.ts';
 import type { Quilt } from '@shared/quilt/quilt.schema.ts';
-import { bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
+import { finishedSize } from '@shared/quilt/finishedSize.ts';
+import { formatQuiltSize } from '@shared/quilt/formatLength.ts';
 import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
-import { formatLength, formatSize, formatThread } from '@shared/units/units.ts';
+import { formatLength, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { PlanDownload } from '../print/PlanDownload.tsx';
 import { QuiltRoutePanel } from './QuiltRoutePanel.tsx';
-import { budgetOf, clearCell, moveBlock, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { budgetOf, clearCell, moveBlock, placeDesign, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { FramePanel } from './FramePanel.tsx';
 import { keepHandOrder, quiltingOrder, swapInHandOrder } from './quiltOrderEdits.ts';
 import type { BlockDrop } from './blockGesture.ts';
 import { OrderPanel } from './OrderPanel.tsx';
+import { SchedulePanel } from './SchedulePanel.tsx';
 import { DesignTray } from './DesignTray.tsx';
 import { DragGhost } from './DragGhost.tsx';
 import { cellKey, QuiltMap } from './QuiltMap.tsx';
 import { useBlockGesture } from './useBlockGesture.ts';
+import { ChainRouteOverlay } from './ChainRouteOverlay.tsx';
+import { RoutePlayer, useRoutePlayback } from './RoutePlayer.tsx';
+import { buildChainOverview } from '@shared/quilt/chainOverview.ts';
+import type { QuiltPlanAnswer } from '@shared/contract/quiltPlan.ts';
 
 export interface QuiltEditorProps {
   readonly quiltId: string;
@@ -45,7 +52,7 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
   const [saving, setSaving] = useState(false);
   const [notice, setNotice] = useState<{ tone: 'ok' | 'warn'; text: string } | null>(null);
   const [loadError, setLoadError] = useState<string | null>(null);
-  const ids = { design: useId(), sashing: useId(), border: useId() };
+  const ids = { design: useId() };
 
   const show = useCallback((r: QuiltRecord) => {
     setRecord(r);
@@ -82,6 +89,11 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
     [applyEdit],
   );
   const { gesture, dispatch } = useBlockGesture(onDrop, setPicked);
+  const [route, setRoute] = useState<QuiltPlanAnswer | null>(null);
+  // The route is of the saved quilt: it is drawn only while the map on screen is that save.
+  const routeSteps = route && record && !dirty && route.quiltVersion === record.version ? route.plan.steps : null;
+  const legs = useMemo(() => (quilt && routeSteps ? buildChainOverview(quilt, routeSteps, quilt.linkMetric) : []), [quilt, routeSteps]);
+  const player = useRoutePlayback(legs);
   const byId = useMemo(() => new Map(designs.map((d) => [d.id, d])), [designs]);
   const summaries = useMemo(() => new Map<string, DesignSummary | null>(designs.map((d) => [d.id, d.summary])), [designs]);
 
@@ -114,7 +126,6 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
   const orderNumbers = new Map(quiltingOrder(quilt).map((c, i) => [cellKey(c), i + 1] as const));
   const heldDesign = gesture.kind === 'holding' && gesture.carried.kind === 'design' ? byId.get(gesture.carried.designId) : undefined;
   const heldWords = heldDesign ? `Placing “${heldDesign.title}”: pick a block on the map (Escape to stop).` : '';
-  const border = bordersWidth(quilt);
   const cell = quilt.placements[picked.row]?.[picked.column] ?? null;
   const trim = trimTableOf(quilt);
   const { budget, missing } = budgetOf(quilt, summaries);
@@ -124,8 +135,8 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
     <div className="mt-4 grid grid-cols-[minmax(0,1fr)] gap-6 lg:grid-cols-[minmax(0,1fr)_20rem]">
       <section aria-label="Quilt map">
         <p className="mb-2">
-          Finished size <strong data-testid="finished-size">{formatSize(size.width, size.height, quilt.units, viewerUnits)}</strong>
-          {' '}· {quilt.rows} × {quilt.columns} blocks of {formatSize(quilt.block.width, quilt.block.height, quilt.units, viewerUnits)}
+          Finished size <strong data-testid="finished-size">{formatQuiltSize(size.width, size.height, quilt.units, viewerUnits)}</strong>
+          {' '}· {quilt.rows} × {quilt.columns} blocks of {formatQuiltSize(quilt.block.width, quilt.block.height, quilt.units, viewerUnits)}
         </p>
         <QuiltMap
           quilt={quilt}
@@ -136,7 +147,13 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           orderNumbers={orderNumbers}
           onCellClick={(c) => dispatch({ kind: 'cell', cell: c })}
           onCellPointerDown={(c, e) => e.button === 0 && dispatch({ kind: 'pointer-down', carried: { kind: 'cell', cell: c }, at: { x: e.clientX, y: e.clientY } })}
+          overlay={routeSteps ? <ChainRouteOverlay quilt={quilt} legs={legs} metric={quilt.linkMetric} frame={player.frame} /> : undefined}
         />
+        {routeSteps ? (
+          <RoutePlayer legs={legs} player={player} corners={routeSteps} />
+        ) : (
+          route && <p className="mt-2 text-sm">The route drawn on the map is of the saved quilt: save and plan again to see it.</p>
+        )}
         <p className="sr-only" role="status" aria-live="polite">{heldWords}</p>
         {gesture.kind === 'holding' && (
           <p className="mt-2 rounded border-l-4 border-denim-600 bg-muslin-100 px-3 py-2" aria-hidden="true">
@@ -184,16 +201,7 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
 
         <OrderPanel quilt={quilt} designs={byId} onEdit={edit} />
 
-        <section className="grid grid-cols-2 gap-3 rounded border border-muslin-300 bg-muslin-50 p-3" aria-label="Sashing and border">
-          <div>
-            <label htmlFor={ids.sashing} className="block font-semibold">Sashing ({quilt.units})</label>
-            <input id={ids.sashing} type="number" min={0} step={quilt.units === 'in' ? 0.125 : 0.5} className="mt-1 block w-full rounded border border-muslin-300 bg-white px-2 py-2" value={quilt.sashing} onChange={(e) => edit(setFrame(quilt, Number(e.target.value) || 0, border))} />
-          </div>
-          <div>
-            <label htmlFor={ids.border} className="block font-semibold">Border ({quilt.units})</label>
-            <input id={ids.border} type="number" min={0} step={quilt.units === 'in' ? 0.125 : 0.5} className="mt-1 block w-full rounded border border-muslin-300 bg-white px-2 py-2" value={border} onChange={(e) => edit(setFrame(quilt, quilt.sashing, Number(e.target.value) || 0))} />
-          </div>
-        </section>
+        <FramePanel quilt={quilt} viewerUnits={viewerUnits} onEdit={edit} />
 
         <div className="flex flex-wrap items-center gap-3">
           <button type="button" onClick={() => void save()} disabled={saving || !dirty} className="rounded bg-denim-600 px-5 py-2 font-semibold text-white hover:bg-denim-700 disabled:opacity-60">
@@ -209,7 +217,9 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
         {notice && <p role={notice.tone === 'warn' ? 'alert' : 'status'} className={notice.tone === 'warn' ? 'font-semibold text-madder-600' : 'text-denim-700'}>{notice.text}</p>}
       </aside>
 
-      <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} />
+      <QuiltRoutePanel quiltId={record.id} version={record.version} dirty={dirty} viewerUnits={viewerUnits} onPlanned={setRoute} />
+
+      <SchedulePanel quiltId={record.id} version={record.version} quilt={quilt} designs={byId} />
 
       <section className="lg:col-span-2" aria-labelledby="budget-heading">
         <h2 id="budget-heading" className="text-xl font-bold">Quilt budget, block by block</h2>
@@ -252,7 +262,7 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
                 <li key={a.setting}>{TRIM_LABELS[a.setting]} {a.setting === 'shrinkage' ? `${a.value} %` : formatLength(a.value, quilt.units, quilt.units)} ({a.source === 'quilt' ? 'set for this quilt' : a.source})</li>
               ))}
             </ul>
-            <div className="mt-2 overflow-x-auto">
+            <div className="mt-2 overflow-x-auto" tabIndex={0} role="region" aria-label="Trim plan table (scrolls sideways)">
               <table className="min-w-full text-left text-sm">
                 <thead>
                   <tr className="border-b border-muslin-300"><th className="p-2">Block</th><th className="p-2">Position</th><th className="p-2">Make at</th><th className="p-2">Cut to</th><th className="p-2">Top</th><th className="p-2">Right</th><th className="p-2">Bottom</th><th className="p-2">Left</th></tr>

@@ -74,7 +74,7 @@ export function QuiltMap({ quilt, viewerUnits, designs, picked, gesture, orderNu
             <button
               key={cellKey(cell)}
               type="button"
-              aria-label={n ? `${name}; quilted ${ordinal(n)}` : name}
+              aria-label={n ? `${name}; number ${n} in the quilting order` : name}
               aria-pressed={isPicked}
               data-cell={cellKey(cell)}
               onClick={() => onCellClick(cell)}
@@ -107,13 +107,4 @@ export function QuiltMap({ quilt, viewerUnits, designs, picked, gesture, orderNu
       {overlay}
     </div>
   );
-}
-
-/** 1 → "first" … 10 → "tenth", then "11th": the order as a quilter says it. */
-export function ordinal(n: number): string {
-  const words = ['first', 'second', 'third', 'fourth', 'fifth', 'sixth', 'seventh', 'eighth', 'ninth', 'tenth'];
-  if (n >= 1 && n <= words.length) return words[n - 1]!;
-  const tens = n % 100;
-  const suffix = tens >= 11 && tens <= 13 ? 'th' : n % 10 === 1 ? 'st' : n % 10 === 2 ? 'nd' : n % 10 === 3 ? 'rd' : 'th';
-  return `${n}${suffix}`;
 }

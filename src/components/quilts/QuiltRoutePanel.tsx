@@ -1,6 +1,6 @@
 import { useEffect, useState } from 'react';
 import type { Units } from '@shared/design/design.schema.ts';
-import { quiltPlanAnswerSchema, quiltPlanJobAnswerSchema, quiltPlanQueuedSchema, type QuiltPlan, type QuiltPlanJob } from '@shared/contract/quiltPlan.ts';
+import { quiltPlanAnswerSchema, quiltPlanJobAnswerSchema, quiltPlanQueuedSchema, type QuiltPlan, type QuiltPlanAnswer, type QuiltPlanJob } from '@shared/contract/quiltPlan.ts';
 import { formatLength, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { QuiltPlanProgress } from './QuiltPlanProgress.tsx';
@@ -16,6 +16,8 @@ export interface QuiltRoutePanelProps {
   /** Unsaved changes on the page: planning waits for a save. */
   readonly dirty: boolean;
   readonly viewerUnits: Units;
+  /** Told each plan that arrives, so the quilt map can draw the route. */
+  readonly onPlanned?: (answer: QuiltPlanAnswer) => void;
 }
 
 type PanelState =
@@ -30,7 +32,7 @@ type PanelState =
  * each block's entry and exit corner, the travel, passes and thread. From stored corner costs the plan comes at once;
  * otherwise a planning worker makes it and the panel polls the job, showing its progress, then the plan.
  */
-export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits }: QuiltRoutePanelProps) {
+export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits, onPlanned }: QuiltRoutePanelProps) {
   const [state, setState] = useState<PanelState>({ kind: 'idle' });
   const jobId = state.kind === 'waiting' ? state.job.id : null;
 
@@ -39,7 +41,10 @@ export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits }: QuiltR
     const res = await apiRequest('POST', `/api/quilts/${quiltId}/plan`);
     if (!res.ok) return setState({ kind: 'failed', message: res.error.message });
     const planned = quiltPlanAnswerSchema.safeParse(res.value);
-    if (planned.success) return setState({ kind: 'done', plan: planned.data.plan, version: planned.data.quiltVersion });
+    if (planned.success) {
+      onPlanned?.(planned.data);
+      return setState({ kind: 'done', plan: planned.data.plan, version: planned.data.quiltVersion });
+    }
     const queued = quiltPlanQueuedSchema.safeParse(res.value);
     setState(queued.success ? { kind: 'waiting', job: queued.data.job } : { kind: 'failed', message: 'The plan could not be read.' });
   }
@@ -56,7 +61,10 @@ export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits }: QuiltR
       const parsed = quiltPlanJobAnswerSchema.safeParse(res.value);
       if (!parsed.success) return setState({ kind: 'failed', message: 'The planning progress could not be read.' });
       const { job, plan: made } = parsed.data;
-      if (job.state === 'done' && made) return setState({ kind: 'done', plan: made, version: job.quiltVersion });
+      if (job.state === 'done' && made) {
+        onPlanned?.({ quiltVersion: job.quiltVersion, plan: made });
+        return setState({ kind: 'done', plan: made, version: job.quiltVersion });
+      }
       if (job.state === 'failed') return setState({ kind: 'failed', message: job.failure?.message ?? 'Planning stopped.' });
       setState({ kind: 'waiting', job });
       timer = setTimeout(() => void poll(), POLL_MS);
@@ -66,7 +74,7 @@ export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits }: QuiltR
       controller.abort();
       clearTimeout(timer);
     };
-  }, [quiltId, jobId]);
+  }, [quiltId, jobId, onPlanned]);
 
   const len = (v: number, units: Units) => formatLength(v, units, viewerUnits);
   return (

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { quiltSchema, type Quilt } from '@shared/quilt/quilt.schema.ts';
 import { finishedSize } from '@shared/quilt/finishedSize.ts';
-import { budgetOf, clearCell, moveBlock, newQuilt, placeDesign, setFrame, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { budgetOf, clearCell, moveBlock, newQuilt, placeDesign, toggleMirror, trimTableOf, turnQuarter } from './quiltEdits.ts';
+import { addBorder, setSashing } from './quiltFrameEdits.ts';
 import type { DesignSummary } from '@shared/contract/figures.ts';
 
 describe('quilt map edits', () => {
@@ -12,7 +13,7 @@ describe('quilt map edits', () => {
     q = placeDesign(q, 1, 2, 'design-a');
     q = turnQuarter(q, 1, 2);
     q = toggleMirror(q, 1, 2);
-    q = setFrame(q, 2, 3);
+    q = addBorder(setSashing(q, 2), 3);
     expect(quiltSchema.parse(q)).toEqual(q);
     expect(q.placements[1]![2]).toEqual({ designId: 'design-a', rotation: 90, mirror: true });
     expect(q.placements[0]).toEqual([null, null, null]);
@@ -34,15 +35,14 @@ describe('quilt map edits', () => {
 
   it('sashing and a border give the finished size of the worked check (issue 15): 3 × 3 of 12 in, 3 in border → 42 in', () => {
     // Arithmetic of the layout, not a source: 3·12 + 2·0 + 2·3 = 42.
-    const q = setFrame(newQuilt('in', 3, 3, 12), 0, 3);
+    const q = addBorder(newQuilt('in', 3, 3, 12), 3);
     expect(finishedSize(q)).toEqual({ width: 42, height: 42 });
     // With 2 in sashing: 3·12 + 2·2 + 2·3 = 46.
-    expect(finishedSize(setFrame(q, 2, 3))).toEqual({ width: 46, height: 46 });
-    expect(setFrame(q, 2, 0).borders).toEqual([]);
+    expect(finishedSize(setSashing(q, 2))).toEqual({ width: 46, height: 46 });
   });
 
   it('trim table has one row per placed block, in reading order', () => {
-    let q = setFrame(newQuilt('in', 3, 3, 12), 0, 3);
+    let q = addBorder(newQuilt('in', 3, 3, 12), 3);
     for (let r = 0; r < 3; r++) for (let c = 0; c < 3; c++) q = placeDesign(q, r, c, `d${r}${c}`);
     const t = trimTableOf(q);
     if (!('rows' in t)) throw new Error(t.problem);

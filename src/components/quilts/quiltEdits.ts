@@ -1,5 +1,5 @@
 // The quilt map editor's edits as pure functions over the shared quilt schema's type: a new map, placing a design in
-// a cell, clearing it, moving (swapping) blocks, a quarter turn, a mirror, sashing and border widths; and the figures the page shows from the map and the
+// a cell, clearing it, moving (swapping) blocks, a quarter turn, a mirror (sashing and borders: quiltFrameEdits.ts); and the figures the page shows from the map and the
 // designs' stored summaries (finished size, trim plan, quilt budget). No React, no fetch.
 import type { Units } from '@shared/design/design.schema.ts';
 import { QUILT_VERSION, type Cell, type Quilt, type Rotation } from '@shared/quilt/quilt.schema.ts';
@@ -54,11 +54,6 @@ export function turnQuarter(quilt: Quilt, row: number, column: number): Quilt {
 /** Mirrors left to right (again to undo). */
 export function toggleMirror(quilt: Quilt, row: number, column: number): Quilt {
   return withCell(quilt, row, column, (p) => (p ? { ...p, mirror: !p.mirror } : p));
-}
-
-/** Sets the sashing width (≥ 0) and a single border (0 takes the borders away). */
-export function setFrame(quilt: Quilt, sashing: number, border: number): Quilt {
-  return { ...quilt, sashing: Math.max(0, sashing), borders: border > 0 ? [border] : [] };
 }
 
 // The trim table and the block-by-block budget moved to shared/quilt/quiltFigures.ts (the printed plan uses them too).

@@ -103,6 +103,8 @@ export const matrixRows: MatrixRow[] = [
     expect: s(401, 200, 404, 404, 404, 404),
   },
   { route: 'GET /api/quilts/[id]/plan.pdf', path: (w) => `/api/quilts/${w.quiltId}/plan.pdf`, expect: s(401, 200, 404, 404, 404, 404), note: 'the printed plan: owner only, as the quilt' },
+  { route: 'GET /api/quilts/[id]/schedule', path: (w) => `/api/quilts/${w.quiltId}/schedule`, expect: s(401, 200, 404, 404, 404, 404) },
+  { route: 'PUT /api/quilts/[id]/schedule', path: (w) => `/api/quilts/${w.quiltId}/schedule`, body: { classId: null, start: '2027-02-30' }, expect: s(401, 400, 404, 404, 404, 404), note: 'a day that does not exist: the owner gets 400 and nothing changes' },
   { route: 'DELETE /api/quilts/[id]', path: (w) => `/api/quilts/${w.quiltId}`, send: fresh((w) => w.fresh.quiltId(), (w) => w.quiltId, (_, id) => `/api/quilts/${id}`), expect: s(401, 200, 404, 404, 404, 404) },
 
   // Designs: the owner only (admins included in "not the owner")

@@ -5,7 +5,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeTestDb, testDb } from '../helpers/db.ts';
 import { readCapturedMail, waitForMail } from '../helpers/mail.ts';
-import { completedEvent, expiredEvent, payOnCheckoutPage, paymentsEnv, refundedEvent, sendWebhook, testId } from '../helpers/payments.ts';
+import { completedEvent, expiredEvent, payOnCheckoutPage, paymentsEnv, refundedEvent, sendWebhook, signatureFor, testId } from '../helpers/payments.ts';
 import { buildPaidClassWorld, checkout, paymentFacts, type PaidClassWorld } from './paidClassWorld.ts';
 import { createAccount } from '../helpers/accounts.ts';
 import { expectStatus } from './teachingWorld.ts';
@@ -79,6 +79,8 @@ describe('the webhook’s signature and replay window', () => {
       await sendWebhook(event, { signature: null }),
       await sendWebhook(event, { timestamp: now() - 600 }),
       await sendWebhook(event, { signature: 't=1,v1=00' }),
+      // A signature made for other bytes (here: the same event with another amount).
+      await sendWebhook(event, { signature: signatureFor(JSON.stringify({ ...event, data: { object: { ...event.data.object, amount_total: 1 } } })) }),
     ];
     for (const res of cases) expect(res).toMatchObject({ status: 400, body: { error: { code: 'invalid_signature' } } });
     const facts = await paymentFacts(paymentId);
@@ -167,6 +169,12 @@ describe('refunds by the teacher', () => {
     expect((await w.student.client.get(`/api/lessons/${w.futureLessonId}`)).status).toBe(200);
     const list = await expectStatus(buyer.client.get(`/api/classes/${w.classId}/lessons`), 200);
     expect(list.lessons.map((l: { id: string }) => l.id)).toEqual([w.releasedLessonId]);
+    // The release e-mail goes to the paying student only.
+    await expectStatus(w.admin.client.post('/api/lessons/release-sweep'), 200);
+    await waitForMail(w.student.email, { subject: 'Evening lesson 2' });
+    expect(readCapturedMail().filter((m) => m.to.includes(buyer.email) && m.subject.includes('Evening lesson 2'))).toEqual([]);
+    const dashboard = await buyer.client.get('/dashboard');
+    expect(dashboard.text).not.toContain('Evening lesson 2');
     const page = await buyer.client.get(`/classes/${w.classId}`);
     expect(page.text).toContain('data-refund-notice');
     expect(page.text).toContain('You keep the lessons');

@@ -62,6 +62,17 @@ describe('buying a paid class through the fake checkout', () => {
     expect(again.checkoutUrl).toBeUndefined();
   });
 
+  it('cancelling on the checkout page comes back to the Classes page, which says nothing was charged', async () => {
+    const buyer = await createAccount({ displayName: 'Perrin Welt' });
+    const { paymentId, checkoutUrl } = await checkout(w, buyer);
+    const res = await fetch(checkoutUrl, { method: 'POST', body: new URLSearchParams({ action: 'cancel' }), redirect: 'manual' });
+    expect(res.status).toBe(303);
+    const back = new URL(res.headers.get('location')!);
+    expect(back.pathname + back.search).toBe('/classes?checkout=cancelled');
+    expect((await buyer.client.get('/classes?checkout=cancelled')).text).toContain('nothing was charged');
+    expect(await paymentFacts(paymentId)).toMatchObject({ state: 'pending', enrollment: null });
+  });
+
   it('free classes still join at once, as before', async () => {
     const free = await expectStatus(w.teacher.client.post('/api/classes', { title: 'Free sampler', startsOn: new Date(Date.now() + 9 * 86_400_000).toISOString().slice(0, 10) }), 201);
     const joined = await expectStatus(w.otherStudent.client.post('/api/classes/join', { code: free.class.joinCode }), 200);
@@ -185,5 +196,9 @@ describe('refunds by the teacher', () => {
     await payOnCheckoutPage(again.checkoutUrl);
     expect(await paymentFacts(again.paymentId)).toMatchObject({ state: 'paid', enrollment: { access_until: null } });
     expect((await buyer.client.get(`/api/lessons/${w.futureLessonId}`)).status).toBe(200);
+    // … and the lesson's release e-mail now goes to them too (sent here, not by the server's own sweep during a
+    // later test file, which counts e-mails).
+    await expectStatus(w.admin.client.post('/api/lessons/release-sweep'), 200);
+    await waitForMail(buyer.email, { subject: 'Evening lesson 2' });
   });
 });

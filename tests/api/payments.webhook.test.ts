@@ -5,7 +5,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeTestDb, testDb } from '../helpers/db.ts';
 import { readCapturedMail, waitForMail } from '../helpers/mail.ts';
-import { completedEvent, expiredEvent, payOnCheckoutPage, paymentsEnv, refundedEvent, sendWebhook, testId } from '../helpers/payments.ts';
+import { completedEvent, expiredEvent, payOnCheckoutPage, paymentsEnv, refundedEvent, sendWebhook, signatureFor, testId } from '../helpers/payments.ts';
 import { buildPaidClassWorld, checkout, paymentFacts, type PaidClassWorld } from './paidClassWorld.ts';
 import { createAccount } from '../helpers/accounts.ts';
 import { expectStatus } from './teachingWorld.ts';
@@ -62,6 +62,17 @@ describe('buying a paid class through the fake checkout', () => {
     expect(again.checkoutUrl).toBeUndefined();
   });
 
+  it('cancelling on the checkout page comes back to the Classes page, which says nothing was charged', async () => {
+    const buyer = await createAccount({ displayName: 'Perrin Welt' });
+    const { paymentId, checkoutUrl } = await checkout(w, buyer);
+    const res = await fetch(checkoutUrl, { method: 'POST', body: new URLSearchParams({ action: 'cancel' }), redirect: 'manual' });
+    expect(res.status).toBe(303);
+    const back = new URL(res.headers.get('location')!);
+    expect(back.pathname + back.search).toBe('/classes?checkout=cancelled');
+    expect((await buyer.client.get('/classes?checkout=cancelled')).text).toContain('nothing was charged');
+    expect(await paymentFacts(paymentId)).toMatchObject({ state: 'pending', enrollment: null });
+  });
+
   it('free classes still join at once, as before', async () => {
     const free = await expectStatus(w.teacher.client.post('/api/classes', { title: 'Free sampler', startsOn: new Date(Date.now() + 9 * 86_400_000).toISOString().slice(0, 10) }), 201);
     const joined = await expectStatus(w.otherStudent.client.post('/api/classes/join', { code: free.class.joinCode }), 200);
@@ -79,6 +90,8 @@ describe('the webhook’s signature and replay window', () => {
       await sendWebhook(event, { signature: null }),
       await sendWebhook(event, { timestamp: now() - 600 }),
       await sendWebhook(event, { signature: 't=1,v1=00' }),
+      // A signature made for other bytes (here: the same event with another amount).
+      await sendWebhook(event, { signature: signatureFor(JSON.stringify({ ...event, data: { object: { ...event.data.object, amount_total: 1 } } })) }),
     ];
     for (const res of cases) expect(res).toMatchObject({ status: 400, body: { error: { code: 'invalid_signature' } } });
     const facts = await paymentFacts(paymentId);
@@ -167,6 +180,12 @@ describe('refunds by the teacher', () => {
     expect((await w.student.client.get(`/api/lessons/${w.futureLessonId}`)).status).toBe(200);
     const list = await expectStatus(buyer.client.get(`/api/classes/${w.classId}/lessons`), 200);
     expect(list.lessons.map((l: { id: string }) => l.id)).toEqual([w.releasedLessonId]);
+    // The release e-mail goes to the paying student only.
+    await expectStatus(w.admin.client.post('/api/lessons/release-sweep'), 200);
+    await waitForMail(w.student.email, { subject: 'Evening lesson 2' });
+    expect(readCapturedMail().filter((m) => m.to.includes(buyer.email) && m.subject.includes('Evening lesson 2'))).toEqual([]);
+    const dashboard = await buyer.client.get('/dashboard');
+    expect(dashboard.text).not.toContain('Evening lesson 2');
     const page = await buyer.client.get(`/classes/${w.classId}`);
     expect(page.text).toContain('data-refund-notice');
     expect(page.text).toContain('You keep the lessons');
@@ -177,5 +196,9 @@ describe('refunds by the teacher', () => {
     await payOnCheckoutPage(again.checkoutUrl);
     expect(await paymentFacts(again.paymentId)).toMatchObject({ state: 'paid', enrollment: { access_until: null } });
     expect((await buyer.client.get(`/api/lessons/${w.futureLessonId}`)).status).toBe(200);
+    // … and the lesson's release e-mail now goes to them too (sent here, not by the server's own sweep during a
+    // later test file, which counts e-mails).
+    await expectStatus(w.admin.client.post('/api/lessons/release-sweep'), 200);
+    await waitForMail(buyer.email, { subject: 'Evening lesson 2' });
   });
 });

@@ -48,6 +48,9 @@ export function refundedEvent(paymentIntent: string, createdSeconds = Math.floor
   };
 }
 
+/** The `Stripe-Signature` header the service would send for exactly these bytes. */
+export const signatureFor = (payload: string, secret = paymentsEnv.webhookSecret) => sdk.webhooks.generateTestHeaderString({ payload, secret });
+
 /** Posts the event to the app's webhook as the service would (no Origin, no cookie), signed with `secret`. */
 export async function sendWebhook(event: unknown, opts: { secret?: string; timestamp?: number; signature?: string | null } = {}) {
   const payload = JSON.stringify(event);

@@ -19,6 +19,8 @@ export async function listUnannouncedReleases(db: Db, windowDays: number, limit:
     .where('lesson.release_at', '<=', sql<Date>`now()`)
     .where('lesson.release_at', '>', sql<Date>`now() - make_interval(days => ${windowDays})`)
     .where(sql<boolean>`greatest(lesson.release_at, lesson.updated_at) >= enrollment.joined_at`)
+    // A refunded student hears of no lesson released after the refund (it stays closed to them).
+    .where(sql<boolean>`(enrollment.access_until is null or lesson.release_at <= enrollment.access_until)`)
     .where((eb) =>
       eb.not(
         eb.exists(
@@ -31,7 +33,10 @@ export async function listUnannouncedReleases(db: Db, windowDays: number, limit:
     .execute();
 }
 
-/** True when the student is enrolled in a class with a released lesson that uses a version of the template. */
+/**
+ * True when the student is enrolled in a class with a released lesson that uses a version of the template (after a
+ * refund: released by then).
+ */
 export async function hasReleasedLessonUsingTemplate(db: Db, templateId: string, studentId: string): Promise<boolean> {
   const lesson = await db
     .selectFrom('lesson')
@@ -41,6 +46,7 @@ export async function hasReleasedLessonUsingTemplate(db: Db, templateId: string,
     .where('tv.template_id', '=', templateId)
     .where('enrollment.student_id', '=', studentId)
     .where('lesson.release_at', '<=', sql<Date>`now()`)
+    .where(sql<boolean>`(enrollment.access_until is null or lesson.release_at <= enrollment.access_until)`)
     .executeTakeFirst();
   return lesson !== undefined;
 }

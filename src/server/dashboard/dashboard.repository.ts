@@ -18,7 +18,7 @@ export async function listRecentDesigns(db: Db, ownerId: string, limit: number) 
     .execute();
 }
 
-/** Every lesson of every class the student is enrolled in, with the student's own progress (if any), by release. */
+/** Every lesson of every class the student is enrolled in (after a refund: those released by then), with the student's own progress (if any), by release. */
 export async function listEnrolledLessonsWithProgress(db: Db, studentId: string) {
   return db
     .selectFrom('enrollment')
@@ -37,6 +37,8 @@ export async function listEnrolledLessonsWithProgress(db: Db, studentId: string)
       'p.finished_at',
     ])
     .where('enrollment.student_id', '=', studentId)
+    // After a refund, lessons released later are not the student's: they are left out, like on the class page.
+    .where(sql<boolean>`(enrollment.access_until is null or lesson.release_at <= enrollment.access_until)`)
     .orderBy('lesson.release_at')
     .orderBy('lesson.created_at')
     .execute();

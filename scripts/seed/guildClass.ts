@@ -14,7 +14,7 @@ import { inTransaction } from '@server/transaction.repository.ts';
 import { seedDesign } from './guildDesigns.ts';
 import { marigoldDrawings, type GuildDrawing } from './guildDrawings.ts';
 
-const CLASS_TITLE = 'Tuesday quilt-along';
+export const CLASS_TITLE = 'Tuesday quilt-along';
 const DAY_MS = 24 * 60 * 60 * 1000;
 const WEEK2_TITLE = 'Week 2: echoes around the blades';
 const WEEK2_LEAD = 'A second pinwheel: the same ditch lines as week 1, with echoes 1/2 in apart inside each blade, stepping in from one echo to the next.';

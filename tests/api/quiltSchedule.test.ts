@@ -3,7 +3,7 @@
 // otherwise one block a month from a start date. Only the owner's own classes may be chosen.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { closeTestDb } from '../helpers/db.ts';
-import type { TestAccount } from '../helpers/accounts.ts';
+import { demoGuild, signIn, type TestAccount } from '../helpers/accounts.ts';
 import { buildWorld, expectStatus, insertDesignWithRoute, type World } from './teachingWorld.ts';
 
 let w: World;
@@ -83,5 +83,19 @@ describe('a quilt schedule', () => {
     // Still tied to the class after the refusals.
     const kept = await expectStatus(w.teacher.client.get(`/api/quilts/${teacherQuilt}/schedule`), 200);
     expect(kept.schedule.classId).toBe(w.classId);
+  });
+});
+
+describe("the demo guild's quilt", () => {
+  it("Marigold's quilt-along top is scheduled by her Tuesday quilt-along's dated lessons, one block each", async () => {
+    const teacher = demoGuild.byRole('teacher');
+    const client = await signIn(teacher.email, demoGuild.password);
+    const list = await expectStatus(client.get('/api/quilts'), 200);
+    const quilt = (list.quilts as { id: string; title: string }[]).find((q) => q.title === 'Tuesday quilt-along top');
+    expect(quilt, 'the seed adds the demo quilt').toBeDefined();
+    const { schedule } = await expectStatus(client.get(`/api/quilts/${quilt!.id}/schedule`), 200);
+    expect(schedule.source).toMatchObject({ kind: 'class', classTitle: 'Tuesday quilt-along', standing: 'teacher' });
+    expect(schedule.rows).toHaveLength(12);
+    expect(schedule.rows.filter((r: { date: string | null }) => r.date !== null)).toHaveLength(schedule.source.lessons);
   });
 });

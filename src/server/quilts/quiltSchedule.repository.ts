@@ -62,3 +62,20 @@ export async function finishedCounts(db: Db, lessonIds: readonly string[]): Prom
     .execute();
   return new Map(rows.map((r) => [r.lesson_id, Number(r.n)]));
 }
+
+/**
+ * Ties a quilt that has no schedule yet (no class, no start) to a class; a schedule the owner chose is left alone.
+ * For the demo seed, which runs on every start. Returns whether the quilt changed.
+ */
+export async function tieUnscheduledQuiltToClass(db: Db, ownerId: string, id: string, classId: string): Promise<boolean> {
+  const r = await db
+    .updateTable('quilt')
+    .set({ class_id: classId })
+    .where('id', '=', id)
+    .where('owner_id', '=', ownerId)
+    .where('class_id', 'is', null)
+    .where('schedule_start', 'is', null)
+    .where('deleted_at', 'is', null)
+    .executeTakeFirst();
+  return r.numUpdatedRows > 0n;
+}

@@ -28,6 +28,7 @@ import { findFreePort, waitForHttp } from '../scripts/lib/ports.mjs';
 import { buildApp, runTs, serveApp, startPlanWorkerProcess } from '../scripts/lib/app.mjs';
 import { startMailSink } from '../scripts/lib/mailSink.mjs';
 import { startBalancer } from '../scripts/lib/balancer.mjs';
+import { startS3Fake } from '../scripts/lib/s3Fake.mjs';
 
 const LOAD_SECONDS = Number(process.env['BENCH_LOAD_SECONDS'] ?? 20);
 const PASSWORD = 'quilting-is-fun-42';
@@ -97,10 +98,13 @@ async function main(): Promise<void> {
     mkdirSync(mailDir);
     const balancerPort = await findFreePort();
     const base = `http://127.0.0.1:${balancerPort}`;
-    const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1', PUBLIC_ORIGIN: base, TRUSTED_PROXIES: '127.0.0.1' };
+    const env: Record<string, string> = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1', PUBLIC_ORIGIN: base, TRUSTED_PROXIES: '127.0.0.1' };
     runTs('db/migrate.ts', env);
     const mail = await startMailSink({ dir: mailDir });
     cleanups.push(() => mail.close());
+    const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
+    cleanups.push(() => s3.close());
+    Object.assign(env, s3.env);
     buildApp();
     const upstreams: string[] = [];
     for (let i = 0; i < 2; i++) {

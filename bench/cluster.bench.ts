@@ -98,7 +98,8 @@ async function main(): Promise<void> {
     mkdirSync(mailDir);
     const balancerPort = await findFreePort();
     const base = `http://127.0.0.1:${balancerPort}`;
-    const env: Record<string, string> = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1', PUBLIC_ORIGIN: base, TRUSTED_PROXIES: '127.0.0.1' };
+    const dbUrl = databaseUrl(pgPort, 'threadway');
+    const env: Record<string, string> = { DATABASE_URL: dbUrl, MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1', PUBLIC_ORIGIN: base, TRUSTED_PROXIES: '127.0.0.1' };
     runTs('db/migrate.ts', env);
     const mail = await startMailSink({ dir: mailDir });
     cleanups.push(() => mail.close());
@@ -117,7 +118,7 @@ async function main(): Promise<void> {
     cleanups.push(() => balancer.close());
     for (let i = 0; i < 2; i++) cleanups.push(stop(startPlanWorkerProcess({ env, threads: 1, quiet: true })));
 
-    const db = connectDatabase(env.DATABASE_URL, 1);
+    const db = connectDatabase(dbUrl, 1);
     const hash = await hashPassword(PASSWORD);
     const names = [...Array.from({ length: CHECKERS }, (_, i) => `checker${i + 1}`), ...Array.from({ length: PLANNERS }, (_, i) => `planner${i + 1}`), 'reader'];
     for (const n of names) await db.insertInto('account').values({ email: `${n}@bench.test`, display_name: `Bench ${n}`, password_hash: hash }).execute();

@@ -60,7 +60,8 @@ describe('printable plans in the browser', () => {
     }
     await page.getByRole('button', { name: 'Turn a quarter' }).click();
     await page.getByLabel('Sashing (in)').fill('1');
-    await page.getByLabel('Border (in)').fill('2');
+    await page.getByRole('button', { name: 'Add a border' }).click();
+    await page.getByLabel('Border 1 (in)').fill('2');
     // While the map has unsaved changes the plan would print the saved copy, so the page says to save first.
     await page.getByText('Save the quilt to download its plan.').waitFor();
     await page.getByRole('button', { name: 'Save quilt' }).click();

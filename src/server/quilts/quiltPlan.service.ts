@@ -19,6 +19,9 @@ import { planFromStoredTables } from '../jobs/quiltPlanRun.ts';
 import { countOpenPlanJobs, failPlanJob, findOwnedPlanJob, findPlanJobByInputs, insertPlanJob, requeuePlanJob, setPlanJobQueueId } from '../jobs/quiltPlanJob.repository.ts';
 import { quiltPlanOf } from './quiltPlanAnswer.ts';
 
+/** A queued row with no queue job this long after it was made was never sent (its request's instance stopped). */
+const UNSENT_AFTER_MS = 30_000;
+
 /** Whole-quilt plans one account may have queued or running at once; one more is 429. */
 export const PLAN_JOBS_PER_ACCOUNT = 2;
 
@@ -50,7 +53,13 @@ export async function requestQuiltPlan(
   if (!cached.ok) return err({ kind: 'problem', problem: cached.error });
   if (cached.value) return ok({ kind: 'planned', plan: quiltPlanOf(cached.value) });
 
-  if (existing && existing.state !== 'failed') return ok({ kind: 'queued', job: jobOfRow(existing) });
+  if (existing && existing.state !== 'failed') {
+    // A row whose queue job was never sent (the instance stopped between the two writes): send it now.
+    if (existing.state === 'queued' && existing.queue_job_id === null && Date.now() - existing.created_at.getTime() > UNSENT_AFTER_MS) {
+      await setPlanJobQueueId(db, existing.id, await sendPlanQuiltJob(await queue(), { planJobId: existing.id }));
+    }
+    return ok({ kind: 'queued', job: jobOfRow(existing) });
+  }
   const open = await countOpenPlanJobs(db, ownerId);
   if (open >= PLAN_JOBS_PER_ACCOUNT) return err({ kind: 'too-many', open });
   const row = existing ? await requeuePlanJob(db, existing.id) : await insertPlanJob(db, { quiltId: quilt.id, ownerId, quiltVersion: quilt.version, inputsKey: key });

@@ -22,7 +22,7 @@ import { findLiveQuilt, liveOwnedDesignTexts } from '../quilts/quilt.repository.
 import { quiltPlanOf } from '../quilts/quiltPlanAnswer.ts';
 import { inputsKey, placedDesignShapes, placedDesignVersions, postgresCornerCostStore, QUILT_JOB_PROVE_WITHIN_MS, QUILT_JOB_PROVES, QUILT_JOB_SETTINGS } from './planInputs.ts';
 import { openPlanQueue, PLAN_HEARTBEAT_STALE_SECONDS, PLAN_QUILT_QUEUE, type PlanQuiltJobData } from './planQueue.ts';
-import { failPlanJob, finishPlanJob, findStalePlanJobs, markPlanJobRequeued, setPlanJobProgress, startPlanJob } from './quiltPlanJob.repository.ts';
+import { failPlanJob, finishPlanJob, findStalePlanJobs, markPlanJobRequeued, requeueRunningPlanJob, setPlanJobProgress, startPlanJob } from './quiltPlanJob.repository.ts';
 import { runQuiltPlan, type PairRunner, type RunDesign } from './quiltPlanRun.ts';
 
 /** Longest one corner-pair plan may hold a thread (ms): the exact search stops itself at 100 ms, so this only catches a broken plan. */
@@ -66,7 +66,9 @@ export async function startPlanWorker(options: PlanWorkerOptions): Promise<PlanW
     } catch (error) {
       const last = job.retryCount >= job.retryLimit;
       log(`job ${job.data.planJobId} try ${job.retryCount + 1} failed${last ? ' (last try)' : ''}: ${error instanceof Error ? error.message : String(error)}`);
-      if (last) await failPlanJob(db, job.data.planJobId, JSON.stringify(GAVE_UP)).catch(() => {});
+      // Last try: the row says failed. Otherwise pg-boss tries again; until a worker takes it the row is queued, so the
+      // stale-job sweep does not count the wait as a dead worker (and spend a retry).
+      await (last ? failPlanJob(db, job.data.planJobId, JSON.stringify(GAVE_UP)) : requeueRunningPlanJob(db, job.data.planJobId)).catch(() => {});
       throw error;
     }
   });

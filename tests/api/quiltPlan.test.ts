@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createAccount, type TestAccount } from '../helpers/accounts.ts';
 import { closeTestDb, testDb } from '../helpers/db.ts';
 import { block } from './designFixtures.ts';
+import { inputsKey } from '../../src/server/jobs/planInputs.ts';
 import { quiltPlanAnswerSchema, quiltPlanJobAnswerSchema, quiltPlanQueuedSchema, type QuiltPlanJobAnswer } from '../../shared/contract/quiltPlan.ts';
 
 const outline = () => block({ seams: [], lines: [[[0, 0], [12, 0], [12, 12], [0, 12], [0, 0]]], edgeTravel: false });
@@ -137,6 +138,20 @@ describe('planning a quilt through the job queue', () => {
     const res = await owner.client.post(`/api/quilts/${id}/plan`);
     expect(res.status, res.text).toBe(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['quilt.placements.0.1.designId']);
+  });
+
+  it('a job row whose queue job was never sent (its instance stopped in between) is sent on the next request', async () => {
+    const fresh = (await owner.client.post('/api/designs', { title: 'Outline never sent', design: outline() })).body.design.id as string;
+    const id = await quiltOf(0, [fresh]);
+    const orphan = await testDb()
+      .insertInto('quilt_plan_job')
+      .values({ quilt_id: id, owner_id: owner.id, quilt_version: 1, inputs_key: inputsKey([{ id: fresh, version: 1 }]), created_at: new Date(Date.now() - 60_000) })
+      .returning('id')
+      .executeTakeFirstOrThrow();
+    const res = await owner.client.post(`/api/quilts/${id}/plan`);
+    expect(res.status, res.text).toBe(202);
+    expect(res.body.job.id).toBe(orphan.id);
+    expect((await pollJob(id, orphan.id)).at(-1)!.job.state).toBe('done');
   });
 
   it('429 with Retry-After when the account already has 2 plans being made', async () => {

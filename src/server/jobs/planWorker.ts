@@ -20,9 +20,9 @@ import { WorkerPool } from '../engine/workerPool.ts';
 import { quiltOf } from '../quilts/quilt.service.ts';
 import { findLiveQuilt, liveOwnedDesignTexts } from '../quilts/quilt.repository.ts';
 import { quiltPlanOf } from '../quilts/quiltPlanAnswer.ts';
-import { inputsKey, placedDesignShapes, postgresCornerCostStore, QUILT_JOB_PROVES, QUILT_JOB_SETTINGS } from './planInputs.ts';
+import { inputsKey, placedDesignShapes, placedDesignVersions, postgresCornerCostStore, QUILT_JOB_PROVE_WITHIN_MS, QUILT_JOB_PROVES, QUILT_JOB_SETTINGS } from './planInputs.ts';
 import { openPlanQueue, PLAN_HEARTBEAT_STALE_SECONDS, PLAN_QUILT_QUEUE, type PlanQuiltJobData } from './planQueue.ts';
-import { failPlanJob, finishPlanJob, findStalePlanJobs, markPlanJobRequeued, setPlanJobProgress, startPlanJob } from './quiltPlanJob.repository.ts';
+import { failPlanJob, finishPlanJob, findStalePlanJobs, markPlanJobRequeued, requeueRunningPlanJob, setPlanJobProgress, startPlanJob } from './quiltPlanJob.repository.ts';
 import { runQuiltPlan, type PairRunner, type RunDesign } from './quiltPlanRun.ts';
 
 /** Longest one corner-pair plan may hold a thread (ms): the exact search stops itself at 100 ms, so this only catches a broken plan. */
@@ -66,7 +66,9 @@ export async function startPlanWorker(options: PlanWorkerOptions): Promise<PlanW
     } catch (error) {
       const last = job.retryCount >= job.retryLimit;
       log(`job ${job.data.planJobId} try ${job.retryCount + 1} failed${last ? ' (last try)' : ''}: ${error instanceof Error ? error.message : String(error)}`);
-      if (last) await failPlanJob(db, job.data.planJobId, JSON.stringify(GAVE_UP)).catch(() => {});
+      // Last try: the row says failed. Otherwise pg-boss tries again; until a worker takes it the row is queued, so the
+      // stale-job sweep does not count the wait as a dead worker (and spend a retry).
+      await (last ? failPlanJob(db, job.data.planJobId, JSON.stringify(GAVE_UP)) : requeueRunningPlanJob(db, job.data.planJobId)).catch(() => {});
       throw error;
     }
   });
@@ -98,11 +100,11 @@ async function planOne(db: Kysely<Database>, planJobId: string, runPair: PairRun
     return;
   }
   const quilt = quiltOf(quiltRow);
-  const shapes = await placedDesignShapes(db, row.owner_id, quilt);
-  if (inputsKey(shapes) !== row.inputs_key) {
+  if (inputsKey(await placedDesignVersions(db, row.owner_id, quilt)) !== row.inputs_key) {
     await failPlanJob(db, row.id, JSON.stringify(STALE));
     return;
   }
+  const shapes = await placedDesignShapes(db, row.owner_id, quilt);
   const texts = new Map((await liveOwnedDesignTexts(db, row.owner_id, shapes.map((s) => s.id))).map((t) => [t.id, t] as const));
   const designs: RunDesign[] = shapes.flatMap((s) => {
     const t = texts.get(s.id);
@@ -124,6 +126,7 @@ async function planOne(db: Kysely<Database>, planJobId: string, runPair: PairRun
       store: postgresCornerCostStore(db),
       runPair,
       prove: QUILT_JOB_PROVES,
+      proveWithinMs: QUILT_JOB_PROVE_WITHIN_MS,
       onProgress: (done, total) => {
         last = { done, total };
         if (Date.now() - written >= PROGRESS_EVERY_MS) write();
@@ -142,7 +145,7 @@ async function planOne(db: Kysely<Database>, planJobId: string, runPair: PairRun
   await setPlanJobProgress(db, row.id, last.done, last.total);
   await finishPlanJob(db, row.id, JSON.stringify(quiltPlanOf(result.value.route)));
   const s = result.value.stats;
-  log(`job ${row.id}: ${designs.length} designs (${s.cachedDesigns} cached), ${s.heuristicPlans} heuristic + ${s.provedPlans} proved pair plans in ${((Date.now() - started) / 1000).toFixed(1)} s`);
+  log(`job ${row.id}: ${designs.length} designs (${s.cachedDesigns} cached), ${s.heuristicPlans} heuristic + ${s.provedPlans} proved pair plans in ${((Date.now() - started) / 1000).toFixed(1)} s${s.proofCut ? ' (proving stopped at its time limit)' : ''}`);
 }
 
 /** Fails (so pg-boss retries) running jobs whose worker stopped writing: it died mid-job. */

@@ -110,3 +110,8 @@ export async function markPlanJobRequeued(db: Db, jobId: string, staleSeconds: n
     .executeTakeFirst();
   return Number(r.numUpdatedRows) === 1;
 }
+
+/** A job whose try failed and that pg-boss will try again: queued, so the stale-job sweep leaves it alone meanwhile. */
+export async function requeueRunningPlanJob(db: Db, jobId: string): Promise<void> {
+  await db.updateTable('quilt_plan_job').set({ state: 'queued', updated_at: sql<Date>`now()` }).where('id', '=', jobId).where('state', '=', 'running').execute();
+}

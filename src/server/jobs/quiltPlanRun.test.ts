@@ -109,6 +109,20 @@ describe('runQuiltPlan', () => {
     const bumped = runDesigns.map((d, i) => (i === 0 ? { ...d, version: d.version + 1 } : d));
     const newer = planFromStoredTables(quilt, bumped, await store.load(bumped), true);
     expect(newer.ok && newer.value).toBeNull();
+  }, 180_000);
+
+  it('with no time left to prove, answers the heuristic chain with its lower bound and proves nothing', async () => {
+    const runPair = countingRunner(drawings);
+    const cut = await runQuiltPlan(quilt, runDesigns, { store: memoryStore(), runPair, prove: true, proveWithinMs: 0 });
+    if (!cut.ok) throw new Error(cut.error.message);
+    expect(runPair.calls.filter((c) => c.exact)).toHaveLength(0);
+    expect(cut.value.stats.provedPlans).toBe(0);
+    // The bound is a bound: no choice of corners beats it, so the heuristic chain's total is at least it.
+    expect(cut.value.route.lowerBound).toBeLessThanOrEqual(cut.value.route.chain.total + 1e-9);
+    const full = await runQuiltPlan(quilt, runDesigns, { store: memoryStore(), runPair: countingRunner(drawings), prove: true });
+    if (!full.ok) throw new Error(full.error.message);
+    expect(cut.value.route.lowerBound).toBeLessThanOrEqual(full.value.route.chain.total + 1e-9);
+    expect(cut.value.stats.proofCut).toBe(full.value.stats.provedPlans > 0);
   });
 
   it('names the cell of a design the planner refuses, and stores nothing for it', async () => {

@@ -40,6 +40,13 @@ export interface RunOptions {
   readonly prove: boolean;
   readonly onProgress?: (done: number, total: number) => void;
   readonly metric?: LinkMetric;
+  /**
+   * Wall time the proving rounds may start within (ms from the start of the run); a round under way finishes, no new
+   * one starts. The answer is then the best chain found with its lower bound (not proven least); the pairs proved are
+   * kept, so the next plan over these designs starts further on. Default: no limit.
+   */
+  readonly proveWithinMs?: number;
+  readonly clock?: () => number;
 }
 
 /** Counts of what a run did, for logs and the benchmark. */
@@ -47,6 +54,8 @@ export interface RunStats {
   readonly heuristicPlans: number;
   readonly provedPlans: number;
   readonly cachedDesigns: number;
+  /** True when proving stopped at `proveWithinMs` with pairs still to prove. */
+  readonly proofCut: boolean;
 }
 
 export async function runQuiltPlan(
@@ -54,6 +63,8 @@ export async function runQuiltPlan(
   designs: readonly RunDesign[],
   options: RunOptions,
 ): Promise<Result<{ route: QuiltRoute; stats: RunStats }, QuiltRouteProblem>> {
+  const clock = options.clock ?? (() => performance.now());
+  const started = clock();
   const byId = new Map(designs.map((d) => [d.id, { ...d, design: d.shape, revision: revisionOf(d) }]));
   const checked = checkQuiltDesigns(quilt, byId);
   if (!checked.ok) return checked;
@@ -107,7 +118,8 @@ export async function runQuiltPlan(
   };
   let proved = 0;
   let round = pairsToProve(quilt, order, known, metric);
-  while (options.prove && round.pairs.length > 0) {
+  const inTime = (): boolean => options.proveWithinMs === undefined || clock() - started < options.proveWithinMs;
+  while (options.prove && round.pairs.length > 0 && inTime()) {
     total += round.pairs.length;
     options.onProgress?.(done, total);
     const planned = await Promise.all(
@@ -128,7 +140,8 @@ export async function runQuiltPlan(
     round = pairsToProve(quilt, order, known, metric);
   }
   const route = finishQuiltRoute(quilt, order, byId, cache, metric, round.bound);
-  return ok({ route, stats: { heuristicPlans: PLANS_PER_DESIGN * missing.length, provedPlans: proved, cachedDesigns: used.length - missing.length } });
+  const proofCut = options.prove && round.pairs.length > 0;
+  return ok({ route, stats: { heuristicPlans: PLANS_PER_DESIGN * missing.length, provedPlans: proved, cachedDesigns: used.length - missing.length, proofCut } });
 }
 
 /**

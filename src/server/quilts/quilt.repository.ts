@@ -90,3 +90,9 @@ export async function liveOwnedDesignShapes(db: Db, ownerId: string, ids: readon
 export async function findLiveQuilt(db: Db, id: string): Promise<QuiltRow | undefined> {
   return db.selectFrom('quilt').selectAll().where('id', '=', id).where('deleted_at', 'is', null).executeTakeFirst();
 }
+
+/** Versions of the owner's live designs among these ids (ids must be uuids); reads no drawing, so it stays cheap. */
+export async function liveOwnedDesignVersions(db: Db, ownerId: string, ids: readonly string[]): Promise<{ id: string; version: number }[]> {
+  if (ids.length === 0) return [];
+  return db.selectFrom('design').select(['id', 'version']).where('owner_id', '=', ownerId).where('deleted_at', 'is', null).where('id', 'in', [...ids]).execute();
+}

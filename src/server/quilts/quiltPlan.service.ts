@@ -1,6 +1,6 @@
 // Planning a quilt's chained route, as an app instance sees it. When every placed design's corner-pair table is in
-// PostgreSQL (and no pair the chain uses still wants the exact search), the plan is the dynamic programme alone and
-// is answered at once, on the request thread (milliseconds for 6 × 8). Otherwise a job goes on the queue
+// PostgreSQL, the plan is the dynamic programme alone and is answered at once, on the request thread (milliseconds
+// for 6 × 8); a quilt version planned before answers with its stored plan. Otherwise a job goes on the queue
 // (planQueue.ts) for a planning worker process (src/server/jobs/planWorker.ts), and the answer is the job: its
 // state and progress live in quilt_plan_job, so any app instance can answer a poll. One job per quilt version and
 // inputs: asking again while it runs answers the same job. An account may have PLAN_JOBS_PER_ACCOUNT jobs open.
@@ -13,11 +13,14 @@ import { quiltPlanSchema, type QuiltPlan, type QuiltPlanJob } from '@shared/cont
 import type { Quilt } from '@shared/quilt/quilt.schema.ts';
 import type { QuiltRouteProblem } from '@shared/quilt/quiltRoute.ts';
 import { err, ok, type Result } from '@shared/result.ts';
-import { inputsKey, placedDesignShapes, postgresCornerCostStore, QUILT_JOB_PROVES } from '../jobs/planInputs.ts';
+import { inputsKey, placedDesignShapes, placedDesignVersions, postgresCornerCostStore } from '../jobs/planInputs.ts';
 import { queueJobState, sendPlanQuiltJob } from '../jobs/planQueue.ts';
 import { planFromStoredTables } from '../jobs/quiltPlanRun.ts';
 import { countOpenPlanJobs, failPlanJob, findOwnedPlanJob, findPlanJobByInputs, insertPlanJob, requeuePlanJob, setPlanJobQueueId } from '../jobs/quiltPlanJob.repository.ts';
 import { quiltPlanOf } from './quiltPlanAnswer.ts';
+
+/** A queued row with no queue job this long after it was made was never sent (its request's instance stopped). */
+const UNSENT_AFTER_MS = 30_000;
 
 /** Whole-quilt plans one account may have queued or running at once; one more is 429. */
 export const PLAN_JOBS_PER_ACCOUNT = 2;
@@ -37,17 +40,25 @@ export async function requestQuiltPlan(
   quilt: { id: string; version: number; map: Quilt },
 ): Promise<Result<QuiltPlanOutcome, QuiltPlanFailure>> {
   if (!quilt.map.placements.some((row) => row.some((p) => p !== null))) return err({ kind: 'empty' });
+  const key = inputsKey(await placedDesignVersions(db, ownerId, quilt.map));
+  // This quilt version over these design versions planned before: its stored plan (one row, no planning at all).
+  const existing = await findPlanJobByInputs(db, quilt.id, quilt.version, key);
+  const stored = existing ? planOfRow(existing) : null;
+  if (stored) return ok({ kind: 'planned', plan: stored });
+  // Else, when every placed design's table is stored, the dynamic programme over them: the least total over the
+  // stored costs (pairs proved by earlier jobs included), with its lower bound; `proven` says whether it is least.
   const designs = await placedDesignShapes(db, ownerId, quilt.map);
   const tables = await postgresCornerCostStore(db).load(designs);
-  const cached = planFromStoredTables(quilt.map, designs, tables, QUILT_JOB_PROVES);
+  const cached = planFromStoredTables(quilt.map, designs, tables, false);
   if (!cached.ok) return err({ kind: 'problem', problem: cached.error });
   if (cached.value) return ok({ kind: 'planned', plan: quiltPlanOf(cached.value) });
 
-  const key = inputsKey(designs);
-  const existing = await findPlanJobByInputs(db, quilt.id, quilt.version, key);
   if (existing && existing.state !== 'failed') {
-    const plan = planOfRow(existing);
-    return ok(plan ? { kind: 'planned', plan } : { kind: 'queued', job: jobOfRow(existing) });
+    // A row whose queue job was never sent (the instance stopped between the two writes): send it now.
+    if (existing.state === 'queued' && existing.queue_job_id === null && Date.now() - existing.created_at.getTime() > UNSENT_AFTER_MS) {
+      await setPlanJobQueueId(db, existing.id, await sendPlanQuiltJob(await queue(), { planJobId: existing.id }));
+    }
+    return ok({ kind: 'queued', job: jobOfRow(existing) });
   }
   const open = await countOpenPlanJobs(db, ownerId);
   if (open >= PLAN_JOBS_PER_ACCOUNT) return err({ kind: 'too-many', open });

@@ -3,13 +3,19 @@
 import type { DesignSummary } from '../contract/figures.ts';
 import { bindingAllowanceOf, type Quilt } from './quilt.schema.ts';
 import { planQuiltBudget, type BlockFigures, type QuiltBudget } from './quiltBudget.ts';
-import { planTrim, type TrimAssumption } from './trim.ts';
+import { planTrim, type BlockTrim, type TrimAssumption } from './trim.ts';
 import { buildTrimTable, type TrimTableRow } from './trimTable.ts';
 
 /** The quilt-as-you-go trim table, or the reason there is none (e.g. a margin too small for the shrinkage). */
 export function trimTableOf(quilt: Quilt): { rows: TrimTableRow[]; assumptions: readonly TrimAssumption[] } | { problem: string } {
   const plan = planTrim(quilt, bindingAllowanceOf(quilt), quilt.trim);
   return plan.ok ? { rows: buildTrimTable(plan.value), assumptions: plan.value.assumptions } : { problem: plan.error.message };
+}
+
+/** Each placed block's trim by its position (for drawing on the map), or [] when the trim plan has a problem. */
+export function trimBlocksOf(quilt: Quilt): readonly BlockTrim[] {
+  const plan = planTrim(quilt, bindingAllowanceOf(quilt), quilt.trim);
+  return plan.ok ? plan.value.blocks : [];
 }
 
 /**

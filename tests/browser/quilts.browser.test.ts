@@ -57,7 +57,23 @@ describe('a quilt map', () => {
     expect(await cell.locator('img').getAttribute('data-rotation')).toBe('90');
     expect(await page.getByTestId('finished-size').textContent()).toBe('32 × 32 in');
 
-    // The route across the saved quilt, planned in the engine's worker pool: one block placed, so one step.
+    // The trim plan on the map: one mark per row of the trim table; in a 2 × 2 quilt every block is a corner block,
+    // its top and left sides facing the border (solid rule), its right and bottom a joining seam (dashed).
+    await page.getByLabel(/Show the quilt-as-you-go trim on the map/).check();
+    const marks = page.getByTestId('trim-overlay').locator('[data-trim-cell]');
+    await expect.poll(() => marks.count()).toBe(await page.getByRole('region', { name: /Trim plan table/ }).locator('tbody tr').count());
+    const first = page.locator('[data-trim-cell="0-0"]');
+    expect(await first.getAttribute('data-position')).toBe('corner');
+    expect(await first.locator('[data-faces]').evaluateAll((els) => els.map((e) => e.getAttribute('data-faces')))).toEqual(['outer', 'inner', 'inner', 'outer']);
+    for (const size of WIDTHS) {
+      await page.setViewportSize(size);
+      expect(await elementsWiderThanViewport(page), `${size.name}: wider than the viewport`).toEqual([]);
+      await screenshot(page, `quilt-trim-map-${size.name}`);
+    }
+    await page.setViewportSize(WIDTHS[0]);
+    await page.getByLabel(/Show the quilt-as-you-go trim on the map/).uncheck();
+
+    // The route across the saved quilt, planned by the planning worker: one block placed, so one step.
     await page.getByRole('button', { name: 'Plan the route across the quilt' }).click();
     const route = page.getByTestId('quilt-route');
     await route.waitFor({ timeout: 30_000 });

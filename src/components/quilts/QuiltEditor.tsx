@@ -23,6 +23,7 @@ import { DragGhost } from './DragGhost.tsx';
 import { cellKey, QuiltMap } from './QuiltMap.tsx';
 import { useBlockGesture } from './useBlockGesture.ts';
 import { ChainRouteOverlay } from './ChainRouteOverlay.tsx';
+import { TrimOverlay } from './TrimOverlay.tsx';
 import { RoutePlayer, useRoutePlayback } from './RoutePlayer.tsx';
 import { buildChainOverview } from '@shared/quilt/chainOverview.ts';
 import type { QuiltPlanAnswer } from '@shared/contract/quiltPlan.ts';
@@ -90,6 +91,7 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
   );
   const { gesture, dispatch } = useBlockGesture(onDrop, setPicked);
   const [route, setRoute] = useState<QuiltPlanAnswer | null>(null);
+  const [showTrim, setShowTrim] = useState(false);
   // The route is of the saved quilt: it is drawn only while the map on screen is that save.
   const routeSteps = route && record && !dirty && route.quiltVersion === record.version ? route.plan.steps : null;
   const legs = useMemo(() => (quilt && routeSteps ? buildChainOverview(quilt, routeSteps, quilt.linkMetric) : []), [quilt, routeSteps]);
@@ -147,8 +149,17 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           orderNumbers={orderNumbers}
           onCellClick={(c) => dispatch({ kind: 'cell', cell: c })}
           onCellPointerDown={(c, e) => e.button === 0 && dispatch({ kind: 'pointer-down', carried: { kind: 'cell', cell: c }, at: { x: e.clientX, y: e.clientY } })}
-          overlay={routeSteps ? <ChainRouteOverlay quilt={quilt} legs={legs} metric={quilt.linkMetric} frame={player.frame} /> : undefined}
+          overlay={
+            <>
+              {showTrim && <TrimOverlay quilt={quilt} viewerUnits={viewerUnits} />}
+              {routeSteps && <ChainRouteOverlay quilt={quilt} legs={legs} metric={quilt.linkMetric} frame={player.frame} />}
+            </>
+          }
         />
+        <label className="mt-2 flex items-center gap-2 text-sm">
+          <input type="checkbox" checked={showTrim} onChange={(e) => setShowTrim(e.target.checked)} />
+          Show the quilt-as-you-go trim on the map (how much comes off each side; solid rule: border side, dashed: joining seam)
+        </label>
         {routeSteps ? (
           <RoutePlayer legs={legs} player={player} corners={routeSteps} />
         ) : (

@@ -64,6 +64,18 @@ describe('a quilt map', () => {
     await expect.poll(() => marks.count()).toBe(await page.getByRole('region', { name: /Trim plan table/ }).locator('tbody tr').count());
     const first = page.locator('[data-trim-cell="0-0"]');
     expect(await first.getAttribute('data-position')).toBe('corner');
+    // Drawn above the blocks (the picked block included), not hidden under them: the topmost element at the
+    // position label's centre belongs to the trim layer.
+    // (The layer lets clicks through to the blocks, so hit testing skips it: it is made hittable for this look.)
+    const onTop = await first.getByText('corner block').evaluate((label) => {
+      const layer = label.closest<HTMLElement>('[data-testid="trim-overlay"]')!;
+      layer.style.pointerEvents = 'auto';
+      const r = label.getBoundingClientRect();
+      const hit = label.ownerDocument.elementFromPoint(r.x + r.width / 2, r.y + r.height / 2);
+      layer.style.pointerEvents = '';
+      return hit !== null && layer.contains(hit);
+    });
+    expect(onTop, 'the trim marks are drawn on top of the map').toBe(true);
     expect(await first.locator('[data-faces]').evaluateAll((els) => els.map((e) => e.getAttribute('data-faces')))).toEqual(['outer', 'inner', 'inner', 'outer']);
     for (const size of WIDTHS) {
       await page.setViewportSize(size);

@@ -25,7 +25,7 @@ export function TrimOverlay({ quilt, viewerUnits }: { readonly quilt: Quilt; rea
   const size = finishedSize(quilt);
   const blocks = trimBlocksOf(quilt);
   return (
-    <div aria-hidden="true" data-testid="trim-overlay" className="pointer-events-none absolute inset-0">
+    <div aria-hidden="true" data-testid="trim-overlay" className="pointer-events-none absolute inset-0 z-20">
       {blocks.map((b) => {
         const r = blockRect(quilt, b.cell);
         return (

@@ -23,6 +23,7 @@ import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } f
 import { findFreePort, waitForHttp } from '../scripts/lib/ports.mjs';
 import { buildApp, runTs, serveApp, startPlanWorkerProcess } from '../scripts/lib/app.mjs';
 import { startMailSink } from '../scripts/lib/mailSink.mjs';
+import { startS3Fake } from '../scripts/lib/s3Fake.mjs';
 
 const RUNS = Number(process.env['BENCH_RUNS'] ?? 5) * 4;
 const PASSWORD = 'quilting-is-fun-42';
@@ -129,6 +130,10 @@ async function main(): Promise<void> {
     runTs('db/migrate.ts', env);
     const mail = await startMailSink({ dir: mailDir });
     cleanups.push(() => mail.close());
+    // The object store's fake too, so the app's hourly photo sweep finds its bucket (as under npm start).
+    const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
+    cleanups.push(() => s3.close());
+    Object.assign(env, s3.env);
     buildApp();
     const appPort = await findFreePort();
     const base = `http://127.0.0.1:${appPort}`;

@@ -3,6 +3,8 @@
 // Sources: Letter is 612 × 792 pt (8.5 × 11 in, ANSI/ASME Y14.1), A4 is 595.28 × 841.89 pt (210 × 297 mm, ISO 216),
 // one PDF unit is 1/72 in (ISO 32000-1 §8.3.2.3); the step list and the budget are compared with what the shared
 // walkthrough and thread-budget code give for the same saved route (the screens' own words).
+import { quiltPlanAnswerSchema, quiltPlanJobAnswerSchema, quiltPlanQueuedSchema, type QuiltPlan } from '@shared/contract/quiltPlan.ts';
+import { chainStepWords, chainSummaryWords } from '@shared/quilt/chainWords.ts';
 import { execFileSync, spawnSync } from 'node:child_process';
 import { mkdtempSync, readFileSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -238,6 +240,37 @@ describe('a quilt’s printed plan', () => {
     expect(text).toContain('Rotary cutter: When trimming, cut away from yourself');
     expect((await stranger.client.get(`/api/quilts/${made.body.quilt.id}/plan.pdf`)).status).toBe(404);
     expect((await owner.client.get(`/api/quilts/${made.body.quilt.id}/plan.pdf?layout=x`)).status).toBe(400);
+    // Printing makes no plan of its own: before the route across the quilt is planned the page says so.
+    expect(text).toContain('Quilted in one piece: the route across the quilt');
+    expect(text).toContain('Not planned yet');
+  });
+
+  it('prints the route across the quilt once it is planned: each block’s start and end corner, as the quilt page says', async () => {
+    const made = await owner.client.post('/api/quilts', {
+      title: 'Printed chain',
+      quilt: { version: 1, units: 'in', rows: 1, columns: 2, block: { width: 6, height: 4 }, sashing: 1, placements: [[{ designId: smallId }, { designId: smallId, mirror: true }]] },
+    });
+    expect(made.status, made.text).toBe(201);
+    const id = made.body.quilt.id as string;
+    let plan: QuiltPlan | null = null;
+    const asked = await owner.client.post(`/api/quilts/${id}/plan`);
+    if (asked.status === 200) plan = quiltPlanAnswerSchema.parse(asked.body).plan;
+    else {
+      expect(asked.status, asked.text).toBe(202);
+      const jobId = quiltPlanQueuedSchema.parse(asked.body).job.id;
+      for (let i = 0; i < 300 && !plan; i++) {
+        const polled = quiltPlanJobAnswerSchema.parse((await owner.client.get(`/api/quilts/${id}/plan-jobs/${jobId}`)).body);
+        expect(polled.job.state).not.toBe('failed');
+        plan = polled.plan;
+        if (!plan) await new Promise((r) => setTimeout(r, 200));
+      }
+    }
+    expect(plan, 'the planning worker finished').not.toBeNull();
+    const text = words((await getPdf(owner.client, `/api/quilts/${id}/plan.pdf`)).file);
+    expect(text).toContain('Quilted in one piece: the route across the quilt');
+    expect(text).not.toContain('Not planned yet');
+    expect(text).toContain(chainSummaryWords(plan!, 'in'));
+    plan!.steps.forEach((_, i) => expect(text).toContain(`${i + 1}. ${chainStepWords(plan!, i, 'in')}`));
   });
 });
 

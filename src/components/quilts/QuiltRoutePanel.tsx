@@ -2,10 +2,10 @@ import { useEffect, useState } from 'react';
 import type { Units } from '@shared/design/design.schema.ts';
 import { quiltPlanAnswerSchema, quiltPlanJobAnswerSchema, quiltPlanQueuedSchema, type QuiltPlan, type QuiltPlanAnswer, type QuiltPlanJob } from '@shared/contract/quiltPlan.ts';
 import { formatLength, formatThread } from '@shared/units/units.ts';
+import { chainStepWords } from '@shared/quilt/chainWords.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { QuiltPlanProgress } from './QuiltPlanProgress.tsx';
 
-const CORNER_WORDS = ['top left', 'top right', 'bottom right', 'bottom left'] as const;
 /** How often the page asks how the planning worker is getting on (ms). */
 const POLL_MS = 500;
 
@@ -98,11 +98,8 @@ export function QuiltRoutePanel({ quiltId, version, dirty, viewerUnits, onPlanne
               {state.version !== version && ' This plan is of an earlier save.'}
             </p>
             <ol className="mt-2 ml-5 list-decimal text-sm">
-              {state.plan.steps.map((s) => (
-                <li key={`${s.cell.row}-${s.cell.column}`}>
-                  Row {s.cell.row + 1}, column {s.cell.column + 1}: start at the {CORNER_WORDS[s.entry]} corner, end at the {CORNER_WORDS[s.exit]}
-                  {s.linkBefore > 0 ? ` (travel ${len(s.linkBefore, state.plan.units)} from the last block)` : ''}.
-                </li>
+              {state.plan.steps.map((s, i) => (
+                <li key={`${s.cell.row}-${s.cell.column}`}>{chainStepWords(state.plan, i, viewerUnits)}</li>
               ))}
             </ol>
           </div>

@@ -9,6 +9,8 @@ import type { Point } from '@shared/geometry/point.ts';
 import type { QuiltBudget } from '@shared/quilt/quiltBudget.ts';
 import type { Quilt } from '@shared/quilt/quilt.schema.ts';
 import type { TrimAssumption } from '@shared/quilt/trim.ts';
+import type { QuiltPlan } from '@shared/contract/quiltPlan.ts';
+import { chainStepWords, chainSummaryWords } from '@shared/quilt/chainWords.ts';
 import type { TrimTableRow } from '@shared/quilt/trimTable.ts';
 import { bordersWidth, finishedSize } from '@shared/quilt/finishedSize.ts';
 import { describeAssumption, sourceKind } from '@shared/print/assumptionWords.ts';
@@ -31,6 +33,8 @@ export interface QuiltSheet {
   readonly designTitles: ReadonlyMap<string, string>;
   readonly trim: { readonly rows: readonly TrimTableRow[]; readonly assumptions: readonly TrimAssumption[] } | { readonly problem: string };
   readonly budget: QuiltBudget | null;
+  /** The chained route when the top is quilted in one piece, if it has been planned (null: not yet). */
+  readonly chain?: QuiltPlan | null;
   /** Placed blocks without planned figures (the budget waits for them). */
   readonly missing: number;
 }
@@ -231,6 +235,16 @@ async function writeQuiltPages(w: Writer, sheet: QuiltSheet, between: () => Prom
       ['Stitched', w.len(budget.stitchLength)],
       ['Travel', w.len(budget.travelLength)],
     ]);
+  }
+
+  await between();
+  w.heading('Quilted in one piece: the route across the quilt');
+  if (sheet.chain) {
+    const chain = sheet.chain;
+    w.text(`When the whole top is quilted at once, the thread runs on from block to block: ${chainSummaryWords(chain, w.units)}`, { size: 10, x: w.area.x });
+    chain.steps.forEach((_, i) => w.text(`${i + 1}. ${chainStepWords(chain, i, w.units)}`, { size: 9.5, x: w.area.x }));
+  } else {
+    w.text('Not planned yet: plan the route across the quilt on its page, then print again to have each block’s start and end corner here.', { size: 10, x: w.area.x });
   }
 
   await between();

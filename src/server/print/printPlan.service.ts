@@ -16,6 +16,7 @@ import { findDesignRoute, findOwnedDesign, type DesignRecordRow } from '../desig
 import { toSavedRouteJson, currentSummaryOf } from '../designs/designRecord.ts';
 import { designPayloadOf, planDesignOnServer, type EngineFailure } from '../designs/designRoute.service.ts';
 import { quiltOf } from '../quilts/quilt.service.ts';
+import { storedQuiltPlan } from '../quilts/quiltPlan.service.ts';
 import type { PrintPlan } from './planPdf.ts';
 import { assembleQuiltPlan, placedDesignIds, type QuiltBlockInput } from './quiltPrintPlan.ts';
 
@@ -92,5 +93,7 @@ export async function quiltPrintPlan(db: Kysely<Database>, row: QuiltRow, viewer
     if (!r.ok) return r;
     designs.set(id, { title: d.title, notes: d.notes, design: storedDesign(d), summary: currentSummaryOf(d), ...r.value });
   }
-  return ok(assembleQuiltPlan(row.title, stored, designs, viewer.units, layout));
+  // The chained route when it is known without planning (planned before, or every block's corner costs stored).
+  const chain = await storedQuiltPlan(db, viewer.id, { id: row.id, version: row.version, map: stored });
+  return ok(assembleQuiltPlan(row.title, stored, designs, viewer.units, layout, chain));
 }

@@ -10,6 +10,7 @@ import type { Quilt } from '@shared/quilt/quilt.schema.ts';
 import { budgetOf, trimTableOf } from '@shared/quilt/quiltFigures.ts';
 import type { ThreadEnd } from '@shared/route/threadEnds.ts';
 import type { RouteStrokeInput } from '@shared/walkthrough/walkthrough.types.ts';
+import type { QuiltPlan } from '@shared/contract/quiltPlan.ts';
 import type { PrintPlan } from './planPdf.ts';
 
 /** One placed design as the plan needs it: its drawing, route (design units) and stored figures. */
@@ -32,7 +33,8 @@ export function placedDesignIds(quilt: Quilt): string[] {
   return ids;
 }
 
-export function assembleQuiltPlan(title: string, stored: Quilt, designs: ReadonlyMap<string, QuiltBlockInput>, units: Units, layout: PrintLayout): PrintPlan {
+/** `chain`: the quilt's chained route (quilted in one piece) when it is known, printed after the budget. */
+export function assembleQuiltPlan(title: string, stored: Quilt, designs: ReadonlyMap<string, QuiltBlockInput>, units: Units, layout: PrintLayout, chain: QuiltPlan | null = null): PrintPlan {
   const quilt = convertQuilt(stored, units);
   const { budget, missing } = budgetOf(quilt, new Map([...designs].map(([id, d]) => [id, d.summary])));
   const blocks: BlockSheet[] = [];
@@ -62,7 +64,7 @@ export function assembleQuiltPlan(title: string, stored: Quilt, designs: Readonl
     title,
     viewerUnits: units,
     layout,
-    quilt: { title, quilt, designTitles: new Map([...designs].map(([id, d]) => [id, d.title])), trim: trimTableOf(quilt), budget, missing },
+    quilt: { title, quilt, designTitles: new Map([...designs].map(([id, d]) => [id, d.title])), trim: trimTableOf(quilt), budget, missing, chain },
     blocks,
   };
 }

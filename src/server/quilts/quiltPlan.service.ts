@@ -40,18 +40,10 @@ export async function requestQuiltPlan(
   quilt: { id: string; version: number; map: Quilt },
 ): Promise<Result<QuiltPlanOutcome, QuiltPlanFailure>> {
   if (!quilt.map.placements.some((row) => row.some((p) => p !== null))) return err({ kind: 'empty' });
-  const key = inputsKey(await placedDesignVersions(db, ownerId, quilt.map));
-  // This quilt version over these design versions planned before: its stored plan (one row, no planning at all).
-  const existing = await findPlanJobByInputs(db, quilt.id, quilt.version, key);
-  const stored = existing ? planOfRow(existing) : null;
-  if (stored) return ok({ kind: 'planned', plan: stored });
-  // Else, when every placed design's table is stored, the dynamic programme over them: the least total over the
-  // stored costs (pairs proved by earlier jobs included), with its lower bound; `proven` says whether it is least.
-  const designs = await placedDesignShapes(db, ownerId, quilt.map);
-  const tables = await postgresCornerCostStore(db).load(designs);
-  const cached = planFromStoredTables(quilt.map, designs, tables, false);
-  if (!cached.ok) return err({ kind: 'problem', problem: cached.error });
-  if (cached.value) return ok({ kind: 'planned', plan: quiltPlanOf(cached.value) });
+  const known = await knownQuiltPlan(db, ownerId, quilt);
+  if (!known.ok) return known;
+  const { key, existing, plan } = known.value;
+  if (plan) return ok({ kind: 'planned', plan });
 
   if (existing && existing.state !== 'failed') {
     // A row whose queue job was never sent (the instance stopped between the two writes): send it now.
@@ -68,6 +60,34 @@ export async function requestQuiltPlan(
   const queueJobId = await sendPlanQuiltJob(await queue(), { planJobId: row.id });
   await setPlanJobQueueId(db, row.id, queueJobId);
   return ok({ kind: 'queued', job: jobOfRow(row) });
+}
+
+/**
+ * The plan of this quilt version that needs no worker: its stored plan (this version over these design versions,
+ * planned before), else the dynamic programme over the stored corner-pair tables when every placed design has one
+ * (pairs proved by earlier jobs included; `proven` says whether it is least); else null. Makes no job.
+ */
+async function knownQuiltPlan(
+  db: Kysely<Database>,
+  ownerId: string,
+  quilt: { id: string; version: number; map: Quilt },
+): Promise<Result<{ key: string; existing: QuiltPlanJobRow | undefined; plan: QuiltPlan | null }, QuiltPlanFailure>> {
+  const key = inputsKey(await placedDesignVersions(db, ownerId, quilt.map));
+  const existing = await findPlanJobByInputs(db, quilt.id, quilt.version, key);
+  const stored = existing ? planOfRow(existing) : null;
+  if (stored) return ok({ key, existing, plan: stored });
+  const designs = await placedDesignShapes(db, ownerId, quilt.map);
+  const tables = await postgresCornerCostStore(db).load(designs);
+  const cached = planFromStoredTables(quilt.map, designs, tables, false);
+  if (!cached.ok) return err({ kind: 'problem', problem: cached.error });
+  return ok({ key, existing, plan: cached.value ? quiltPlanOf(cached.value) : null });
+}
+
+/** The chained route of the saved quilt when it is known without planning (for the printed plan), else null. */
+export async function storedQuiltPlan(db: Kysely<Database>, ownerId: string, quilt: { id: string; version: number; map: Quilt }): Promise<QuiltPlan | null> {
+  if (!quilt.map.placements.some((row) => row.some((p) => p !== null))) return null;
+  const known = await knownQuiltPlan(db, ownerId, quilt);
+  return known.ok ? known.value.plan : null;
 }
 
 /**

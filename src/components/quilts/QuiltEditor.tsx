@@ -8,6 +8,7 @@ import type { Quilt } from '@shared/quilt/quilt.schema.ts';
 import { finishedSize } from '@shared/quilt/finishedSize.ts';
 import { formatQuiltSize } from '@shared/quilt/formatLength.ts';
 import type { TRIM_SOURCES } from '@shared/quilt/trim.ts';
+import { convertQuilt } from '@shared/quilt/convertQuilt.ts';
 import { formatLength, formatThread } from '@shared/units/units.ts';
 import { apiRequest } from '../designs/apiClient.ts';
 import { PlanDownload } from '../print/PlanDownload.tsx';
@@ -129,7 +130,8 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
   const heldDesign = gesture.kind === 'holding' && gesture.carried.kind === 'design' ? byId.get(gesture.carried.designId) : undefined;
   const heldWords = heldDesign ? `Placing “${heldDesign.title}”: pick a block on the map (Escape to stop).` : '';
   const cell = quilt.placements[picked.row]?.[picked.column] ?? null;
-  const trim = trimTableOf(quilt);
+  // The trim plan in the viewer's units (as the printed plan has it): the quilt redrawn in them, then planned.
+  const trim = trimTableOf(convertQuilt(quilt, viewerUnits));
   const { budget, missing } = budgetOf(quilt, summaries);
   const len = (v: number) => formatLength(v, quilt.units, viewerUnits);
 
@@ -267,10 +269,10 @@ export function QuiltEditor({ quiltId, viewerUnits }: QuiltEditorProps) {
           <p className="mt-1">Place a design to see how each block is trimmed.</p>
         ) : (
           <>
-            <p className="mt-1 text-sm">Lengths in {quilt.units === 'in' ? 'inches' : 'centimetres'}, the quilt's own units. Settings in use:</p>
+            <p className="mt-1 text-sm">Lengths in {viewerUnits === 'in' ? 'inches' : 'centimetres'}. Settings in use:</p>
             <ul className="ml-5 list-disc text-sm">
               {trim.assumptions.map((a) => (
-                <li key={a.setting}>{TRIM_LABELS[a.setting]} {a.setting === 'shrinkage' ? `${a.value} %` : formatLength(a.value, quilt.units, quilt.units)} ({a.source === 'quilt' ? 'set for this quilt' : a.source})</li>
+                <li key={a.setting}>{TRIM_LABELS[a.setting]} {a.setting === 'shrinkage' ? `${a.value} %` : formatLength(a.value, viewerUnits, viewerUnits)} ({a.source === 'quilt' ? 'set for this quilt' : a.source})</li>
               ))}
             </ul>
             <div className="mt-2 overflow-x-auto" tabIndex={0} role="region" aria-label="Trim plan table (scrolls sideways)">

@@ -10,9 +10,7 @@
  * `npx tsx bench/cluster.bench.ts`; `npm run bench` runs it with the others. BENCH_LOAD_SECONDS sets each load
  * phase (default 20 s).
  */
-import { chmodSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
-import path from 'node:path';
 import type { ChildProcess } from 'node:child_process';
 import autocannon from 'autocannon';
 import { sql } from 'kysely';
@@ -22,13 +20,10 @@ import { buildPiecedLayout } from '@shared/layouts/piecedLayouts.ts';
 import { archRowsDesign, patchFillDesign, squareInSquareDesign } from '@shared/testing/multiPieceDesigns.ts';
 import { connectDatabase } from '@db/connect.ts';
 import { hashPassword } from '@server/auth/password.ts';
-import { ensurePostgres } from '../scripts/lib/system.mjs';
-import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from '../scripts/lib/postgres.mjs';
 import { findFreePort, waitForHttp } from '../scripts/lib/ports.mjs';
-import { buildApp, runTs, serveApp, startPlanWorkerProcess } from '../scripts/lib/app.mjs';
-import { startMailSink } from '../scripts/lib/mailSink.mjs';
+import { serveApp, startPlanWorkerProcess } from '../scripts/lib/app.mjs';
 import { startBalancer } from '../scripts/lib/balancer.mjs';
-import { startS3Fake } from '../scripts/lib/s3Fake.mjs';
+import { startBenchStack } from './benchStack.ts';
 
 const LOAD_SECONDS = Number(process.env['BENCH_LOAD_SECONDS'] ?? 20);
 const PASSWORD = 'quilting-is-fun-42';
@@ -82,36 +77,19 @@ const answers = (r: Result) =>
     .join(', ');
 
 async function main(): Promise<void> {
-  const pgBin = ensurePostgres();
-  const scratch = mkdtempSync('/tmp/threadway-bench-cluster-');
-  chmodSync(scratch, 0o755);
-  const cleanups: (() => unknown)[] = [];
+  const stack = await startBenchStack({ rateLimitScale: '1', name: 'cluster' });
+  const { env, cleanups } = stack;
   const stop = (c: ChildProcess) => () => c.kill('SIGTERM');
   try {
-    const pgPort = await findFreePort();
-    const pgDir = path.join(scratch, 'pg');
-    initCluster(pgBin, pgDir, pgPort, { fast: true });
-    startCluster(pgBin, pgDir);
-    cleanups.push(() => stopCluster(pgBin, pgDir, 'immediate'));
-    ensureDatabase(pgBin, pgPort, 'threadway');
-    const mailDir = path.join(scratch, 'mail');
-    mkdirSync(mailDir);
     const balancerPort = await findFreePort();
     const base = `http://127.0.0.1:${balancerPort}`;
-    const dbUrl = databaseUrl(pgPort, 'threadway');
-    const env: Record<string, string> = { DATABASE_URL: dbUrl, MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1', PUBLIC_ORIGIN: base, TRUSTED_PROXIES: '127.0.0.1' };
-    runTs('db/migrate.ts', env);
-    const mail = await startMailSink({ dir: mailDir });
-    cleanups.push(() => mail.close());
-    const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
-    cleanups.push(() => s3.close());
-    Object.assign(env, s3.env);
-    buildApp();
+    const dbUrl = stack.databaseUrl;
+    Object.assign(env, { PUBLIC_ORIGIN: base, TRUSTED_PROXIES: '127.0.0.1' });
     const upstreams: string[] = [];
     for (let i = 0; i < 2; i++) {
       const port = await findFreePort();
       upstreams.push(`http://127.0.0.1:${port}`);
-      cleanups.push(stop(serveApp({ port, env: { ...env, SMTP_PORT: String(mail.port) }, quiet: true })));
+      cleanups.push(stop(serveApp({ port, env: env, quiet: true })));
     }
     await Promise.all(upstreams.map((u) => waitForHttp(u)));
     const balancer = await startBalancer({ upstreams, port: balancerPort });
@@ -196,8 +174,7 @@ async function main(): Promise<void> {
     console.log(row(`${accepted} whole-quilt plans queued`, busy));
     console.log(`\nWhole-quilt plans: ${accepted} of ${quilts.length} accepted (202), ${doneDuringLoad} finished during the load phase, all ${accepted} finished ${Number.isFinite(drained) ? `${drained.toFixed(1)} s` : 'not within 10 min'} after they were asked for (${pairs.n ?? 0} corner-pair plans on 2 workers × 1 engine thread). Requests per instance: ${balancer.served.join(' / ')}.`);
   } finally {
-    for (const c of cleanups.reverse()) await c();
-    rmSync(scratch, { recursive: true, force: true });
+    await stack.close();
   }
 }
 

@@ -11,19 +11,14 @@
  * Targets (issue 15): cold under 10 s with a visible progress bar, cached re-plans under 100 ms.
  * Run alone: `npx tsx bench/quiltPlan.bench.ts`; PLAN_WORKER_THREADS sets the worker's engine threads (default: cores).
  */
-import { chmodSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
-import path from 'node:path';
 import { connectDatabase } from '@db/connect.ts';
 import { hashPassword } from '@server/auth/password.ts';
 import { filledBlockDesigns } from '@shared/testing/filledBlocks.ts';
 import { mulberry32 } from './generators.ts';
-import { ensurePostgres } from '../scripts/lib/system.mjs';
-import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from '../scripts/lib/postgres.mjs';
 import { findFreePort, waitForHttp } from '../scripts/lib/ports.mjs';
-import { buildApp, runTs, serveApp, startPlanWorkerProcess } from '../scripts/lib/app.mjs';
-import { startMailSink } from '../scripts/lib/mailSink.mjs';
-import { startS3Fake } from '../scripts/lib/s3Fake.mjs';
+import { serveApp, startPlanWorkerProcess } from '../scripts/lib/app.mjs';
+import { startBenchStack } from './benchStack.ts';
 
 const RUNS = Number(process.env['BENCH_RUNS'] ?? 5) * 4;
 const PASSWORD = 'quilting-is-fun-42';
@@ -113,38 +108,19 @@ async function summariesSettled(client: Client): Promise<void> {
 }
 
 async function main(): Promise<void> {
-  const pgBin = ensurePostgres();
-  const scratch = mkdtempSync('/tmp/threadway-bench-');
-  chmodSync(scratch, 0o755);
-  const cleanups: (() => unknown)[] = [];
+  const stack = await startBenchStack({ rateLimitScale: '1', name: 'quiltPlan' });
+  const { env, cleanups } = stack;
   try {
-    const pgPort = await findFreePort();
-    const pgDir = path.join(scratch, 'pg');
-    initCluster(pgBin, pgDir, pgPort, { fast: true });
-    startCluster(pgBin, pgDir);
-    cleanups.push(() => stopCluster(pgBin, pgDir, 'immediate'));
-    ensureDatabase(pgBin, pgPort, 'threadway');
-    const mailDir = path.join(scratch, 'mail');
-    mkdirSync(mailDir);
-    const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1' };
-    runTs('db/migrate.ts', env);
-    const mail = await startMailSink({ dir: mailDir });
-    cleanups.push(() => mail.close());
-    // The object store's fake too, so the app's hourly photo sweep finds its bucket (as under npm start).
-    const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
-    cleanups.push(() => s3.close());
-    Object.assign(env, s3.env);
-    buildApp();
     const appPort = await findFreePort();
     const base = `http://127.0.0.1:${appPort}`;
-    const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: base }, quiet: true });
+    const server = serveApp({ port: appPort, env: { ...env, PUBLIC_ORIGIN: base }, quiet: true });
     cleanups.push(() => server.kill('SIGTERM'));
     const threads = Number(process.env['PLAN_WORKER_THREADS'] ?? os.availableParallelism());
     const worker = startPlanWorkerProcess({ env, threads, quiet: true });
     cleanups.push(() => worker.kill('SIGTERM'));
     await waitForHttp(base);
 
-    const db = connectDatabase(env.DATABASE_URL, 1);
+    const db = connectDatabase(stack.databaseUrl, 1);
     await db.insertInto('account').values({ email: 'sampler@bench.test', display_name: 'Bench sampler', password_hash: await hashPassword(PASSWORD) }).execute();
     await db.destroy();
     const client = new Client(base);
@@ -222,8 +198,7 @@ async function main(): Promise<void> {
     console.log(`| one design saved again (its new version cold) | ${oneNew.status} → ${oneNew.state} | ${sec(oneNew.done)} s | ${oneNew.total} | ${gapWords(oneNew.gap)} |`);
     console.log(`\nLoad average after: ${os.loadavg().map((l) => l.toFixed(1)).join(' ')}`);
   } finally {
-    for (const c of cleanups.reverse()) await c();
-    rmSync(scratch, { recursive: true, force: true });
+    await stack.close();
   }
 }
 

@@ -8,10 +8,8 @@
  * Prints Markdown tables. Run alone: `npx tsx bench/reliability.bench.ts`; `npm run bench` runs it with the
  * others. BENCH_LOAD_SECONDS sets each load phase's length (default 20 s). Seeded (mulberry32), so runs compare.
  */
-import { chmodSync, mkdirSync, mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import { Worker } from 'node:worker_threads';
-import path from 'node:path';
 import autocannon from 'autocannon';
 import type { Design } from '@shared/design/design.schema.ts';
 import type { Point, Polyline } from '@shared/geometry/point.ts';
@@ -19,12 +17,9 @@ import { buildPiecedLayout } from '@shared/layouts/piecedLayouts.ts';
 import { connectDatabase } from '@db/connect.ts';
 import { hashPassword } from '@server/auth/password.ts';
 import { mulberry32 } from './generators.ts';
-import { ensurePostgres } from '../scripts/lib/system.mjs';
-import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from '../scripts/lib/postgres.mjs';
 import { findFreePort, waitForHttp } from '../scripts/lib/ports.mjs';
-import { buildApp, runTs, serveApp } from '../scripts/lib/app.mjs';
-import { startMailSink } from '../scripts/lib/mailSink.mjs';
-import { startS3Fake } from '../scripts/lib/s3Fake.mjs';
+import { serveApp } from '../scripts/lib/app.mjs';
+import { startBenchStack } from './benchStack.ts';
 
 const LOAD_SECONDS = Number(process.env['BENCH_LOAD_SECONDS'] ?? 20);
 const PASSWORD = 'quilting-is-fun-42';
@@ -242,36 +237,17 @@ async function signInDuringGuessing(base: string, victimEmail: string, bystander
 }
 
 async function main(): Promise<void> {
-  const pgBin = ensurePostgres();
-  const scratch = mkdtempSync('/tmp/threadway-bench-');
-  chmodSync(scratch, 0o755);
-  const cleanups: (() => unknown)[] = [];
+  const stack = await startBenchStack({ rateLimitScale: '1', name: 'reliability' });
+  const { env, cleanups } = stack;
   try {
-    const pgPort = await findFreePort();
-    const pgDir = path.join(scratch, 'pg');
-    initCluster(pgBin, pgDir, pgPort, { fast: true });
-    startCluster(pgBin, pgDir);
-    cleanups.push(() => stopCluster(pgBin, pgDir, 'immediate'));
-    ensureDatabase(pgBin, pgPort, 'threadway');
-    const mailDir = path.join(scratch, 'mail');
-    mkdirSync(mailDir);
-    const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '1' };
-    runTs('db/migrate.ts', env);
-    const mail = await startMailSink({ dir: mailDir });
-    cleanups.push(() => mail.close());
-    // The object store's fake too, so the app's hourly photo sweep finds its bucket (as under npm start).
-    const s3 = await startS3Fake({ dir: path.join(scratch, 's3') });
-    cleanups.push(() => s3.close());
-    Object.assign(env, s3.env);
-    buildApp();
     const appPort = await findFreePort();
     const base = `http://127.0.0.1:${appPort}`;
-    const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: base }, quiet: true });
+    const server = serveApp({ port: appPort, env: { ...env, PUBLIC_ORIGIN: base }, quiet: true });
     cleanups.push(() => server.kill('SIGTERM'));
     await waitForHttp(base);
 
     // Accounts straight into the database (as the demo seed does), so sign-up limits play no part.
-    const db = connectDatabase(env.DATABASE_URL, 1);
+    const db = connectDatabase(stack.databaseUrl, 1);
     const passwordHash = await hashPassword(PASSWORD);
     const names = [...Array.from({ length: 8 }, (_, i) => `checker${i + 1}`), 'heavy', 'flooder', 'victim', 'bystander'];
     for (const n of names) {
@@ -290,8 +266,7 @@ async function main(): Promise<void> {
     await signInDuringGuessing(base, 'victim@bench.test', 'bystander@bench.test');
     console.log(`\nLoad average after: ${os.loadavg().map((l) => l.toFixed(1)).join(' ')}`);
   } finally {
-    for (const c of cleanups.reverse()) await c();
-    rmSync(scratch, { recursive: true, force: true });
+    await stack.close();
   }
 }
 

@@ -10,7 +10,7 @@
  * BENCH_PROFILE=1 also prints the page's top self-time functions during pan/zoom (Chrome DevTools profiler);
  * BENCH_ROUND_TRIPS sets the number of check round trips (default 60).
  */
-import { chmodSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import { mkdtempSync, readFileSync, readdirSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium } from 'playwright-core';
@@ -18,11 +18,9 @@ import type { Design } from '@shared/design/design.schema.ts';
 import type { Point, Polyline } from '@shared/geometry/point.ts';
 import { buildPiecedLayout } from '@shared/layouts/piecedLayouts.ts';
 import { mulberry32 } from './generators.ts';
-import { ensurePostgres } from '../scripts/lib/system.mjs';
-import { databaseUrl, ensureDatabase, initCluster, startCluster, stopCluster } from '../scripts/lib/postgres.mjs';
 import { findFreePort, waitForHttp } from '../scripts/lib/ports.mjs';
-import { buildApp, runTs, serveApp } from '../scripts/lib/app.mjs';
-import { startMailSink } from '../scripts/lib/mailSink.mjs';
+import { serveApp } from '../scripts/lib/app.mjs';
+import { startBenchStack } from './benchStack.ts';
 
 const CHROMIUM_ARGS = ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 const STROKES = 5_000;
@@ -117,27 +115,12 @@ async function signUpToken(mailDir: string, email: string): Promise<string> {
 }
 
 async function main(): Promise<void> {
-  const pgBin = ensurePostgres();
-  const scratch = mkdtempSync('/tmp/threadway-bench-');
-  chmodSync(scratch, 0o755);
-  const cleanups: (() => unknown)[] = [];
+  const stack = await startBenchStack({ rateLimitScale: '100', name: 'workbench' });
+  const { env, cleanups, mailDir } = stack;
   try {
-    const pgPort = await findFreePort();
-    const pgDir = path.join(scratch, 'pg');
-    initCluster(pgBin, pgDir, pgPort, { fast: true });
-    startCluster(pgBin, pgDir);
-    cleanups.push(() => stopCluster(pgBin, pgDir, 'immediate'));
-    ensureDatabase(pgBin, pgPort, 'threadway');
-    const mailDir = path.join(scratch, 'mail');
-    mkdirSync(mailDir);
-    const env = { DATABASE_URL: databaseUrl(pgPort, 'threadway'), MAIL_CAPTURE_DIR: mailDir, RATE_LIMIT_SCALE: '100' };
-    runTs('db/migrate.ts', env);
-    const mail = await startMailSink({ dir: mailDir });
-    cleanups.push(() => mail.close());
-    buildApp();
     const appPort = await findFreePort();
     const base = `http://127.0.0.1:${appPort}`;
-    const server = serveApp({ port: appPort, env: { ...env, SMTP_PORT: String(mail.port), PUBLIC_ORIGIN: base }, quiet: true });
+    const server = serveApp({ port: appPort, env: { ...env, PUBLIC_ORIGIN: base }, quiet: true });
     cleanups.push(() => server.kill('SIGTERM'));
     await waitForHttp(base);
 
@@ -232,14 +215,7 @@ async function main(): Promise<void> {
     console.log(`| edit burst → saved and checked, 2 requests: PUT + POST check (${burst.twoRequests.length} rounds) | p50 ${percentile(burst.twoRequests, 50).toFixed(1)} ms, p95 ${percentile(burst.twoRequests, 95).toFixed(1)} ms | — |`);
     console.log(`| edit burst → saved and checked, 1 request: PUT ?check=1 (${burst.oneRequest.length} rounds) | p50 ${percentile(burst.oneRequest, 50).toFixed(1)} ms, p95 ${percentile(burst.oneRequest, 95).toFixed(1)} ms | p95 < 150 ms |`);
   } finally {
-    for (const c of cleanups.reverse()) {
-      try {
-        await c();
-      } catch (error) {
-        console.error('bench/workbench: cleanup failed:', error);
-      }
-    }
-    rmSync(scratch, { recursive: true, force: true });
+    await stack.close();
   }
 }
 

@@ -76,6 +76,9 @@ function openSession(highs: Highs, program: LinearProgram): MipSession {
         matrix: { format: 'csr', numRows: rows.lower.length, numCols: n, ...csrOf(rows) },
       });
     },
+    setBounds(lower: Float64Array, upper: Float64Array): void {
+      if (n > 0) model.changeColsBounds(all, finite(lower), finite(upper));
+    },
     solveRelaxation: (limit) => run(limit, false),
     solveInteger: (limit) => run(limit, true),
     dispose: () => model.dispose(),
@@ -101,5 +104,6 @@ function outcomeOf(highs: Highs, model: Model, code: number, integer: boolean): 
     bound = objective;
   }
   if (status === 'infeasible') bound = Infinity;
-  return { status, values, objective, bound, seconds };
+  const reducedCosts = !integer && status === 'optimal' && values ? Float64Array.from(model.getSolution().colDual) : null;
+  return { status, values, objective, bound, seconds, reducedCosts };
 }

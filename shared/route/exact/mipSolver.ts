@@ -40,12 +40,16 @@ export interface SolveOutcome {
   readonly bound: number;
   /** Solver wall time of this call, in seconds (measured by the solver). */
   readonly seconds: number;
+  /** Reduced cost of every column at an optimal linear relaxation (null for integer solves and other statuses). */
+  readonly reducedCosts: Float64Array | null;
 }
 
 /** One program kept in the solver between calls, so cuts can be added and the program solved again. */
 export interface MipSession {
   /** Appends rows over the existing columns. */
   addRows(rows: SparseRows): void;
+  /** Replaces the bounds of every column (the program's own bounds until first called). */
+  setBounds(lower: Float64Array, upper: Float64Array): void;
   /** Solves the linear relaxation (integrality ignored). */
   solveRelaxation(timeLimitSeconds: number): SolveOutcome;
   /** Solves the mixed-integer program. */

@@ -5,6 +5,7 @@ import type { RouteGroup } from '../routeGroups.ts';
 import { endCostAt, solverEndCostAt } from '../threadEnds.ts';
 import type { TravelGraph } from '../travelGraph.ts';
 import { searchRoute, type SearchResult } from './branchAndCut.ts';
+import { searchTree } from './treeSearch.ts';
 import type { Budget } from './budget.ts';
 import { ConnectivityCuts } from './connectivityCuts.ts';
 import type { MipSolver } from './mipSolver.ts';
@@ -67,7 +68,9 @@ export function planGroupExact(
   // A solver objective exceeds the cost-unit objective (times quantum) by at most 3·solverTie per thread end.
   const freeEnds = (start < 0 ? 1 : 0) + (end < 0 ? 1 : 0) + 2 * ends.extraStops;
   const slack = 3 * ends.costs.solverTie * freeEnds;
-  const found: SearchResult = searchRoute(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum);
+  const found: SearchResult = process.env.OLD_SEARCH
+    ? searchRoute(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum)
+    : searchTree(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum, (c) => c * travel.quantum + slack, upperCost);
   const stats: ExactStats = {
     pieces: reduced.pieceCount,
     keptVertices: reduced.kept.length,

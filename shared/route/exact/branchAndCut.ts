@@ -54,7 +54,6 @@ export function searchRoute(
     budget.charge(out.seconds);
     return out;
   };
-  const oddSeen = new Set<string>();
   // Linear relaxation with cut rounds until no cut is violated; returns false when the budget ran out first.
   const cutLoop = (): boolean => {
     for (let round = 0; round < MAX_LP_ROUNDS; round++, cutRounds++) {
@@ -64,7 +63,7 @@ export function searchRoute(
       lpBound = Math.max(lpBound, toCost(lp.bound));
       const builder = new RowBuilder();
       if (cuts.needed) cuts.separateFractional(lp.values, builder);
-      separateOddCuts(rpp, lp.values, oddSeen, builder);
+      separateOddCuts(rpp, lp.values, builder);
       if (builder.size === 0) return true;
       const rows = builder.build();
       cutCount += rows.lower.length;

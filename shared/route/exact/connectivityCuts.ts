@@ -17,7 +17,6 @@ export class ConnectivityCuts {
   readonly nodeCount: number;
   /** Support nodes that the route must join: pieces and fixed ends off the lines. */
   readonly targets: readonly number[];
-  private readonly seen = new Set<string>();
 
   constructor(
     reduced: ReducedGraph,
@@ -75,8 +74,9 @@ export class ConnectivityCuts {
       let inside = 0;
       for (const t of this.targets) inside += side[t]!;
       if (inside === 0 || inside === this.targets.length) continue;
-      // The flow counts the closing edge too; the cut's right-hand side is for the columns alone.
-      if (weight[v]! - this.closingAcross(side) < this.rhsOf(side) - EPS) this.addCut(rows, side);
+      // The flow counts the closing edge too; the cut's right-hand side is for the columns alone. The tree's cut is
+      // checked on the point itself: the value is the cut's own, not the flow's, so only violated cuts are added.
+      if (weight[v]! - this.closingAcross(side) < this.rhsOf(side) - EPS) this.addCut(rows, side, values);
     }
   }
 
@@ -107,19 +107,21 @@ export class ConnectivityCuts {
   }
 
   /**
-   * Adds x(δ(S)) + y(δ(S)) ≥ r for S = nodes marked in `side`, once per distinct S. The route crosses S at least twice
+   * Adds x(δ(S)) + y(δ(S)) ≥ r for S = nodes marked in `side`, once per distinct S and builder (S and its complement
+   * are one cut). A cut already in the program is never violated by its solutions, so only new cuts come here. The route crosses S at least twice
    * (closing edge included) and, by parity, x(δ(S)) + y(δ(S)) ≡ Σ_{v∈S} odd(v) (mod 2): so r is the least number
    * of that parity that is at least 2 − c(S), i.e. 2 or 3 without the closing edge across S, 2 or 1 with it.
    */
-  private addCut(rows: RowBuilder, side: Uint8Array): void {
-    const key = side.join('');
-    const complement = side.map((s) => 1 - s).join('');
-    if (this.seen.has(key) || this.seen.has(complement)) return;
-    this.seen.add(key);
+  private addCut(rows: RowBuilder, side: Uint8Array, values?: Float64Array): void {
+    // Key the side that does not hold D (the last node), so S and its complement share one key.
+    const key = `c${(side[this.nodeCount - 1] ? side.map((s) => 1 - s) : side).join('')}`;
+    if (rows.has(key)) return;
     const { colA, colB, edgeCols } = this.rpp;
     const cols: number[] = [];
     for (let c = 0; c < edgeCols; c++) if (side[this.nodeOf[colA[c]!]!] !== side[this.nodeOf[colB[c]!]!]) cols.push(c);
-    rows.add(cols, cols.map(() => 1), this.rhsOf(side), Infinity);
+    const rhs = this.rhsOf(side);
+    if (values && cols.reduce((sum, c) => sum + values[c]!, 0) >= rhs - EPS) return;
+    rows.add(cols, cols.map(() => 1), rhs, Infinity, key);
   }
 
   private closingAcross(side: Uint8Array): number {

@@ -76,6 +76,9 @@ function openSession(highs: Highs, program: LinearProgram): MipSession {
         matrix: { format: 'csr', numRows: rows.lower.length, numCols: n, ...csrOf(rows) },
       });
     },
+    deleteRows(indices: Int32Array): void {
+      if (indices.length > 0) model.deleteRows({ kind: 'set', indices });
+    },
     setBounds(lower: Float64Array, upper: Float64Array): void {
       if (n > 0) model.changeColsBounds(all, finite(lower), finite(upper));
     },
@@ -94,7 +97,8 @@ function outcomeOf(highs: Highs, model: Model, code: number, integer: boolean): 
   const status: SolveStatus = code === codes.optimal ? 'optimal' : code === codes.timeLimit ? 'time-limit' : code === codes.infeasible ? 'infeasible' : 'failed';
   const seconds = model.getRunTime();
   const hasPoint = Number(model.info.get('primal_solution_status')) === highs.constants.solutionStatus.feasible;
-  const values = hasPoint ? Float64Array.from(model.getSolution().colValue) : null;
+  const solution = hasPoint ? model.getSolution() : null;
+  const values = solution ? Float64Array.from(solution.colValue) : null;
   const objective = values ? model.getObjectiveValue() : Infinity;
   let bound = -Infinity;
   if (integer) {
@@ -104,6 +108,8 @@ function outcomeOf(highs: Highs, model: Model, code: number, integer: boolean): 
     bound = objective;
   }
   if (status === 'infeasible') bound = Infinity;
-  const reducedCosts = !integer && status === 'optimal' && values ? Float64Array.from(model.getSolution().colDual) : null;
-  return { status, values, objective, bound, seconds, reducedCosts };
+  const duals = !integer && status === 'optimal' && solution !== null;
+  const reducedCosts = duals ? Float64Array.from(solution.colDual) : null;
+  const rowValues = duals ? Float64Array.from(solution.rowValue) : null;
+  return { status, values, objective, bound, seconds, reducedCosts, rowValues };
 }

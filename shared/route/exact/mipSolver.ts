@@ -42,12 +42,16 @@ export interface SolveOutcome {
   readonly seconds: number;
   /** Reduced cost of every column at an optimal linear relaxation (null for integer solves and other statuses). */
   readonly reducedCosts: Float64Array | null;
+  /** Activity (left-hand side) of every row at an optimal linear relaxation (null otherwise). */
+  readonly rowValues: Float64Array | null;
 }
 
 /** One program kept in the solver between calls, so cuts can be added and the program solved again. */
 export interface MipSession {
   /** Appends rows over the existing columns. */
   addRows(rows: SparseRows): void;
+  /** Removes rows by index (strictly increasing); later rows move up to close the gaps. */
+  deleteRows(indices: Int32Array): void;
   /** Replaces the bounds of every column (the program's own bounds until first called). */
   setBounds(lower: Float64Array, upper: Float64Array): void;
   /** Solves the linear relaxation (integrality ignored). */

@@ -11,7 +11,7 @@ const EPS = 1e-6;
  * (Math. of Operations Research 7 (1982) 67–80; venue from memory): a violated odd cut, if any, is among the fundamental cuts of a
  * Gomory–Hu tree of the support graph, built here by Gusfield's n − 1 max-flows (SIAM J. Comput. 19 (1990) 143–155).
  */
-export function separateOddCuts(rpp: RppProgram, values: Float64Array, seen: Set<string>, rows: RowBuilder): void {
+export function separateOddCuts(rpp: RppProgram, values: Float64Array, rows: RowBuilder): void {
   const { colA, colB, edgeCols, odd } = rpp;
   const n = odd.length;
   if (!odd.includes(1)) return;
@@ -33,12 +33,14 @@ export function separateOddCuts(rpp: RppProgram, values: Float64Array, seen: Set
     let oddCount = 0;
     for (let u = 0; u < n; u++) if (inside[u]) oddCount += odd[u]!;
     if (oddCount % 2 === 0) continue;
-    const key = `o${inside.join('')}`;
-    if (seen.has(key)) continue;
-    seen.add(key);
+    // S and its complement are one cut (the complement of an odd set is odd too: T is even).
+    const key = `o${(inside[n - 1] ? inside.map((s) => 1 - s) : inside).join('')}`;
+    if (rows.has(key)) continue;
     const cols: number[] = [];
     for (let c = 0; c < edgeCols; c++) if (inside[colA[c]!] !== inside[colB[c]!]) cols.push(c);
-    rows.add(cols, cols.map(() => 1), 1, Infinity);
+    // Checked on the point: the tree's weight is a flow value, the subtree's cut may be larger.
+    if (cols.reduce((sum, c) => sum + values[c]!, 0) >= 1 - EPS) continue;
+    rows.add(cols, cols.map(() => 1), 1, Infinity, key);
   }
 }
 

@@ -126,8 +126,9 @@ export function buildRppProgram(inst: RppInstance): RppProgram {
   return { program, d, colA: Int32Array.from(a), colB: Int32Array.from(b), colCost, edgeCols, travelCols, requiredCol, endCol, closing, odd: parityConst };
 }
 
-/** Accumulates sparse rows. */
+/** Accumulates sparse rows; a row with a key is added once per builder (cut separators find some sets twice). */
 export class RowBuilder {
+  private readonly keys = new Set<string>();
   private lower: number[] = [];
   private upper: number[] = [];
   private starts: number[] = [0];
@@ -138,7 +139,16 @@ export class RowBuilder {
     return this.lower.length;
   }
 
-  add(cols: readonly number[], coefs: readonly number[], lower: number, upper: number): void {
+  /** Whether a row with this key is already here. */
+  has(key: string): boolean {
+    return this.keys.has(key);
+  }
+
+  add(cols: readonly number[], coefs: readonly number[], lower: number, upper: number, key?: string): void {
+    if (key !== undefined) {
+      if (this.keys.has(key)) return;
+      this.keys.add(key);
+    }
     this.indices.push(...cols);
     this.values.push(...coefs);
     this.starts.push(this.indices.length);

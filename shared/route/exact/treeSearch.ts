@@ -1,6 +1,6 @@
 import type { Budget } from './budget.ts';
 import type { ConnectivityCuts } from './connectivityCuts.ts';
-import type { MipSession, MipSolver, SolveOutcome } from './mipSolver.ts';
+import type { MipSession, MipSolver, SolveOutcome, SparseRows } from './mipSolver.ts';
 import { separateOddCuts } from './oddCuts.ts';
 import { objectiveOf, type SearchResult } from './branchAndCut.ts';
 import { RowBuilder, type RppProgram } from './rppProgram.ts';
@@ -9,7 +9,10 @@ const INTEGRAL = 1e-6;
 /** Relative tolerance under which a bound counts as meeting a route's cost (the solver's own is about 1e-9). */
 const TIE = 1e-9;
 const MAX_ROUNDS_AT_ROOT = 200;
-const MAX_ROUNDS_AT_NODE = 20;
+const MAX_ROUNDS_AT_NODE = Number(process.env.NODE_ROUNDS ?? 20);
+const MAX_AGE = Number(process.env.MAX_AGE ?? 0);
+/** A cut row this far above its right-hand side is slack. */
+const SLACK = 1e-6;
 
 /** A node of the search tree: the branching bounds on its path from the root, and its parent's bound. */
 interface TreeNode {
@@ -48,7 +51,10 @@ export function searchTree(
   const session: MipSession = solver.open(program);
   const rootLower = Float64Array.from(program.lower);
   const rootUpper = Float64Array.from(program.upper);
-  const oddSeen = new Set<string>();
+  // Cut rows follow the program's own rows; each has an age: how many solves in a row it has not been tight.
+  const baseRows = program.rows.lower.length;
+  const cutLower: number[] = [];
+  const cutAge: number[] = [];
   let best: Float64Array | null = null;
   let bestCost = upperCost;
   let lpBound = -Infinity;
@@ -61,17 +67,43 @@ export function searchTree(
     const out = session.solveRelaxation(left());
     lpSolves++;
     budget.charge(out.seconds);
+    if (out.rowValues) {
+      for (let i = 0; i < cutAge.length; i++) cutAge[i] = out.rowValues[baseRows + i]! > cutLower[i]! + SLACK ? cutAge[i]! + 1 : 0;
+    }
     return out;
   };
   const separate = (values: Float64Array): boolean => {
     const builder = new RowBuilder();
     if (cuts.needed) cuts.separateFractional(values, builder);
-    separateOddCuts(rpp, values, oddSeen, builder);
+    separateOddCuts(rpp, values, builder);
     if (builder.size === 0) return false;
-    const rows = builder.build();
+    addCuts(builder.build());
+    return true;
+  };
+  const addCuts = (rows: SparseRows): void => {
     cutCount += rows.lower.length;
     session.addRows(rows);
-    return true;
+    for (const lo of rows.lower) {
+      cutLower.push(lo);
+      cutAge.push(0);
+    }
+  };
+  /** Drops cuts that have stayed slack for a while (their slack is basic, so the basis survives): smaller programs solve faster. */
+  const purge = (): void => {
+    const drop: number[] = [];
+    for (let i = 0; i < cutAge.length; i++) if (cutAge[i]! >= MAX_AGE) drop.push(i);
+    if (drop.length === 0) return;
+    session.deleteRows(Int32Array.from(drop, (i) => baseRows + i));
+    let w = 0;
+    for (let i = 0, d = 0; i < cutAge.length; i++) {
+      if (d < drop.length && drop[d] === i) {
+        d++;
+        continue;
+      }
+      cutAge[w] = cutAge[i]!;
+      cutLower[w++] = cutLower[i]!;
+    }
+    cutAge.length = cutLower.length = w;
   };
 
   type Outcome = { kind: 'pruned' } | { kind: 'stopped' } | { kind: 'solved'; lp: SolveOutcome; bound: number };
@@ -90,8 +122,7 @@ export function searchTree(
         if (isIntegral(lp.values)) {
           const rows = cuts.separateInteger(lp.values);
           if (rows !== null && rows.lower.length > 0) {
-            cutCount += rows.lower.length;
-            session.addRows(rows);
+            addCuts(rows);
             continue;
           }
         }
@@ -111,7 +142,7 @@ export function searchTree(
     for (let c = 0; c < rpp.edgeCols; c++) {
       const f = values[c]! - Math.floor(values[c]!);
       if (f <= INTEGRAL || f >= 1 - INTEGRAL) continue;
-      const s = Math.min(f, 1 - f) * (1 + 1e-3 * rpp.colCost[c]! / (rpp.colCost[c]! + 1));
+      const s = process.env.SCORE === "cost" ? Math.min(f, 1 - f) * (rpp.colCost[c]! + 1) : process.env.SCORE === "half" ? (Math.min(f, 1 - f) > 0.4 ? 1 : Math.min(f, 1 - f)) * (rpp.colCost[c]! + 1) : Math.min(f, 1 - f) * (1 + 1e-3 * rpp.colCost[c]! / (rpp.colCost[c]! + 1));
       if (s > score) {
         score = s;
         pick = c;
@@ -165,6 +196,7 @@ export function searchTree(
       ] as const) {
         const child: TreeNode = { changes: [...node.changes, [col, lo, hi]], bound: node.bound, depth: node.depth + 1 };
         if (!applyBounds(child)) continue;
+        if (MAX_AGE > 0) purge();
         const out = relax(MAX_ROUNDS_AT_NODE);
         nodes++;
         if (out.kind === 'stopped') {
@@ -180,7 +212,7 @@ export function searchTree(
     const openBound = open.minBound();
     const bound = Math.min(bestCost, Math.max(lpBound, openBound));
     const proven = !stoppedEarly && open.size === 0;
-    if (process.env.TREE_DEBUG) console.log(`tree: nodes=${nodes} lps=${lpSolves} cuts=${cutCount} best=${bestCost} lp=${lpBound}`);
+    if (process.env.TREE_DEBUG) console.log(`tree: rows=${cutAge.length} nodes=${nodes} lps=${lpSolves} cuts=${cutCount} best=${bestCost} lp=${lpBound}`);
     return {
       values: best,
       objective: best ? bestCost : upperCost,

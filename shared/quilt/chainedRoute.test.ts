@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { designSchema, type Design } from '../design/design.schema.ts';
-import type { MipSolver } from '../route/exact/mipSolver.ts';
+import type { LpSolver } from '../route/exact/lpSolver.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
 import type { LinkMetric } from './chain.ts';
@@ -10,7 +10,7 @@ import { blockRect, finishedSize } from './finishedSize.ts';
 import { quiltSchema, type Quilt } from './quilt.schema.ts';
 import { planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { designSchema, type Design } from '../design/design.schema.ts';
-import type { MipSolver } from '../route/exact/mipSolver.ts';
+import type { LpSolver } from '../route/exact/lpSolver.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
 import { placeCornerCosts, placedSize, placePoint } from './cornerMap.ts';
@@ -11,7 +11,7 @@ import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import { planRoute } from '../route/planRoute.ts';
 import { err, ok } from '../result.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

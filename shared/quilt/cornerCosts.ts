@@ -4,7 +4,7 @@ import type { Point } from '../geometry/point.ts';
 import type { DesignProblem } from '../graph/designProblem.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import { ok, type Result } from '../result.ts';
-import type { MipSolver } from '../route/exact/mipSolver.ts';
+import type { LpSolver } from '../route/exact/lpSolver.ts';
 import { DEFAULT_PLAN_SETTINGS, type PlanSettings } from '../route/planSettings.ts';
 import { planRoute } from '../route/planRoute.ts';
 import type { TravelWeights } from '../route/travelGraph.ts';
@@ -50,7 +50,7 @@ export const designCornerCostsSchema = z
   .refine((t) => t.pairs.every((row, a) => row.every((p, b) => p.cost === t.pairs[b]?.[a]?.cost)), { message: 'corner-pair costs must be the same both ways', path: ['pairs'] });
 
 export interface CornerCostOptions {
-  readonly solver?: MipSolver | null;
+  readonly solver?: LpSolver | null;
   readonly settings?: PlanSettings;
   readonly weights?: TravelWeights;
   readonly clock?: () => number;

@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { designSchema, type Design } from '../design/design.schema.ts';
-import type { MipSolver } from '../route/exact/mipSolver.ts';
+import type { LpSolver } from '../route/exact/lpSolver.ts';
 import { loadHighsSolver } from '../route/exact/highsSolver.ts';
 import { archRowsDesign, patchFillDesign } from '../testing/multiPieceDesigns.ts';
 import { chainBlocksOf, linkLength, planChain } from './chain.ts';
@@ -11,7 +11,7 @@ import { blockCorners } from './finishedSize.ts';
 import { quiltSchema, type Quilt } from './quilt.schema.ts';
 import { checkQuiltDesigns, finishQuiltRoute, fits, pairsToProve, planQuiltRoute, type QuiltDesign } from './quiltRoute.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

@@ -1,6 +1,6 @@
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
 import type { Budget } from './exact/budget.ts';
-import type { MipSolver } from './exact/mipSolver.ts';
+import type { LpSolver } from './exact/lpSolver.ts';
 import { planGroupExact, type ExactStats } from './exact/planGroupExact.ts';
 import type { PlannerStats } from './minTJoin.ts';
 import { planGroup, type GroupPlan } from './planGroup.ts';
@@ -37,7 +37,7 @@ export class GroupPlans {
     private readonly groups: readonly GroupSetting[],
     private readonly places: readonly EndPlace[],
     private readonly costs: EndCosts,
-    private readonly exact: { readonly solver: MipSolver; readonly budget: Budget; readonly always: boolean } | null,
+    private readonly exact: { readonly solver: LpSolver; readonly budget: Budget; readonly always: boolean } | null,
     private readonly stats: PlannerStats,
   ) {}
 

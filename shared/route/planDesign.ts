@@ -4,7 +4,7 @@ import type { DesignProblem } from '../graph/designProblem.ts';
 import { buildPlanarGraph } from '../graph/planarGraph.ts';
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
 import { ok, type Result } from '../result.ts';
-import type { MipSolver } from './exact/mipSolver.ts';
+import type { LpSolver } from './exact/lpSolver.ts';
 import { DEFAULT_PLAN_SETTINGS, type PlanSettings } from './planSettings.ts';
 import { planRoute, type RoutePlan } from './planRoute.ts';
 import { computeThreadBudget, type ThreadBudget } from './threadBudget.ts';
@@ -23,7 +23,7 @@ export interface DesignPlanOptions {
   readonly weights?: TravelWeights;
   readonly clock?: () => number;
   /** The exact search's solver; without one, multi-piece designs get the heuristic's route and bound. */
-  readonly solver?: MipSolver | null;
+  readonly solver?: LpSolver | null;
   readonly settings?: PlanSettings;
   /** Also compute the stops-vs-travel table. */
   readonly stopsTable?: boolean;

@@ -2,7 +2,7 @@ import type { Point } from '../geometry/point.ts';
 import type { PlanarGraph } from '../graph/planarGraph.types.ts';
 import { allocateStops } from './allocateStops.ts';
 import { Budget } from './exact/budget.ts';
-import type { MipSolver } from './exact/mipSolver.ts';
+import type { LpSolver } from './exact/lpSolver.ts';
 import type { ExactStats } from './exact/planGroupExact.ts';
 import { GroupPlans, type GroupSetting, type PlannedGroup } from './groupPlans.ts';
 import type { PlannerStats } from './minTJoin.ts';
@@ -34,7 +34,7 @@ export interface PlanOptions {
    * The exact planner (solver and time budget in ms); without it the heuristic's route and bound stand. `always`
    * runs the exact search even where the heuristic proved its route (to compare the two).
    */
-  readonly exact?: { readonly solver: MipSolver; readonly timeBudgetMs: number; readonly always?: boolean };
+  readonly exact?: { readonly solver: LpSolver; readonly timeBudgetMs: number; readonly always?: boolean };
   /** Also give the stops-vs-travel table for 0…MAX_EXTRA_STOPS extra stops. */
   readonly stopsTable?: boolean;
 }
@@ -195,7 +195,7 @@ function sumStats(picked: readonly PlannedGroup[]): ExactStats | null {
     reducedEdges: sum((s) => s.reducedEdges),
     cutRounds: sum((s) => s.cutRounds),
     cuts: sum((s) => s.cuts),
-    integerSolves: sum((s) => s.integerSolves),
+    nodes: sum((s) => s.nodes),
     lpBound: sum((s) => s.lpBound),
     objective: sum((s) => s.objective),
     proven: ran.every((s) => s.proven),

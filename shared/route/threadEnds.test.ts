@@ -1,13 +1,13 @@
 // Hidden thread ends: where a route must start or stop, prefer a seam or the block edge (the binding covers it) to
 // the open middle of a patch. The preference is common practice, no source; the lengths below are worked by hand.
 import { beforeAll, describe, expect, it } from 'vitest';
-import type { MipSolver } from './exact/mipSolver.ts';
+import type { LpSolver } from './exact/lpSolver.ts';
 import { loadHighsSolver } from './exact/highsSolver.ts';
 import { planRoute, type PlanOptions } from './planRoute.ts';
 import { graphFromSegments } from './testGraphs.ts';
 import { findEndPlaces } from './threadEnds.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

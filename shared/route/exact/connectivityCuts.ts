@@ -1,4 +1,4 @@
-import type { SparseRows } from './mipSolver.ts';
+import type { SparseRows } from './lpSolver.ts';
 import type { ReducedGraph } from './reduceGraph.ts';
 import { RowBuilder, type RppProgram } from './rppProgram.ts';
 import { UnionFind } from '../unionFind.ts';
@@ -45,9 +45,12 @@ export class ConnectivityCuts {
   }
 
   /**
-   * Cuts violated by a fractional point, from a Gomory–Hu tree of the support graph (capacities = column values,
-   * closing edge 1; Gusfield's n − 1 max-flows): every violated cut between two targets shows among the tree's
-   * fundamental cuts, and each is checked against its parity-strengthened right-hand side (see addCut).
+   * Cuts violated by a fractional point, from a cheap tree of the support graph (capacities = column values,
+   * closing edge 1): Gusfield's n − 1 max-flows without his re-hanging step, each flow stopped at 3. Its subtrees are
+   * candidate sets, each checked on the point against its parity-strengthened right-hand side (see addCut). This may
+   * miss a violated cut, which only weakens a bound, never the answer: every integer point is checked exactly
+   * (separateInteger). Measured against the exact Gomory–Hu tree (maxFlow.ts, as the parity cuts use): the exact tree
+   * lifts the bounds a little but adds many more rows, and the search took about 20 % longer over the hard designs.
    */
   separateFractional(values: Float64Array, rows: RowBuilder): void {
     const n = this.nodeCount;
@@ -74,8 +77,8 @@ export class ConnectivityCuts {
       let inside = 0;
       for (const t of this.targets) inside += side[t]!;
       if (inside === 0 || inside === this.targets.length) continue;
-      // The flow counts the closing edge too; the cut's right-hand side is for the columns alone. The tree's cut is
-      // checked on the point itself: the value is the cut's own, not the flow's, so only violated cuts are added.
+      // The flow counts the closing edge too; the cut's right-hand side is for the columns alone. The subtree's cut
+      // is checked on the point itself (addCut): its value may be above the flow's, and only violated cuts are added.
       if (weight[v]! - this.closingAcross(side) < this.rhsOf(side) - EPS) this.addCut(rows, side, values);
     }
   }

@@ -1,4 +1,4 @@
-import { MaxFlow } from './maxFlow.ts';
+import { gomoryHuTree, MaxFlow, sideOf } from './maxFlow.ts';
 import type { RowBuilder, RppProgram } from './rppProgram.ts';
 
 const EPS = 1e-6;
@@ -17,19 +17,10 @@ export function separateOddCuts(rpp: RppProgram, values: Float64Array, rows: Row
   if (!odd.includes(1)) return;
   const flow = new MaxFlow(n);
   for (let c = 0; c < edgeCols; c++) if (values[c]! > EPS) flow.addEdge(colA[c]!, colB[c]!, values[c]!);
-  // Gusfield: a Gomory–Hu tree rooted at 0, parent[v] < v, weight[v] = min cut between v and parent[v].
-  const parent = new Int32Array(n);
-  const weight = new Float64Array(n);
-  for (let s = 1; s < n; s++) {
-    weight[s] = flow.run(s, parent[s]!, Infinity);
-    const side = flow.sourceSide();
-    for (let j = s + 1; j < n; j++) if (parent[j] === parent[s] && side[j]) parent[j] = s;
-  }
-  const children: number[][] = Array.from({ length: n }, () => []);
-  for (let v = 1; v < n; v++) children[parent[v]!]!.push(v);
+  const { parent, weight } = gomoryHuTree(flow, n, Infinity);
   for (let v = 1; v < n; v++) {
     if (weight[v]! >= 1 - EPS) continue;
-    const inside = subtree(children, v, n);
+    const inside = sideOf(parent, v);
     let oddCount = 0;
     for (let u = 0; u < n; u++) if (inside[u]) oddCount += odd[u]!;
     if (oddCount % 2 === 0) continue;
@@ -43,15 +34,3 @@ export function separateOddCuts(rpp: RppProgram, values: Float64Array, rows: Row
     rows.add(cols, cols.map(() => 1), 1, Infinity, key);
   }
 }
-
-function subtree(children: readonly number[][], root: number, n: number): Uint8Array {
-  const inside = new Uint8Array(n);
-  const stack = [root];
-  while (stack.length > 0) {
-    const v = stack.pop()!;
-    inside[v] = 1;
-    stack.push(...children[v]!);
-  }
-  return inside;
-}
-

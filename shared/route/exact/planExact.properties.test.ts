@@ -7,9 +7,9 @@ import { buildPlanarGraph } from '../../graph/planarGraph.ts';
 import type { PlanarGraph } from '../../graph/planarGraph.types.ts';
 import { planRoute, type PlanOptions, type RoutePlan } from '../planRoute.ts';
 import { loadHighsSolver } from './highsSolver.ts';
-import type { MipSolver } from './mipSolver.ts';
+import type { LpSolver } from './lpSolver.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

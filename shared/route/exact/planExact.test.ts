@@ -7,9 +7,9 @@ import { archRowsDesign } from '../../testing/multiPieceDesigns.ts';
 import { buildPlanarGraph } from '../../graph/planarGraph.ts';
 import { graphFromEdgeList, graphFromSegments } from '../testGraphs.ts';
 import { loadHighsSolver } from './highsSolver.ts';
-import type { MipSolver } from './mipSolver.ts';
+import type { LpSolver } from './lpSolver.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

@@ -5,10 +5,9 @@ import type { RouteGroup } from '../routeGroups.ts';
 import { endCostAt, solverEndCostAt } from '../threadEnds.ts';
 import type { TravelGraph } from '../travelGraph.ts';
 import { searchRoute, type SearchResult } from './branchAndCut.ts';
-import { searchTree } from './treeSearch.ts';
 import type { Budget } from './budget.ts';
 import { ConnectivityCuts } from './connectivityCuts.ts';
-import type { MipSolver } from './mipSolver.ts';
+import type { LpSolver } from './lpSolver.ts';
 import { reduceGraph } from './reduceGraph.ts';
 import { buildRppProgram, type RppProgram } from './rppProgram.ts';
 
@@ -19,7 +18,8 @@ export interface ExactStats {
   readonly reducedEdges: number;
   readonly cutRounds: number;
   readonly cuts: number;
-  readonly integerSolves: number;
+  /** Nodes of the search tree solved (the root is one). */
+  readonly nodes: number;
   /** Linear relaxation bound with the cuts found (integer cost units). */
   readonly lpBound: number;
   /** The search's own best objective (cost units; Infinity when it found none) and whether it proved it least. */
@@ -48,7 +48,7 @@ export function planGroupExact(
   end: number,
   ends: GroupEnds,
   upper: GroupPlan,
-  solver: MipSolver,
+  solver: LpSolver,
   budget: Budget,
   limitMs: number,
 ): ExactGroupPlan {
@@ -68,16 +68,18 @@ export function planGroupExact(
   // A solver objective exceeds the cost-unit objective (times quantum) by at most 3·solverTie per thread end.
   const freeEnds = (start < 0 ? 1 : 0) + (end < 0 ? 1 : 0) + 2 * ends.extraStops;
   const slack = 3 * ends.costs.solverTie * freeEnds;
-  const found: SearchResult = process.env.OLD_SEARCH
-    ? searchRoute(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum)
-    : searchTree(solver, rpp, cuts, budget, limitMs, (b) => (b - slack) / travel.quantum, (c) => c * travel.quantum + slack, upperCost);
+  const found: SearchResult = searchRoute(solver, rpp, cuts, budget, limitMs, {
+    toCost: (b) => (b - slack) / travel.quantum,
+    toSolver: (c) => c * travel.quantum + slack,
+    upperCost,
+  });
   const stats: ExactStats = {
     pieces: reduced.pieceCount,
     keptVertices: reduced.kept.length,
     reducedEdges: reduced.travel.length + reduced.required.length,
     cutRounds: found.cutRounds,
     cuts: found.cuts,
-    integerSolves: found.integerSolves,
+    nodes: found.nodes,
     lpBound: found.lpBound,
     objective: found.objective,
     proven: found.proven,

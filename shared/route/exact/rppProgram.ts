@@ -1,4 +1,4 @@
-import type { LinearProgram, SparseRows } from './mipSolver.ts';
+import type { LinearProgram, SparseRows } from './lpSolver.ts';
 import type { ReducedGraph } from './reduceGraph.ts';
 
 /** One travel group's rural postman instance over its reduced graph. Costs are integers in TravelGraph units. */
@@ -17,7 +17,7 @@ export interface RppInstance {
 }
 
 /**
- * The integer program (Ghiani & Laporte, Math. Programming 87 (2000) 467–481, with the free ends of
+ * The integer program (every column a whole number; branchAndCut.ts branches to make them so) (Ghiani & Laporte, Math. Programming 87 (2000) 467–481, with the free ends of
  * docs/engine.md §3.1 through a dummy vertex D):
  *   x_e ∈ {0,1,2} travel count on each reduced travel edge (≤ 1 inside one piece), x_r ∈ {0,1} extra traversal of
  *   each required edge,
@@ -120,7 +120,6 @@ export function buildRppProgram(inst: RppInstance): RppProgram {
     cost: Float64Array.from(solverCost),
     lower: new Float64Array(n),
     upper: Float64Array.from(upper),
-    integer: new Uint8Array(n).fill(1),
     rows: rows.build(),
   };
   return { program, d, colA: Int32Array.from(a), colB: Int32Array.from(b), colCost, edgeCols, travelCols, requiredCol, endCol, closing, odd: parityConst };

@@ -1,14 +1,14 @@
 import type { Point } from '../../geometry/point.ts';
 import type { GraphEdge, LineKind, PlanarGraph } from '../../graph/planarGraph.types.ts';
 import { planRoute } from '../planRoute.ts';
-import type { MipSolver } from './mipSolver.ts';
+import type { LpSolver } from './lpSolver.ts';
 
 /**
  * Runs the exact search a few times on a small block (three lines across it, joined only by edge travel) so that
  * WebAssembly's optimising compiler has the solver's hot code ready: the benchmark measures the planner in that
  * steady state. (The engine workers skip it: the compiling then goes on in the background and slows the first task.)
  */
-export function warmUpSolver(solver: MipSolver, rounds = 4): void {
+export function warmUpSolver(solver: LpSolver, rounds = 4): void {
   const graph = warmUpGraph();
   for (let i = 0; i < rounds; i++) {
     planRoute(graph, { exact: { solver, timeBudgetMs: 1_000, always: true }, extraStops: i % 2 });

@@ -4,7 +4,7 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@db/schema.ts';
 import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
-import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import type { LpSolver } from '@shared/route/exact/lpSolver.ts';
 import { planDesign } from '@shared/route/planDesign.ts';
 import { buildDesignThumbnailSvg } from '@shared/export/designSvg.ts';
 import { findLiveDesignIdByTitle } from '@server/designs/design.repository.ts';
@@ -13,7 +13,7 @@ import { strokePathOf, summaryOf } from '@shared/route/routeAnswers.ts';
 import type { GuildDrawing } from './guildDrawings.ts';
 
 /** The exact search's solver, loaded once per seed run (as each engine worker loads its own). */
-let solver: Promise<MipSolver> | undefined;
+let solver: Promise<LpSolver> | undefined;
 
 /** The design's id and whether this run created it. */
 export async function seedDesign(db: Kysely<Database>, ownerId: string, d: GuildDrawing): Promise<{ id: string; added: boolean }> {

@@ -6,7 +6,7 @@ import type { Design } from '@shared/design/design.schema.ts';
 import { buildPlanarGraph } from '@shared/graph/planarGraph.ts';
 import type { PlanarGraph } from '@shared/graph/planarGraph.types.ts';
 import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
-import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import type { LpSolver } from '@shared/route/exact/lpSolver.ts';
 import { planRoute, type RoutePlan } from '@shared/route/planRoute.ts';
 
 // Independent reference: an exact rural postman model written straight on the planar graph (no reduction) and
@@ -17,7 +17,7 @@ const ORACLE = fileURLToPath(new URL('./rpp_cbc_oracle.py', import.meta.url));
 const DESIGNS = 36;
 const REL = 1e-6;
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

@@ -22,7 +22,7 @@ import { fillDesign, patchesInReadingOrder } from '@shared/motifs/fillDesign.ts'
 import { MOTIF_RANGES, rangeIn } from '@shared/motifs/motifRanges.ts';
 import { MOTIFS, motifParamsSchema, type MotifKind } from '@shared/motifs/motifs.ts';
 import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
-import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import type { LpSolver } from '@shared/route/exact/lpSolver.ts';
 import { planDesign, type DesignPlanOptions } from '@shared/route/planDesign.ts';
 import { buildCheckResult, buildOwnRouteResult, strokePathOf, summaryOf, summaryOfCheck, toPlanResult } from '@shared/route/routeAnswers.ts';
 import { archRowsDesign, END_CHOICES, patchFillDesign, squareInSquareDesign } from '@shared/testing/multiPieceDesigns.ts';
@@ -178,7 +178,7 @@ function checkOwnAnswers(design: Design): void {
 }
 
 describe('route contract: what the server builds, its clients read', () => {
-  let solver: MipSolver;
+  let solver: LpSolver;
   it('loads the exact search’s solver (the engine workers plan with it)', async () => {
     solver = await loadHighsSolver();
   });

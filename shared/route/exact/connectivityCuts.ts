@@ -110,9 +110,9 @@ export class ConnectivityCuts {
   }
 
   /**
-   * Adds x(δ(S)) + y(δ(S)) ≥ r for S = nodes marked in `side`, once per distinct S and builder (S and its complement
-   * are one cut). A cut already in the program is never violated by its solutions, so only new cuts come here. The route crosses S at least twice
-   * (closing edge included) and, by parity, x(δ(S)) + y(δ(S)) ≡ Σ_{v∈S} odd(v) (mod 2): so r is the least number
+   * Adds x(δ(S)) + y(δ(S)) ≥ r for S = nodes marked in `side`, once per builder (S and its complement are one cut),
+   * and with `values` only when that point violates it (a cut already in the program never is). The route crosses S
+   * at least twice (closing edge included) and, by parity, x(δ(S)) + y(δ(S)) ≡ Σ_{v∈S} odd(v) (mod 2): so r is the least number
    * of that parity that is at least 2 − c(S), i.e. 2 or 3 without the closing edge across S, 2 or 1 with it.
    */
   private addCut(rows: RowBuilder, side: Uint8Array, values?: Float64Array): void {

@@ -74,20 +74,20 @@ export class MaxFlow {
 /**
  * A Gomory–Hu cut tree by Gusfield's method (SIAM J. Comput. 19 (1990) 143–155): n − 1 maximum flows, no
  * contractions. `parent[v]` is v's neighbour towards node 0 and `weight[v]` the least cut between them; the nodes
- * left with v when the edge v–parent[v] is removed form a minimum cut between the two. `enough` caps each flow:
- * cuts at or above it are not needed exactly (the separators ask for cuts below 1 or 3 only).
+ * left with v when the edge v–parent[v] is removed (`sideOf`) form a minimum cut between the two. Every flow runs to
+ * the end: the re-hanging step needs each cut to be a minimum one.
  */
-export function gomoryHuTree(flow: MaxFlow, n: number, enough: number): { parent: Int32Array; weight: Float64Array } {
+export function gomoryHuTree(flow: MaxFlow, n: number): { parent: Int32Array; weight: Float64Array } {
   const parent = new Int32Array(n);
   const weight = new Float64Array(n);
   for (let s = 1; s < n; s++) {
     const t = parent[s]!;
-    const value = flow.run(s, t, enough);
+    const value = flow.run(s, t, Infinity);
     weight[s] = value;
-    if (value >= enough) continue;
     const side = flow.sourceSide();
     for (let i = 0; i < n; i++) if (i !== s && side[i] && parent[i] === t) parent[i] = s;
-    if (side[parent[t]!] && t !== 0) {
+    // Re-hanging: when t's own parent lies on s's side, s takes t's place in the tree.
+    if (t !== 0 && side[parent[t]!]) {
       parent[s] = parent[t]!;
       parent[t] = s;
       weight[s] = weight[t]!;
@@ -97,7 +97,7 @@ export function gomoryHuTree(flow: MaxFlow, n: number, enough: number): { parent
   return { parent, weight };
 }
 
-/** The nodes on v's side of the tree edge v–parent[v]. */
+/** The nodes on v's side of the tree edge v–parent[v] (node 0 is the root). */
 export function sideOf(parent: Int32Array, v: number): Uint8Array {
   const n = parent.length;
   const children: number[][] = Array.from({ length: n }, () => []);
@@ -107,7 +107,7 @@ export function sideOf(parent: Int32Array, v: number): Uint8Array {
   while (stack.length > 0) {
     const u = stack.pop()!;
     inside[u] = 1;
-    for (const w of children[u]!) if (!inside[w]) stack.push(w);
+    stack.push(...children[u]!);
   }
   return inside;
 }

@@ -17,7 +17,7 @@ export function separateOddCuts(rpp: RppProgram, values: Float64Array, rows: Row
   if (!odd.includes(1)) return;
   const flow = new MaxFlow(n);
   for (let c = 0; c < edgeCols; c++) if (values[c]! > EPS) flow.addEdge(colA[c]!, colB[c]!, values[c]!);
-  const { parent, weight } = gomoryHuTree(flow, n, Infinity);
+  const { parent, weight } = gomoryHuTree(flow, n);
   for (let v = 1; v < n; v++) {
     if (weight[v]! >= 1 - EPS) continue;
     const inside = sideOf(parent, v);

@@ -1,6 +1,6 @@
 // The engine work a worker does for one task: calls into shared/ and cuts the answer to the route contract
 // (shared/route/routeAnswers.ts: no planar graph, no per-step timings). Runs inside the worker thread; also callable directly.
-import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import type { LpSolver } from '@shared/route/exact/lpSolver.ts';
 import { planDesign, type DesignPlanOptions } from '@shared/route/planDesign.ts';
 import { buildCheckResult, buildOwnRouteResult, summaryOf, toPlanResult } from '@shared/route/routeAnswers.ts';
 import { assertNever } from '@shared/assertNever.ts';
@@ -16,7 +16,7 @@ function designOf(payload: DesignPayload): Design {
 
 /** What a worker holds for every task: the loaded solver for the exact search and a clock for its time budget. */
 export interface EngineContext {
-  readonly solver: MipSolver | null;
+  readonly solver: LpSolver | null;
   readonly clock: () => number;
 }
 

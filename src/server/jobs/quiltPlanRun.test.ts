@@ -8,7 +8,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Design } from '@shared/design/design.schema.ts';
 import { loadHighsSolver } from '@shared/route/exact/highsSolver.ts';
-import type { MipSolver } from '@shared/route/exact/mipSolver.ts';
+import type { LpSolver } from '@shared/route/exact/lpSolver.ts';
 import { CornerCostCache } from '@shared/quilt/cornerCostCache.ts';
 import { placeCornerCosts, placedSize, placePoint, type Corner } from '@shared/quilt/cornerMap.ts';
 import { buildCornerCosts, costTableOf, designCornerCostsSchema, planCornerPair, type DesignCornerCosts } from '@shared/quilt/cornerCosts.ts';
@@ -18,7 +18,7 @@ import { makeQuilt } from '@shared/quilt/testQuilts.ts';
 import { archRowsDesign, patchFillDesign, squareInSquareDesign } from '@shared/testing/multiPieceDesigns.ts';
 import { planFromStoredTables, runQuiltPlan, type CornerCostStore, type PairRunner, type RunDesign } from './quiltPlanRun.ts';
 
-let solver: MipSolver;
+let solver: LpSolver;
 beforeAll(async () => {
   solver = await loadHighsSolver();
 });

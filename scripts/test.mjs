@@ -140,8 +140,9 @@ try {
       totals.passed += report.numPassedTests;
       totals.failed += report.numFailedTests;
       totals.skipped += report.numPendingTests + report.numTodoTests;
-      // A file that fails before its tests run (a beforeAll) counts no failed test: report it too.
-      totals.failedFiles += report.numFailedTestSuites;
+      // A file that fails before its tests run (a beforeAll) counts no failed test: report it too. Files, not
+      // numFailedTestSuites: that one counts every failing describe block as well.
+      totals.failedFiles += report.testResults.filter((file) => file.status === 'failed').length;
     } else {
       exitCode = 1;
     }

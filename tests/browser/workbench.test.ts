@@ -5,7 +5,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { fitBlockViewport, toScreen } from '@components/editor/viewport.ts';
 import { DEFAULT_PASSWORD, uniqueEmail } from '../helpers/accounts.ts';
-import { launchBrowser, screenshot, type TestBrowser } from '../helpers/browser.ts';
+import { launchBrowser, screenshot, waitForIslands, type TestBrowser } from '../helpers/browser.ts';
 import { finishSignUpFromMail } from '../helpers/signUpFlow.ts';
 
 let browser: TestBrowser;
@@ -68,6 +68,8 @@ describe('block workbench', () => {
 
     await page.getByRole('link', { name: 'Start your first design' }).click();
     await page.waitForURL('**/designs/new');
+    // Typing before the form island hydrates can be lost (the machine was busy in one CI run and no design was made).
+    await waitForIslands(page);
     await page.getByLabel('Title').fill('Heron Bend nine-patch');
     expect(await page.getByLabel('Finished size (in)').inputValue()).toBe('12');
     await page.getByText('Nine-patch', { exact: true }).click();

@@ -20,9 +20,9 @@ export interface ExactStats {
   readonly cuts: number;
   /** Nodes of the search tree solved (the root is one). */
   readonly nodes: number;
-  /** Linear relaxation bound with the cuts found (integer cost units). */
+  /** The root's linear relaxation bound with the cuts found there (integer cost units; −Infinity if never solved). */
   readonly lpBound: number;
-  /** The search's own best objective (cost units; Infinity when it found none) and whether it proved it least. */
+  /** The best objective known (cost units: the search's route, else the heuristic's) and whether it was proven least. */
   readonly objective: number;
   readonly proven: boolean;
   /** Time spent (budget ms: wall time with a clock, else solver time). */
@@ -85,14 +85,13 @@ export function planGroupExact(
     proven: found.proven,
     ms: budget.spentMs() - t0,
   };
+  // A relaxation bound above a route in hand would mean a broken model (the LP solver's tolerance is 1e-7 design units).
+  if (found.lpBound > upperCost * (1 + 1e-9) + 1e-7 / travel.quantum) {
+    throw new Error(`route/exact/planGroupExact: LP bound ${found.lpBound} above a known route ${upperCost}`);
+  }
   const lowerBound = Math.max(upper.lowerBound, Math.min(found.bound, upperCost));
-  if (found.values === null || found.objective > upperCost || (found.objective === upperCost && !found.proven)) {
-    // The heuristic's route stands; the search may still have proven it optimal. The solver proves its optimum up to
-    // its absolute gap (1e-9 design units) and weighs thread ends by solverTie, so its optimum may sit that much above.
-    const tolerance = (slack + 1e-9) / travel.quantum + 1e-9 * upperCost;
-    if (found.proven && found.objective > upperCost + tolerance) {
-      throw new Error(`route/exact/planGroupExact: proven optimum ${found.objective} above a known route ${upperCost}`);
-    }
+  if (found.values === null) {
+    // No route beat the heuristic's; the search may still have proven it least.
     return { plan: { ...upper, lowerBound: found.proven ? upperCost : lowerBound }, stats };
   }
   const plan = expand(graph, group, rpp, reduced, found.values, start, end);
